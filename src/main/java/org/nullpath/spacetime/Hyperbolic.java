@@ -1,0 +1,153 @@
+package org.nullpath.spacetime;
+
+import org.hipparchus.util.FastMath;
+import org.nullpath.units.Constants;
+
+/**
+ * Numerically stable pieces of hyperbolic motion (constant proper acceleration along a line).
+ *
+ * <p>Everything here is an <em>offset</em> from a reference state with rapidity {@code eta}: the
+ * product forms of Rindler (2006), e.g. {@code t - t0 = (2c/a) cosh(eta0 + h) sinh(h)}, stay exact as
+ * {@code a u / c -> 0} where the textbook differences {@code (c/a)(sinh eta - sinh eta0)} cancel.
+ * Null-coordinate offsets ({@code U = c t - s}, {@code V = c t + s}) use {@code expm1}/{@code log1p}.
+ * A zero acceleration is a coast and is handled exactly. Accuracy: a few ulps relative for every
+ * finite input, rapidities up to several hundred.
+ */
+public final class Hyperbolic {
+    private static final double C = Constants.C;
+    private static final double C2 = Constants.C2;
+
+    private Hyperbolic() {
+    }
+
+    /** Mission-time offset after proper time {@code du} from rapidity {@code eta} at acceleration {@code a}. */
+    public static double timeOffset(double eta, double a, double du) {
+        if (a == 0 || du == 0) {
+            return FastMath.cosh(eta) * du;
+        }
+        double h = a * du / (2 * C);
+        return du * sinhcLike(h) * FastMath.cosh(eta + h);
+    }
+
+    /** Distance offset along the line after proper time {@code du}. */
+    public static double distanceOffset(double eta, double a, double du) {
+        if (a == 0 || du == 0) {
+            return C * FastMath.sinh(eta) * du;
+        }
+        double h = a * du / (2 * C);
+        return C * du * sinhcLike(h) * FastMath.sinh(eta + h);
+    }
+
+    /** sinh(h)/h, exact near zero. */
+    private static double sinhcLike(double h) {
+        double ah = Math.abs(h);
+        if (ah < 1e-4) {
+            double h2 = h * h;
+            return 1 + h2 / 6 * (1 + h2 / 20);
+        }
+        return FastMath.sinh(h) / h;
+    }
+
+    /**
+     * Proper time needed to advance mission time by {@code dt} from rapidity {@code eta}:
+     * {@code sinh(eta1) = sinh(eta) + a dt / c}.
+     */
+    public static double properTimeForTime(double eta, double a, double dt) {
+        if (a == 0 || dt == 0) {
+            return dt / FastMath.cosh(eta);
+        }
+        double x = a * dt / C;
+        double b = FastMath.sinh(eta);
+        double dEta = deltaAsinh(b + x, b, x);
+        return C * dEta / a;
+    }
+
+    /**
+     * {@code asinh(A) - asinh(B)} given {@code A}, {@code B} and {@code A - B} (accurately known), without
+     * cancellation: for arguments of one sign it uses asinh((A-B)(A+B)/(A sqrt(1+B^2) + B sqrt(1+A^2))).
+     */
+    public static double deltaAsinh(double a, double b, double aMinusB) {
+        if (a * b >= 0) {
+            double ca = Math.hypot(1, a);
+            double cb = Math.hypot(1, b);
+            double sum = a + b;
+            if (sum == 0) {
+                return 0;
+            }
+            // (A-B)(A+B) / (A cb + B ca): for huge arguments divide through to avoid overflow
+            double denominator = a * cb + b * ca;
+            return FastMath.asinh(aMinusB * (sum / denominator));
+        }
+        return FastMath.asinh(a) - FastMath.asinh(b);
+    }
+
+    /** Proper time for a null offset of U (coast or burn); NaN beyond a horizon. */
+    public static double properTimeForU(double eta, double a, double dU) {
+        double base = dU * FastMath.exp(eta) / C;
+        double y = -a * base / C;
+        if (y <= -1) {
+            return Double.NaN;
+        }
+        return base * log1pOverX(y);
+    }
+
+    /** Proper time for a null offset of V (coast or burn); NaN beyond a horizon. */
+    public static double properTimeForV(double eta, double a, double dV) {
+        double base = dV * FastMath.exp(-eta) / C;
+        double y = a * base / C;
+        if (y <= -1) {
+            return Double.NaN;
+        }
+        return base * log1pOverX(y);
+    }
+
+    /** log1p(y)/y, exact near zero. */
+    private static double log1pOverX(double y) {
+        if (Math.abs(y) < 1e-8) {
+            return 1 - y / 2 + y * y / 3;
+        }
+        return FastMath.log1p(y) / y;
+    }
+
+    /** Offset of {@code U = ct - s} after proper time {@code du}. */
+    public static double uOffset(double eta, double a, double du) {
+        if (a == 0 || du == 0) {
+            return C * du * FastMath.exp(-eta);
+        }
+        double dEta = a * du / C;
+        return -C * du * FastMath.exp(-eta) * expm1OverX(-dEta);
+    }
+
+    /** Offset of {@code V = ct + s} after proper time {@code du}. */
+    public static double vOffset(double eta, double a, double du) {
+        if (a == 0 || du == 0) {
+            return C * du * FastMath.exp(eta);
+        }
+        double dEta = a * du / C;
+        return C * du * FastMath.exp(eta) * expm1OverX(dEta);
+    }
+
+    /** expm1(x)/x, exact near zero; note the sign convention: returns expm1(x)/x. */
+    private static double expm1OverX(double x) {
+        if (Math.abs(x) < 1e-8) {
+            return 1 + x / 2 + x * x / 6;
+        }
+        return FastMath.expm1(x) / x;
+    }
+
+    /** Rapidity of a speed given as a fraction of c, |beta| < 1. */
+    public static double rapidityOfBeta(double beta) {
+        return FastMath.atanh(beta);
+    }
+
+    /** atanh(b1) - atanh(b0) without cancellation: atanh((b1 - b0)/(1 - b1 b0)). */
+    public static double deltaRapidity(double beta1, double beta0) {
+        return FastMath.atanh((beta1 - beta0) / (1 - beta1 * beta0));
+    }
+
+    /** gamma - 1 = (gamma beta)^2 / (gamma + 1), exact for small rapidities. */
+    public static double gammaMinusOne(double eta) {
+        double sh = FastMath.sinh(eta);
+        return sh * sh / (FastMath.cosh(eta) + 1);
+    }
+}

@@ -1,0 +1,193 @@
+package org.nullpath.units;
+
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Locale;
+import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+
+/**
+ * Reads quantity texts of the form {@code NUMBER UNIT} ("1 g0", "-0.5 g0", "4.2 ly", "7.2 GHz") and
+ * converts them to SI doubles, checking that the unit is of the expected dimension.
+ *
+ * <p>Conversion multiplies the decimal number by the unit's factor once, so a value given in the SI
+ * unit itself is taken exactly as written. Decibel units (dBW, dBm, dBi, dB) are handled as such:
+ * powers in dBW or dBm become watts; gains (dBi) and ratios (dB) stay in decibels.
+ */
+public final class Units {
+    private Units() {
+    }
+
+    private record Unit(Dimension dimension, double factor, boolean decibel, double decibelOffset) {
+    }
+
+    private static final Map<String, Unit> UNITS;
+
+    static {
+        Map<String, Unit> u = new LinkedHashMap<>();
+        lin(u, Dimension.TIME, "s", 1.0);
+        lin(u, Dimension.TIME, "ms", 1e-3);
+        lin(u, Dimension.TIME, "us", 1e-6);
+        lin(u, Dimension.TIME, "ns", 1e-9);
+        lin(u, Dimension.TIME, "min", 60.0);
+        lin(u, Dimension.TIME, "h", 3600.0);
+        lin(u, Dimension.TIME, "d", Constants.DAY);
+        lin(u, Dimension.TIME, "yr", Constants.JULIAN_YEAR);
+        lin(u, Dimension.LENGTH, "m", 1.0);
+        lin(u, Dimension.LENGTH, "km", 1e3);
+        lin(u, Dimension.LENGTH, "cm", 1e-2);
+        lin(u, Dimension.LENGTH, "mm", 1e-3);
+        lin(u, Dimension.LENGTH, "um", 1e-6);
+        lin(u, Dimension.LENGTH, "nm", 1e-9);
+        lin(u, Dimension.LENGTH, "au", Constants.AU);
+        lin(u, Dimension.LENGTH, "ly", Constants.LIGHT_YEAR);
+        lin(u, Dimension.LENGTH, "pc", Constants.PARSEC);
+        lin(u, Dimension.SPEED, "m/s", 1.0);
+        lin(u, Dimension.SPEED, "km/s", 1e3);
+        lin(u, Dimension.SPEED, "c", Constants.C);
+        lin(u, Dimension.ACCELERATION, "m/s^2", 1.0);
+        lin(u, Dimension.ACCELERATION, "g0", Constants.G0);
+        lin(u, Dimension.FREQUENCY, "Hz", 1.0);
+        lin(u, Dimension.FREQUENCY, "kHz", 1e3);
+        lin(u, Dimension.FREQUENCY, "MHz", 1e6);
+        lin(u, Dimension.FREQUENCY, "GHz", 1e9);
+        lin(u, Dimension.FREQUENCY, "THz", 1e12);
+        lin(u, Dimension.FREQUENCY_RATE, "Hz/s", 1.0);
+        lin(u, Dimension.FREQUENCY_RATE, "kHz/s", 1e3);
+        lin(u, Dimension.FREQUENCY_RATE, "MHz/s", 1e6);
+        lin(u, Dimension.POWER, "W", 1.0);
+        lin(u, Dimension.POWER, "mW", 1e-3);
+        lin(u, Dimension.POWER, "kW", 1e3);
+        lin(u, Dimension.POWER, "MW", 1e6);
+        lin(u, Dimension.POWER, "GW", 1e9);
+        u.put("dBW", new Unit(Dimension.POWER, 1.0, true, 0.0));
+        u.put("dBm", new Unit(Dimension.POWER, 1.0, true, -30.0));
+        u.put("dBi", new Unit(Dimension.GAIN, 1.0, false, 0.0));
+        u.put("dB", new Unit(Dimension.RATIO, 1.0, false, 0.0));
+        lin(u, Dimension.TEMPERATURE, "K", 1.0);
+        lin(u, Dimension.DATA_RATE, "bit/s", 1.0);
+        lin(u, Dimension.DATA_RATE, "kbit/s", 1e3);
+        lin(u, Dimension.DATA_RATE, "Mbit/s", 1e6);
+        lin(u, Dimension.DATA_RATE, "Gbit/s", 1e9);
+        lin(u, Dimension.ANGLE, "rad", 1.0);
+        lin(u, Dimension.ANGLE, "mrad", 1e-3);
+        lin(u, Dimension.ANGLE, "urad", 1e-6);
+        lin(u, Dimension.ANGLE, "deg", Math.PI / 180.0);
+        lin(u, Dimension.ANGLE, "arcsec", Math.PI / 648_000.0);
+        lin(u, Dimension.MASS, "kg", 1.0);
+        lin(u, Dimension.MASS, "g", 1e-3);
+        lin(u, Dimension.MASS, "t", 1e3);
+        lin(u, Dimension.FORCE, "N", 1.0);
+        lin(u, Dimension.FORCE, "kN", 1e3);
+        lin(u, Dimension.FORCE, "MN", 1e6);
+        UNITS = Collections.unmodifiableMap(u);
+    }
+
+    private static void lin(Map<String, Unit> u, Dimension d, String symbol, double factor) {
+        u.put(symbol, new Unit(d, factor, false, 0.0));
+    }
+
+    private static final Pattern FORM = Pattern.compile(
+            "\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(\\S*)\\s*");
+
+    /**
+     * Parses {@code text} as a quantity of dimension {@code expected}.
+     *
+     * @throws UnitException naming what was expected and what was found
+     */
+    public static Quantity parse(String text, Dimension expected) {
+        if (text == null) {
+            throw new UnitException("expected " + expected.description() + ", got nothing");
+        }
+        Matcher m = FORM.matcher(text);
+        if (!m.matches()) {
+            String lower = text.trim().toLowerCase(Locale.ROOT);
+            if (lower.startsWith("nan") || lower.contains("inf")) {
+                throw new UnitException("expected " + expected.description() + ", got a non-finite number '" + text.trim() + "'");
+            }
+            throw new UnitException("expected " + expected.description() + " as 'NUMBER UNIT' (e.g. "
+                    + example(expected) + "), got '" + text.trim() + "'");
+        }
+        double number = Double.parseDouble(m.group(1));
+        String symbol = m.group(2);
+        if (symbol.isEmpty()) {
+            if (expected == Dimension.DIMENSIONLESS) {
+                return checked(number, expected, text);
+            }
+            throw new UnitException("expected " + expected.description() + " with a unit (e.g. "
+                    + example(expected) + "), got the plain number '" + text.trim() + "'");
+        }
+        Unit unit = UNITS.get(symbol);
+        if (unit == null) {
+            String hint = closestSymbol(symbol, expected);
+            throw new UnitException("expected " + expected.description() + ", got unknown unit '" + symbol + "'"
+                    + (hint == null ? "" : " (did you mean '" + hint + "'?)"));
+        }
+        if (unit.dimension() != expected) {
+            throw new UnitException("expected " + expected.description() + ", got " + unit.dimension().description()
+                    + " ('" + text.trim() + "')");
+        }
+        double si = unit.decibel() ? Math.pow(10.0, (number + unit.decibelOffset()) / 10.0) : number * unit.factor();
+        return checked(si, expected, text);
+    }
+
+    /** Parses a quantity and returns its SI value. */
+    public static double si(String text, Dimension expected) {
+        return parse(text, expected).si();
+    }
+
+    private static Quantity checked(double si, Dimension d, String text) {
+        if (!Double.isFinite(si)) {
+            throw new UnitException("expected " + d.description() + ", got a value too large to hold: '" + text.trim() + "'");
+        }
+        return new Quantity(si, d, text.trim());
+    }
+
+    /** The unit symbols known for a dimension, in a stable order, for help texts. */
+    public static String symbolsOf(Dimension d) {
+        StringBuilder b = new StringBuilder();
+        UNITS.forEach((s, u) -> {
+            if (u.dimension() == d) {
+                b.append(b.length() == 0 ? "" : " ").append(s);
+            }
+        });
+        return b.toString();
+    }
+
+    private static String example(Dimension d) {
+        return switch (d) {
+            case TIME -> "'10 d'";
+            case LENGTH -> "'4.2 ly'";
+            case SPEED -> "'0.3 c'";
+            case ACCELERATION -> "'1 g0'";
+            case FREQUENCY -> "'7.2 GHz'";
+            case FREQUENCY_RATE -> "'100 Hz/s'";
+            case POWER -> "'20 kW'";
+            case GAIN -> "'74 dBi'";
+            case RATIO -> "'1 dB'";
+            case TEMPERATURE -> "'300 K'";
+            case DATA_RATE -> "'1 kbit/s'";
+            case ANGLE -> "'1 urad'";
+            case MASS -> "'10 g'";
+            case FORCE -> "'2 MN'";
+            case DIMENSIONLESS -> "'0.6'";
+        };
+    }
+
+    private static String closestSymbol(String symbol, Dimension expected) {
+        String best = null;
+        int bestDistance = Integer.MAX_VALUE;
+        for (Map.Entry<String, Unit> e : UNITS.entrySet()) {
+            int d = Spelling.distance(symbol.toLowerCase(Locale.ROOT), e.getKey().toLowerCase(Locale.ROOT));
+            if (e.getValue().dimension() == expected) {
+                d -= 1;
+            }
+            if (d < bestDistance) {
+                bestDistance = d;
+                best = e.getKey();
+            }
+        }
+        return bestDistance <= 1 ? best : null;
+    }
+}

@@ -1,0 +1,441 @@
+package org.nullpath.worldline;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Optional;
+
+import org.hipparchus.util.FastMath;
+import org.nullpath.spacetime.Hyperbolic;
+import org.nullpath.spacetime.Vec3;
+import org.nullpath.units.Constants;
+
+/**
+ * A craft moving on a straight line through its start position along a unit heading, flying a list of
+ * legs (burns at constant proper acceleration and coasts). Before the first leg it coasts at its start
+ * speed (for ever into the past); after a finite last leg it coasts for ever.
+ *
+ * <p>Every position and time inside a leg is computed from the leg's start state with the product
+ * forms of {@link Hyperbolic}, so nothing cancels as {@code a u / c -> 0}. Moves along the worldline
+ * ({@link #walkTime}, {@link #walkU}, {@link #walkV}) add offsets piece by piece, so a light time of a
+ * few seconds far into a mission keeps its own relative precision.
+ */
+public final class StraightLineCraft implements Worldline {
+    /** Rapidities beyond this overflow cosh and sinh in double precision (cosh 710 > 1.8e308). */
+    public static final double MAX_RAPIDITY = 700.0;
+
+    private static final double C = Constants.C;
+
+    private final Vec3 origin;
+    private final Vec3 heading;
+    private final List<Segment> segments;
+    private final List<LegSpan> legs;
+
+    /** One piece of the worldline at constant proper acceleration; lo/hi null where it runs to infinity. */
+    private record Segment(double a, LineState ref, LineState lo, LineState hi) {
+    }
+
+    private StraightLineCraft(Vec3 origin, Vec3 heading, List<Segment> segments, List<LegSpan> legs) {
+        this.origin = origin;
+        this.heading = heading;
+        this.segments = segments;
+        this.legs = legs;
+    }
+
+    /**
+     * Builds a craft.
+     *
+     * @param startPosition  where the first leg starts (metres)
+     * @param heading        direction of the flight line (any non-zero length)
+     * @param startTime      mission time at which the first leg starts
+     * @param startClock     craft clock reading then
+     * @param startSpeed     speed along the heading then, m/s, |v| < c
+     * @param legSpecs       the legs in order; only the last may be open-ended
+     * @throws WorldlineException naming the leg when a leg end can never be reached or doubles cannot hold the flight
+     */
+    public static StraightLineCraft of(Vec3 startPosition, Vec3 heading, double startTime, double startClock,
+                                       double startSpeed, List<LegSpec> legSpecs) {
+        if (heading.isZero() || !heading.isFinite()) {
+            throw new WorldlineException(-1, "the heading must be a non-zero vector");
+        }
+        if (!(Math.abs(startSpeed) < C)) {
+            throw new WorldlineException(-1, "the start speed must be below c in magnitude");
+        }
+        Vec3 n = heading.unit();
+        double eta0 = Hyperbolic.rapidityOfBeta(startSpeed / C);
+        LineState start = new LineState(startClock, startTime, 0.0, eta0, 0);
+        List<Segment> segs = new ArrayList<>();
+        segs.add(new Segment(0.0, start, null, start));
+        List<LegSpan> spans = new ArrayList<>();
+        LineState cur = start;
+        boolean open = false;
+        for (int i = 0; i < legSpecs.size(); i++) {
+            LegSpec leg = legSpecs.get(i);
+            if (open) {
+                throw new WorldlineException(i - 1, "an open-ended leg must be the last leg");
+            }
+            double a = leg.accelerationMetresPerSecond2();
+            if (leg.end() instanceof LegSpec.Forever) {
+                if (i != legSpecs.size() - 1) {
+                    throw new WorldlineException(i, "an open-ended leg (duration: forever) must be the last leg");
+                }
+                LineState lo = withSegment(cur, segs.size());
+                segs.add(new Segment(a, lo, lo, null));
+                spans.add(new LegSpan(i, leg, lo, null));
+                open = true;
+                continue;
+            }
+            double du = properTimeOfLeg(i, leg, cur);
+            LineState lo = withSegment(cur, segs.size());
+            LineState hi = new LineState(cur.clock() + du,
+                    cur.timeSeconds() + Hyperbolic.timeOffset(cur.rapidity(), a, du),
+                    cur.along() + Hyperbolic.distanceOffset(cur.rapidity(), a, du),
+                    cur.rapidity() + a * du / C, segs.size());
+            checkRepresentable(i, hi);
+            spans.add(new LegSpan(i, leg, lo, hi));
+            if (du > 0) {
+                segs.add(new Segment(a, lo, lo, hi));
+            }
+            cur = hi;
+        }
+        if (!open) {
+            LineState lo = withSegment(cur, segs.size());
+            segs.add(new Segment(0.0, lo, lo, null));
+        }
+        return new StraightLineCraft(startPosition, n, Collections.unmodifiableList(segs),
+                Collections.unmodifiableList(spans));
+    }
+
+    private static LineState withSegment(LineState s, int index) {
+        return new LineState(s.clock(), s.timeSeconds(), s.along(), s.rapidity(), index);
+    }
+
+    private static void checkRepresentable(int leg, LineState s) {
+        if (!(Math.abs(s.rapidity()) <= MAX_RAPIDITY) || !Double.isFinite(s.timeSeconds())
+                || !Double.isFinite(s.along()) || !Double.isFinite(s.clock())) {
+            throw new WorldlineException(leg, "the leg reaches a rapidity or distance beyond what double precision can hold"
+                    + " (rapidity limit " + MAX_RAPIDITY + ")");
+        }
+    }
+
+    /** Craft-clock duration of a finite leg starting at {@code cur}. */
+    private static double properTimeOfLeg(int i, LegSpec leg, LineState cur) {
+        double a = leg.accelerationMetresPerSecond2();
+        double eta = cur.rapidity();
+        double du;
+        LegSpec.LegEnd end = leg.end();
+        if (end instanceof LegSpec.ClockDuration d) {
+            du = d.seconds();
+        } else if (end instanceof LegSpec.MissionDuration d) {
+            du = Hyperbolic.properTimeForTime(eta, a, d.seconds());
+        } else if (end instanceof LegSpec.UntilSpeed s) {
+            du = properTimeUntilSpeed(i, a, eta, s.metresPerSecond());
+        } else if (end instanceof LegSpec.UntilDistance d) {
+            du = properTimeUntilDistance(i, a, eta, d.metres());
+        } else {
+            throw new WorldlineException(i, "unsupported leg end " + end);
+        }
+        if (!(du >= 0) || !Double.isFinite(du)) {
+            throw new WorldlineException(i, "the leg has a negative or undefined duration");
+        }
+        return du;
+    }
+
+    private static double properTimeUntilSpeed(int i, double a, double eta, double speed) {
+        if (!(Math.abs(speed) < C)) {
+            throw new WorldlineException(i, "until-speed must be below c in magnitude");
+        }
+        double target = speed / C;
+        double dEta = Math.abs(eta) < 0.5
+                ? Hyperbolic.deltaRapidity(target, FastMath.tanh(eta))
+                : Hyperbolic.rapidityOfBeta(target) - eta;
+        if (dEta == 0) {
+            return 0;
+        }
+        if (a == 0 || Math.signum(dEta) != Math.signum(a)) {
+            throw new WorldlineException(i, "until-speed " + speed / C + " c is never reached: the leg's acceleration "
+                    + (a == 0 ? "is zero" : "points away from it") + " (speed at the leg start "
+                    + FastMath.tanh(eta) + " c)");
+        }
+        return C * dEta / a;
+    }
+
+    /**
+     * Proper time until the displacement along the heading first equals {@code d}:
+     * cosh(eta1) = cosh(eta0) + a d / c^2 on the branch reached first.
+     */
+    private static double properTimeUntilDistance(int i, double a, double eta, double d) {
+        if (d == 0) {
+            return 0;
+        }
+        if (a == 0) {
+            double v = C * FastMath.sinh(eta);
+            if (v == 0 || Math.signum(v) != Math.signum(d)) {
+                throw new WorldlineException(i, "until-distance is never reached: the craft coasts "
+                        + (v == 0 ? "at rest" : "the other way"));
+            }
+            return d / v;
+        }
+        double x = a * d / Constants.C2;
+        double ch = FastMath.cosh(eta);
+        double sh = FastMath.sinh(eta);
+        double q = sh * sh + x * (2 * ch + x); // sinh^2(eta1)
+        if (!(q >= 0)) {
+            throw new WorldlineException(i, "until-distance is never reached: the burn turns the craft round before it gets there");
+        }
+        double s1 = Math.sqrt(q);
+        double best = Double.POSITIVE_INFINITY;
+        for (double target : new double[] {s1, -s1}) {
+            double dEta;
+            if (target * sh >= 0 && target + sh != 0) {
+                double diff = x * (2 * ch + x) / (target + sh);
+                dEta = Hyperbolic.deltaAsinh(target, sh, diff);
+            } else {
+                dEta = FastMath.asinh(target) - eta;
+            }
+            double du = C * dEta / a;
+            if (du > 0 && du < best) {
+                best = du;
+            }
+        }
+        if (!Double.isFinite(best)) {
+            throw new WorldlineException(i, "until-distance is never reached by this burn");
+        }
+        return best;
+    }
+
+    public Vec3 origin() {
+        return origin;
+    }
+
+    public Vec3 heading() {
+        return heading;
+    }
+
+    /** The legs as flown, with their start and end states. */
+    public List<LegSpan> legs() {
+        return legs;
+    }
+
+    /** Distance along the heading of a position, from the start position. */
+    public double alongOf(Vec3 position) {
+        return heading.dot(position.minus(origin));
+    }
+
+    /** The part of {@code position - origin} perpendicular to the flight line. */
+    public Vec3 perpendicularOf(Vec3 position) {
+        Vec3 d = position.minus(origin);
+        return d.minus(heading.times(heading.dot(d)));
+    }
+
+    private int segmentOfClock(double clock) {
+        int lo = 0;
+        int hi = segments.size() - 1;
+        while (lo < hi) {
+            int mid = (lo + hi + 1) >>> 1;
+            if (segments.get(mid).lo().clock() <= clock) {
+                lo = mid;
+            } else {
+                hi = mid - 1;
+            }
+        }
+        return lo;
+    }
+
+    private int segmentOfTime(double t) {
+        int lo = 0;
+        int hi = segments.size() - 1;
+        while (lo < hi) {
+            int mid = (lo + hi + 1) >>> 1;
+            if (segments.get(mid).lo().timeSeconds() <= t) {
+                lo = mid;
+            } else {
+                hi = mid - 1;
+            }
+        }
+        return lo;
+    }
+
+    /** Line state at a craft-clock reading. */
+    public LineState lineAtClock(double clock) {
+        int i = segmentOfClock(clock);
+        Segment g = segments.get(i);
+        LineState r = g.ref();
+        double du = clock - r.clock();
+        return checked(new LineState(clock, r.timeSeconds() + Hyperbolic.timeOffset(r.rapidity(), g.a(), du),
+                r.along() + Hyperbolic.distanceOffset(r.rapidity(), g.a(), du), r.rapidity() + g.a() * du / C, i));
+    }
+
+    /** Line state at a mission time. */
+    public LineState lineAtTime(double t) {
+        int i = segmentOfTime(t);
+        Segment g = segments.get(i);
+        LineState r = g.ref();
+        double du = Hyperbolic.properTimeForTime(r.rapidity(), g.a(), t - r.timeSeconds());
+        return checked(new LineState(r.clock() + du, t,
+                r.along() + Hyperbolic.distanceOffset(r.rapidity(), g.a(), du), r.rapidity() + g.a() * du / C, i));
+    }
+
+    private static LineState checked(LineState s) {
+        if (!(Math.abs(s.rapidity()) <= MAX_RAPIDITY) || !Double.isFinite(s.timeSeconds())
+                || !Double.isFinite(s.along()) || !Double.isFinite(s.clock())) {
+            throw new ArithmeticException("craft state beyond what double precision can hold (rapidity "
+                    + s.rapidity() + ")");
+        }
+        return s;
+    }
+
+    /** The mission-frame state of a line state. */
+    public State toState(LineState s) {
+        return new State(s.clock(), s.timeSeconds(), origin.plus(heading.times(s.along())), heading, s.rapidity());
+    }
+
+    @Override
+    public State atClock(double clockSeconds) {
+        return toState(lineAtClock(clockSeconds));
+    }
+
+    @Override
+    public State atTime(double timeSeconds) {
+        return toState(lineAtTime(timeSeconds));
+    }
+
+    @Override
+    public Step advance(State from, double dtSeconds) {
+        LineWalk w = walkTime(lineAtTime(from.timeSeconds()), dtSeconds);
+        Vec3 d = heading.times(w.dAlong());
+        State end = new State(from.clock() + w.dClock(), from.timeSeconds() + dtSeconds, from.position().plus(d),
+                heading, w.end().rapidity());
+        return new Step(dtSeconds, w.dClock(), d, end);
+    }
+
+    @Override
+    public Optional<Asymptote> asymptote() {
+        Segment last = segments.get(segments.size() - 1);
+        if (last.a() == 0) {
+            return Optional.empty();
+        }
+        LineState s = last.lo();
+        double a = last.a();
+        if (a > 0) {
+            double lineLimit = C * s.timeSeconds() - s.along() + Constants.C2 / a * FastMath.exp(-s.rapidity());
+            return Optional.of(new Asymptote(heading, lineLimit - heading.dot(origin)));
+        }
+        double lineLimit = C * s.timeSeconds() + s.along() + Constants.C2 / -a * FastMath.exp(s.rapidity());
+        return Optional.of(new Asymptote(heading.times(-1), lineLimit + heading.dot(origin)));
+    }
+
+    /**
+     * A move along the line, its differences summed piece by piece.
+     *
+     * @param dt     mission-time difference
+     * @param dClock craft-clock difference
+     * @param dAlong distance difference along the heading
+     * @param end    the state reached, or null when the move can never be completed (beyond a horizon)
+     */
+    public record LineWalk(double dt, double dClock, double dAlong, LineState end) {
+        public boolean never() {
+            return end == null;
+        }
+    }
+
+    private interface Measure {
+        /** The measure's change from {@code cur} to {@code boundary} within segment {@code g}. */
+        double toBoundary(LineState cur, Segment g, LineState boundary);
+
+        /** Proper time from {@code cur} for a change {@code amount} within segment {@code g}; NaN if never. */
+        double properTime(LineState cur, Segment g, double amount);
+    }
+
+    private static final Measure TIME = new Measure() {
+        @Override
+        public double toBoundary(LineState cur, Segment g, LineState b) {
+            return b.timeSeconds() - cur.timeSeconds();
+        }
+
+        @Override
+        public double properTime(LineState cur, Segment g, double amount) {
+            return Hyperbolic.properTimeForTime(cur.rapidity(), g.a(), amount);
+        }
+    };
+
+    private static final Measure U = new Measure() {
+        @Override
+        public double toBoundary(LineState cur, Segment g, LineState b) {
+            return Hyperbolic.uOffset(cur.rapidity(), g.a(), b.clock() - cur.clock());
+        }
+
+        @Override
+        public double properTime(LineState cur, Segment g, double amount) {
+            return Hyperbolic.properTimeForU(cur.rapidity(), g.a(), amount);
+        }
+    };
+
+    private static final Measure V = new Measure() {
+        @Override
+        public double toBoundary(LineState cur, Segment g, LineState b) {
+            return Hyperbolic.vOffset(cur.rapidity(), g.a(), b.clock() - cur.clock());
+        }
+
+        @Override
+        public double properTime(LineState cur, Segment g, double amount) {
+            return Hyperbolic.properTimeForV(cur.rapidity(), g.a(), amount);
+        }
+    };
+
+    /** Moves by mission time {@code dt} (any sign). */
+    public LineWalk walkTime(LineState from, double dt) {
+        return walk(from, dt, TIME, true);
+    }
+
+    /**
+     * Moves until {@code U = c t - along} has changed by {@code dU} (any sign): the path of a light
+     * signal travelling along +heading meets the craft there. {@link LineWalk#never()} when it never does.
+     */
+    public LineWalk walkU(LineState from, double dU) {
+        return walk(from, dU, U, false);
+    }
+
+    /** Moves until {@code V = c t + along} has changed by {@code dV} (any sign); see {@link #walkU}. */
+    public LineWalk walkV(LineState from, double dV) {
+        return walk(from, dV, V, false);
+    }
+
+    private LineWalk walk(LineState from, double amount, Measure m, boolean exactTime) {
+        if (amount == 0) {
+            return new LineWalk(0, 0, 0, from);
+        }
+        boolean forward = amount > 0;
+        int i = from.segment();
+        LineState cur = from;
+        double dt = 0;
+        double dClock = 0;
+        double dAlong = 0;
+        double rem = amount;
+        while (true) {
+            Segment g = segments.get(i);
+            LineState boundary = forward ? g.hi() : g.lo();
+            if (boundary != null) {
+                double cap = m.toBoundary(cur, g, boundary);
+                if (forward ? rem > cap : rem < cap) {
+                    dt += boundary.timeSeconds() - cur.timeSeconds();
+                    dClock += boundary.clock() - cur.clock();
+                    dAlong += boundary.along() - cur.along();
+                    rem -= cap;
+                    i += forward ? 1 : -1;
+                    cur = withSegment(boundary, i);
+                    continue;
+                }
+            }
+            double du = m.properTime(cur, g, rem);
+            if (Double.isNaN(du)) {
+                return new LineWalk(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NaN, null);
+            }
+            double ddt = exactTime ? rem : Hyperbolic.timeOffset(cur.rapidity(), g.a(), du);
+            double dds = Hyperbolic.distanceOffset(cur.rapidity(), g.a(), du);
+            LineState end = checked(new LineState(cur.clock() + du, cur.timeSeconds() + ddt, cur.along() + dds,
+                    cur.rapidity() + g.a() * du / C, i));
+            return new LineWalk(dt + ddt, dClock + du, dAlong + dds, end);
+        }
+    }
+}

@@ -1,0 +1,26 @@
+package org.nullpath.worldline;
+
+import java.util.Optional;
+
+/**
+ * The history of one body (station or craft) in the mission frame, defined for every mission time.
+ *
+ * <p>Contract: the worldline is timelike (speed below c everywhere), its clock increases strictly
+ * with mission time, and {@link #atClock} and {@link #atTime} are inverses of each other to a few
+ * ulps. {@link #advance} computes the move as an offset from the given state, so that a short step
+ * keeps its own relative precision even when the absolute times are large.
+ */
+public interface Worldline {
+
+    /** The state when the body's clock reads {@code clockSeconds}. */
+    State atClock(double clockSeconds);
+
+    /** The state at mission time {@code timeSeconds}. */
+    State atTime(double timeSeconds);
+
+    /** The move from {@code from} (a state of this worldline) by mission time {@code dtSeconds} (any sign). */
+    Step advance(State from, double dtSeconds);
+
+    /** The null plane this worldline approaches, if it runs away for ever at a non-zero proper acceleration. */
+    Optional<Asymptote> asymptote();
+}
