@@ -1,0 +1,65 @@
+package org.nullpath.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+
+import org.nullpath.report.OutputFolder;
+import org.nullpath.report.PlanOutput;
+import org.nullpath.scenario.Scenario;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code nullpath plan SCENARIO --out DIR}: the main job. */
+@Command(name = "plan", mixinStandardHelpOptions = true,
+        description = "Compute every planned message, cut-off, horizon and round trip of a scenario and write "
+                + "them as CSV and JSON into a folder (all files appear together, or none on failure).")
+final class PlanCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "SCENARIO", description = "the scenario file (YAML)")
+    Path scenario;
+
+    @Option(names = "--out", required = true, paramLabel = "DIR", description = "folder to write into (created if missing)")
+    Path out;
+
+    @Option(names = "--max-messages", paramLabel = "N", description = "cap on messages per plan (default: ${DEFAULT-VALUE})")
+    long maxMessages = Inputs.DEFAULT_MAX_MESSAGES;
+
+    @Option(names = "--debug", description = "show stack traces for unexpected failures")
+    boolean debug;
+
+    @Override
+    public Integer call() {
+        PrintWriter err = spec.commandLine().getErr();
+        Scenario s = Inputs.load(scenario, maxMessages, err);
+        if (s == null) {
+            return Main.INPUT_ERROR;
+        }
+        PlanOutput.Result result;
+        try (OutputFolder folder = OutputFolder.begin(out)) {
+            result = PlanOutput.write(s, folder);
+            folder.commit();
+        } catch (IOException | UncheckedIOException e) {
+            err.println("nullpath: cannot write " + out + ": " + e.getMessage());
+            if (debug) {
+                e.printStackTrace(err);
+            }
+            return Main.FAILURE;
+        } catch (RuntimeException e) {
+            err.println("nullpath: plan failed: " + e.getMessage());
+            if (debug) {
+                e.printStackTrace(err);
+            }
+            return Main.FAILURE;
+        }
+        TerminalSummary.print(spec.commandLine().getOut(), s, result, out);
+        return 0;
+    }
+}

@@ -1,0 +1,48 @@
+package org.nullpath.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+
+import org.nullpath.report.PlanOutput;
+import org.nullpath.report.Readable;
+import org.nullpath.scenario.Scenario;
+import org.nullpath.schedule.CutoffRow;
+import org.nullpath.schedule.HorizonRow;
+import org.nullpath.schedule.LinkTally;
+
+/** The few lines {@code plan} prints when it is done. */
+final class TerminalSummary {
+    private TerminalSummary() {
+    }
+
+    static void print(PrintWriter out, Scenario s, PlanOutput.Result r, Path dir) {
+        long stations = s.nodes().values().stream().filter(n -> n.kind() == Scenario.Kind.STATION).count();
+        long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
+        long never = r.links().stream().mapToLong(LinkTally::never).sum();
+        out.printf("%s%n", s.title());
+        out.printf("  %d stations, %d craft, %d links; %d messages, %d delivered, %d never arrive%n",
+                stations, s.nodes().size() - stations, s.links().size(), messages, messages - never, never);
+        for (LinkTally t : r.links()) {
+            Scenario.Link l = s.links().get(t.link());
+            out.printf("  link %-12s %s -> %s: %d sent, %d arrive; light time %s to %s; Doppler %s to %s%n",
+                    t.link(), l.from(), l.to(), t.messages(), t.delivered(), Readable.time(t.minLightTime()),
+                    Readable.time(t.maxLightTime()), Readable.number(t.minDoppler()), Readable.number(t.maxDoppler()));
+        }
+        for (CutoffRow c : r.cutoffs()) {
+            out.printf("  cut-off %-12s on %s: %s%n", c.name(), c.link(), c.reachable()
+                    ? "send by " + Readable.time(c.latestSendClock()) + " on the sender's clock"
+                    : "unreachable (the latest send would precede mission time 0)");
+        }
+        for (HorizonRow h : r.horizons()) {
+            if (h.hasHorizon()) {
+                out.printf("  horizon on %-10s nothing sent after %s (sender's clock) ever arrives%n", h.link(),
+                        Readable.time(h.lastSendClock()));
+            }
+        }
+        for (PlanOutput.ExchangeTally e : r.exchanges()) {
+            out.printf("  exchange %-10s %d of %d round trips complete%n", e.name(), e.complete(), e.roundTrips());
+        }
+        out.printf("  worst margin: no link budget terms in this scenario%n");
+        out.printf("  written to %s%n", dir);
+    }
+}

@@ -1,0 +1,111 @@
+package org.nullpath.report;
+
+import java.io.BufferedWriter;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import org.apache.commons.csv.CSVFormat;
+import org.apache.commons.csv.CSVPrinter;
+import org.nullpath.schedule.CutoffRow;
+import org.nullpath.schedule.ExchangeRow;
+import org.nullpath.schedule.HorizonRow;
+import org.nullpath.schedule.MessageRow;
+
+import static org.nullpath.report.Cells.bool;
+import static org.nullpath.report.Cells.num;
+
+/** The CSV files of contract.md, written with Apache Commons CSV, one header line, LF line ends. */
+public final class CsvTables {
+    private CsvTables() {
+    }
+
+    static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
+
+    public static final List<String> MESSAGE_COLUMNS = List.of("message", "send_clock_s", "send_time_s", "status",
+            "receive_time_s", "receive_clock_s", "light_time_s", "doppler", "frequency_offset", "receive_interval_s");
+
+    /** A streaming writer of one link's message rows. */
+    public static final class MessageWriter implements AutoCloseable {
+        private final CSVPrinter printer;
+        private final Object[] cells = new Object[MESSAGE_COLUMNS.size()];
+
+        public MessageWriter(Path file) throws IOException {
+            BufferedWriter w = Files.newBufferedWriter(file, StandardCharsets.UTF_8);
+            printer = new CSVPrinter(w, FORMAT);
+            printer.printRecord(MESSAGE_COLUMNS);
+        }
+
+        /** Writes one row; I/O failures surface as {@link UncheckedIOException}. */
+        public void write(MessageRow r) {
+            cells[0] = Long.toString(r.message());
+            cells[1] = num(r.sendClock());
+            cells[2] = num(r.sendTime());
+            cells[3] = r.delivered() ? "delivered" : "never";
+            cells[4] = num(r.receiveTime());
+            cells[5] = num(r.receiveClock());
+            cells[6] = num(r.lightTime());
+            cells[7] = num(r.doppler());
+            cells[8] = num(r.frequencyOffset());
+            cells[9] = num(r.receiveInterval());
+            try {
+                printer.printRecord(cells);
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+        }
+
+        @Override
+        public void close() throws IOException {
+            printer.close(true);
+        }
+    }
+
+    public static void writeCutoffs(Path file, List<CutoffRow> rows) throws IOException {
+        try (CSVPrinter p = new CSVPrinter(Files.newBufferedWriter(file, StandardCharsets.UTF_8), FORMAT)) {
+            p.printRecord("name", "link", "arrive_by_clock_s", "latest_send_clock_s", "latest_send_time_s", "status");
+            for (CutoffRow r : rows) {
+                p.printRecord(r.name(), r.link(), num(r.arriveByClock()), num(r.latestSendClock()),
+                        num(r.latestSendTime()), r.reachable() ? "ok" : "unreachable");
+            }
+        }
+    }
+
+    public static void writeHorizons(Path file, List<HorizonRow> rows) throws IOException {
+        try (CSVPrinter p = new CSVPrinter(Files.newBufferedWriter(file, StandardCharsets.UTF_8), FORMAT)) {
+            p.printRecord("link", "has_horizon", "last_send_clock_s", "last_send_time_s");
+            for (HorizonRow r : rows) {
+                p.printRecord(r.link(), bool(r.hasHorizon()), num(r.lastSendClock()), num(r.lastSendTime()));
+            }
+        }
+    }
+
+    /** A streaming writer of one exchange plan's rows. */
+    public static final class ExchangeWriter implements AutoCloseable {
+        private final CSVPrinter printer;
+
+        public ExchangeWriter(Path file) throws IOException {
+            printer = new CSVPrinter(Files.newBufferedWriter(file, StandardCharsets.UTF_8), FORMAT);
+            printer.printRecord("exchange", "query_send_clock_s", "query_receive_clock_s", "reply_send_clock_s",
+                    "reply_receive_clock_s", "round_trip_clock_s", "status");
+        }
+
+        public void write(ExchangeRow r) {
+            try {
+                printer.printRecord(Long.toString(r.exchange()), num(r.querySendClock()), num(r.queryReceiveClock()),
+                        num(r.replySendClock()), num(r.replyReceiveClock()), num(r.roundTripClock()),
+                        r.complete() ? "complete" : "never");
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
+        }
+
+        @Override
+        public void close() throws IOException {
+            printer.close(true);
+        }
+    }
+}

@@ -1,0 +1,61 @@
+package org.nullpath.report;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+
+import org.nullpath.scenario.Scenario;
+import org.nullpath.schedule.CutoffRow;
+import org.nullpath.schedule.Deadlines;
+import org.nullpath.schedule.HorizonRow;
+import org.nullpath.schedule.LinkSchedule;
+import org.nullpath.schedule.LinkTally;
+
+/**
+ * Runs a scenario's schedules and writes every output file into an {@link OutputFolder}: one CSV per
+ * link (streamed row by row), cutoffs.csv, horizons.csv, one CSV per exchange plan and summary.json.
+ */
+public final class PlanOutput {
+    private PlanOutput() {
+    }
+
+    /**
+     * What a plan came to, for the terminal summary.
+     *
+     * @param links     per-link tallies in file order
+     * @param exchanges per-exchange counts of completed round trips, in file order
+     * @param cutoffs   cut-off rows
+     * @param horizons  horizon rows
+     */
+    public record Result(List<LinkTally> links, List<ExchangeTally> exchanges, List<CutoffRow> cutoffs,
+                         List<HorizonRow> horizons) {
+    }
+
+    /** @param name exchange name; @param roundTrips planned; @param complete completed */
+    public record ExchangeTally(String name, long roundTrips, long complete) {
+    }
+
+    /** Computes and writes everything; the caller commits or discards the folder. */
+    public static Result write(Scenario s, OutputFolder out) throws IOException {
+        List<LinkTally> tallies = new ArrayList<>();
+        for (Scenario.Link link : s.links().values()) {
+            try (CsvTables.MessageWriter w = new CsvTables.MessageWriter(out.file(link.name() + ".csv"))) {
+                tallies.add(LinkSchedule.run(s, link, w::write));
+            }
+        }
+        List<CutoffRow> cutoffs = Deadlines.cutoffs(s);
+        CsvTables.writeCutoffs(out.file("cutoffs.csv"), cutoffs);
+        List<HorizonRow> horizons = Deadlines.horizons(s);
+        CsvTables.writeHorizons(out.file("horizons.csv"), horizons);
+        List<ExchangeTally> exchanges = new ArrayList<>();
+        for (Scenario.Exchange e : s.exchanges()) {
+            try (CsvTables.ExchangeWriter w = new CsvTables.ExchangeWriter(out.file("exchanges-" + e.name() + ".csv"))) {
+                long complete = Deadlines.exchange(s, e, w::write);
+                exchanges.add(new ExchangeTally(e.name(), e.count(), complete));
+            }
+        }
+        Result result = new Result(tallies, exchanges, cutoffs, horizons);
+        SummaryJson.write(out.file("summary.json"), s, result);
+        return result;
+    }
+}

@@ -1,0 +1,128 @@
+package org.nullpath.report;
+
+import java.io.IOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.SerializationFeature;
+import org.hipparchus.util.FastMath;
+import org.nullpath.scenario.Scenario;
+import org.nullpath.schedule.CutoffRow;
+import org.nullpath.schedule.HorizonRow;
+import org.nullpath.schedule.LinkTally;
+import org.nullpath.worldline.LegSpan;
+import org.nullpath.worldline.LegSpec;
+import org.nullpath.worldline.LineState;
+import org.nullpath.worldline.StraightLineCraft;
+
+/** summary.json: title, per-craft leg and arrival events, per-link counts, horizons, cut-offs, round trips. */
+final class SummaryJson {
+    private SummaryJson() {
+    }
+
+    static void write(Path file, Scenario s, PlanOutput.Result r) throws IOException {
+        Map<String, Object> root = new LinkedHashMap<>();
+        root.put("title", s.title());
+        root.put("scenario", s.file().getFileName() == null ? s.file().toString() : s.file().getFileName().toString());
+        root.put("epoch", s.epoch().map(Object::toString).orElse(null));
+        List<Object> craft = new ArrayList<>();
+        List<Object> stations = new ArrayList<>();
+        for (Scenario.Node n : s.nodes().values()) {
+            if (n.kind() == Scenario.Kind.STATION) {
+                stations.add(n.name());
+                continue;
+            }
+            StraightLineCraft c = (StraightLineCraft) n.worldline();
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("name", n.name());
+            List<Object> legs = new ArrayList<>();
+            LineState arrival = null;
+            for (LegSpan span : c.legs()) {
+                Map<String, Object> leg = new LinkedHashMap<>();
+                leg.put("leg", span.index() + 1);
+                leg.put("kind", span.spec() instanceof LegSpec.Burn ? "burn" : "coast");
+                leg.put("acceleration_m_s2", span.spec().accelerationMetresPerSecond2());
+                leg.put("start", event(span.start()));
+                leg.put("end", span.end() == null ? null : event(span.end()));
+                legs.add(leg);
+                if (span.end() != null) {
+                    arrival = span.end();
+                }
+            }
+            m.put("legs", legs);
+            boolean open = !c.legs().isEmpty() && c.legs().get(c.legs().size() - 1).openEnded();
+            m.put("arrival", open || arrival == null ? null : event(arrival));
+            m.put("open_ended", open);
+            craft.add(m);
+        }
+        root.put("stations", stations);
+        root.put("craft", craft);
+        List<Object> links = new ArrayList<>();
+        for (LinkTally t : r.links()) {
+            Scenario.Link l = s.links().get(t.link());
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("name", t.link());
+            m.put("from", l.from());
+            m.put("to", l.to());
+            m.put("messages", t.messages());
+            m.put("delivered", t.delivered());
+            m.put("never", t.never());
+            m.put("min_doppler", nan(t.minDoppler()));
+            m.put("max_doppler", nan(t.maxDoppler()));
+            m.put("min_light_time_s", nan(t.minLightTime()));
+            m.put("max_light_time_s", nan(t.maxLightTime()));
+            links.add(m);
+        }
+        root.put("links", links);
+        List<Object> horizons = new ArrayList<>();
+        for (HorizonRow h : r.horizons()) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("link", h.link());
+            m.put("has_horizon", h.hasHorizon());
+            m.put("last_send_clock_s", nan(h.lastSendClock()));
+            m.put("last_send_time_s", nan(h.lastSendTime()));
+            horizons.add(m);
+        }
+        root.put("horizons", horizons);
+        List<Object> cutoffs = new ArrayList<>();
+        for (CutoffRow c : r.cutoffs()) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("name", c.name());
+            m.put("link", c.link());
+            m.put("arrive_by_clock_s", c.arriveByClock());
+            m.put("latest_send_clock_s", nan(c.latestSendClock()));
+            m.put("latest_send_time_s", nan(c.latestSendTime()));
+            m.put("status", c.reachable() ? "ok" : "unreachable");
+            cutoffs.add(m);
+        }
+        root.put("cutoffs", cutoffs);
+        List<Object> exchanges = new ArrayList<>();
+        for (PlanOutput.ExchangeTally e : r.exchanges()) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("name", e.name());
+            m.put("round_trips", e.roundTrips());
+            m.put("complete", e.complete());
+            exchanges.add(m);
+        }
+        root.put("exchanges", exchanges);
+        new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), root);
+    }
+
+    private static Map<String, Object> event(LineState st) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("clock_s", st.clock());
+        m.put("time_s", st.timeSeconds());
+        m.put("distance_m", st.along());
+        m.put("speed_c", FastMath.tanh(st.rapidity()));
+        m.put("rapidity", st.rapidity());
+        return m;
+    }
+
+    private static Double nan(double v) {
+        return Double.isNaN(v) ? null : v;
+    }
+}

@@ -1,0 +1,83 @@
+package org.nullpath.schedule;
+
+import java.util.function.Consumer;
+
+import org.nullpath.lightcone.LightCone;
+import org.nullpath.lightcone.SignalPath;
+import org.nullpath.link.Doppler;
+import org.nullpath.scenario.Scenario;
+import org.nullpath.worldline.State;
+import org.nullpath.worldline.Worldline;
+
+/**
+ * Computes every planned message of one link, in send order, handing each row to a sink as soon as it
+ * is computed: memory does not grow with the number of messages.
+ */
+public final class LinkSchedule {
+    private LinkSchedule() {
+    }
+
+    /** Total messages the scenario plans (message plans plus two per exchange round trip). */
+    public static long plannedMessages(Scenario s) {
+        long n = 0;
+        for (Scenario.MessagePlan p : s.messages()) {
+            n = saturatingAdd(n, p.count());
+        }
+        for (Scenario.Exchange e : s.exchanges()) {
+            n = saturatingAdd(n, saturatingAdd(e.count(), e.count()));
+        }
+        return n;
+    }
+
+    private static long saturatingAdd(long a, long b) {
+        long r = a + b;
+        return r < 0 ? Long.MAX_VALUE : r;
+    }
+
+    /** One signal on a link from a send clock: the path, or never. */
+    public static SignalPath signal(Worldline sender, Worldline receiver, double sendClock) {
+        State send = sender.atClock(sendClock);
+        return LightCone.future(send, receiver);
+    }
+
+    /** Runs the schedule of {@code link}, giving each row to {@code sink}; returns the tally. */
+    public static LinkTally run(Scenario s, Scenario.Link link, Consumer<MessageRow> sink) {
+        Worldline sender = s.nodes().get(link.from()).worldline();
+        Worldline receiver = s.nodes().get(link.to()).worldline();
+        SendOrder order = new SendOrder(SendOrder.plansOf(s, link.name()));
+        long index = 0;
+        long delivered = 0;
+        double previousArrivalClock = Double.NaN;
+        double lastArrivalClock = Double.NaN;
+        double minD = Double.NaN;
+        double maxD = Double.NaN;
+        double minT = Double.NaN;
+        double maxT = Double.NaN;
+        while (order.hasNext()) {
+            double clock = order.next();
+            index++;
+            SignalPath p = signal(sender, receiver, clock);
+            MessageRow row;
+            if (p.delivered()) {
+                delivered++;
+                Doppler.Factor d = Doppler.of(p);
+                double rxClock = p.receive().clock();
+                row = new MessageRow(index, clock, p.send().timeSeconds(), true, p.receive().timeSeconds(), rxClock,
+                        p.lightTimeSeconds(), d.doppler(), d.offset(), rxClock - previousArrivalClock);
+                previousArrivalClock = rxClock;
+                lastArrivalClock = rxClock;
+                minD = Double.isNaN(minD) ? d.doppler() : Math.min(minD, d.doppler());
+                maxD = Double.isNaN(maxD) ? d.doppler() : Math.max(maxD, d.doppler());
+                minT = Double.isNaN(minT) ? p.lightTimeSeconds() : Math.min(minT, p.lightTimeSeconds());
+                maxT = Double.isNaN(maxT) ? p.lightTimeSeconds() : Math.max(maxT, p.lightTimeSeconds());
+            } else {
+                row = new MessageRow(index, clock, p.send().timeSeconds(), false, Double.NaN, Double.NaN, Double.NaN,
+                        Double.NaN, Double.NaN, Double.NaN);
+                previousArrivalClock = Double.NaN;
+            }
+            sink.accept(row);
+        }
+        return new LinkTally(link.name(), index, delivered, index - delivered, minD, maxD, minT, maxT,
+                lastArrivalClock);
+    }
+}

@@ -1,0 +1,18 @@
+package org.nullpath.schedule;
+
+/**
+ * What a link's schedule came to, for summaries.
+ *
+ * @param link           link name
+ * @param messages       messages planned
+ * @param delivered      messages that arrive
+ * @param never          messages that never arrive
+ * @param minDoppler     smallest Doppler factor among delivered messages (NaN when none)
+ * @param maxDoppler     largest Doppler factor among delivered messages (NaN when none)
+ * @param minLightTime   shortest light time, s (NaN when none)
+ * @param maxLightTime   longest light time, s (NaN when none)
+ * @param lastArrivalClock receiver clock of the last arrival, s (NaN when none)
+ */
+public record LinkTally(String link, long messages, long delivered, long never, double minDoppler,
+                        double maxDoppler, double minLightTime, double maxLightTime, double lastArrivalClock) {
+}
