@@ -30,6 +30,7 @@ public final class StraightLineCraft implements Worldline {
     private final Vec3 heading;
     private final List<Segment> segments;
     private final List<LegSpan> legs;
+    private final Optional<Asymptote> asymptote;
 
     /** One piece of the worldline at constant proper acceleration; lo/hi null where it runs to infinity. */
     private record Segment(double a, LineState ref, LineState lo, LineState hi) {
@@ -40,6 +41,7 @@ public final class StraightLineCraft implements Worldline {
         this.heading = heading;
         this.segments = segments;
         this.legs = legs;
+        this.asymptote = findAsymptote();
     }
 
     /**
@@ -311,6 +313,10 @@ public final class StraightLineCraft implements Worldline {
 
     @Override
     public Optional<Asymptote> asymptote() {
+        return asymptote;
+    }
+
+    private Optional<Asymptote> findAsymptote() {
         Segment last = segments.get(segments.size() - 1);
         if (last.a() == 0) {
             return Optional.empty();
