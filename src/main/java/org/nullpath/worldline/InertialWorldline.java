@@ -79,6 +79,11 @@ public final class InertialWorldline implements Worldline {
     }
 
     @Override
+    public double properAccelerationAt(double timeSeconds) {
+        return 0;
+    }
+
+    @Override
     public Optional<Asymptote> asymptote() {
         return Optional.empty();
     }

@@ -312,6 +312,11 @@ public final class StraightLineCraft implements Worldline {
     }
 
     @Override
+    public double properAccelerationAt(double timeSeconds) {
+        return segments.get(segmentOfTime(timeSeconds)).a();
+    }
+
+    @Override
     public Optional<Asymptote> asymptote() {
         return asymptote;
     }

@@ -21,6 +21,12 @@ public interface Worldline {
     /** The move from {@code from} (a state of this worldline) by mission time {@code dtSeconds} (any sign). */
     Step advance(State from, double dtSeconds);
 
+    /**
+     * Proper acceleration at mission time {@code timeSeconds}, m/s^2, signed along the state's
+     * {@link State#direction()}; at a leg boundary, the value of the leg that starts there.
+     */
+    double properAccelerationAt(double timeSeconds);
+
     /** The null plane this worldline approaches, if it runs away for ever at a non-zero proper acceleration. */
     Optional<Asymptote> asymptote();
 }

@@ -1,0 +1,72 @@
+package org.nullpath.link;
+
+import org.nullpath.lightcone.SignalPath;
+import org.nullpath.units.Constants;
+
+/**
+ * The relativistic link budget of one message, in the sender-frame form of the Friis equation
+ * (Friis, Proc. IRE 34, 1946; the D^4 flux transformation of Rybicki &amp; Lightman, <i>Radiative
+ * Processes in Astrophysics</i>, 1979, ch. 4, makes it equal to the receiver-frame form):
+ * <pre>
+ *   P_rx = P_tx G_tx(f_tx) G_rx(f_rx) (lambda_tx / (4 pi R_tx))^2 / L,
+ *   R_tx = gamma_s (1 - beta_s . k) c (t_rx - t_tx)
+ * </pre>
+ * Everything is summed in decibels, so dB columns are exact to rounding. At zero velocity this is the
+ * Friis equation and the free-space loss is ITU-R P.525's 92.45 + 20 log10(f/GHz) + 20 log10(d/km).
+ * Noise: N0 = k_B T_sys in the receiver's frame; received data rate D R_tx; Eb/N0 = (C/N0)/R_rx;
+ * photon counting: photon rate P_rx / (h f_rx), photons per bit = photon rate / R_rx.
+ */
+public final class LinkBudget {
+    private LinkBudget() {
+    }
+
+    private static final double BOLTZMANN_DB = 10 * Math.log10(Constants.BOLTZMANN);
+
+    /** Decibels of a positive linear ratio. */
+    static double db(double x) {
+        return 10 * Math.log10(x);
+    }
+
+    /** The frequency the sender transmits for this message: the carrier, or carrier / D when pre-compensating. */
+    public static double txFrequency(LinkTerms t, Doppler.Factor d) {
+        return t.precompensate() ? t.carrierHz() / d.doppler() : t.carrierHz();
+    }
+
+    /** The sender-frame distance R_tx = gamma_s (1 - beta_s . k) c T, metres. */
+    public static double senderFrameDistance(SignalPath p) {
+        if (p.path().isZero()) {
+            return 0;
+        }
+        Doppler.BodyFactor s = Doppler.bodyFactor(p.send(), p.path().unit());
+        return s.value() * Constants.C * p.lightTimeSeconds();
+    }
+
+    /** The budget of a delivered message, given its Doppler factor and its Doppler factor's rate dD/d(tau_rx). */
+    public static Budget evaluate(LinkTerms t, SignalPath p, Doppler.Factor d, double dopplerFactorRate) {
+        double fTx = txFrequency(t, d);
+        double fRx = t.precompensate() ? t.carrierHz() : fTx * d.doppler();
+        double rate = t.precompensate() ? 0.0 : fTx * dopplerFactorRate;
+        boolean inRange = !t.hasTuningRange() || (fRx >= t.tuningMinHz() && fRx <= t.tuningMaxHz());
+        boolean withinRate = !t.hasDopplerRateLimit() || Math.abs(rate) <= t.maxDopplerRateHzPerS();
+        double rTx = senderFrameDistance(p);
+        double lambdaTx = Constants.C / fTx;
+        double pathDb = 20 * Math.log10(lambdaTx / (4 * Math.PI * rTx));
+        double rxPowerDbw = db(t.txPowerWatts()) + db(t.txAntenna().gainAt(fTx)) + db(t.rxAntenna().gainAt(fRx))
+                + pathDb - t.txLossDb() - t.rxLossDb();
+        double rxRate = d.doppler() * t.dataRateBps();
+        if (t.detection() == LinkTerms.Detection.COHERENT) {
+            double cn0 = rxPowerDbw - BOLTZMANN_DB - db(t.noiseTemperatureKelvin());
+            double ebn0 = cn0 - db(rxRate);
+            double margin = ebn0 - t.requiredEbN0Db();
+            double maxRate = Math.pow(10, (cn0 - t.requiredEbN0Db()) / 10) / d.doppler();
+            return new Budget(fTx, fRx, rate, inRange, withinRate, rxPowerDbw, cn0, Double.NaN, rxRate, ebn0,
+                    Double.NaN, margin, maxRate);
+        }
+        double photonRate = Math.pow(10, rxPowerDbw / 10) / (Constants.PLANCK * fRx);
+        double ppb = photonRate / rxRate;
+        double margin = db(ppb) - db(t.requiredPhotonsPerBit());
+        double maxRate = photonRate / (d.doppler() * t.requiredPhotonsPerBit());
+        return new Budget(fTx, fRx, rate, inRange, withinRate, rxPowerDbw, Double.NaN, photonRate, rxRate, Double.NaN,
+                ppb, margin, maxRate);
+    }
+}
