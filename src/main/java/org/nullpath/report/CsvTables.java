@@ -6,10 +6,13 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
+import org.nullpath.link.Budget;
+import org.nullpath.link.LinkTerms;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.ExchangeRow;
 import org.nullpath.schedule.HorizonRow;
@@ -28,15 +31,31 @@ public final class CsvTables {
     public static final List<String> MESSAGE_COLUMNS = List.of("message", "send_clock_s", "send_time_s", "status",
             "receive_time_s", "receive_clock_s", "light_time_s", "doppler", "frequency_offset", "receive_interval_s");
 
+    /** Columns added for a coherent (radio) link. */
+    public static final List<String> COHERENT_COLUMNS = List.of("tx_frequency_hz", "rx_frequency_hz",
+            "doppler_rate_hz_per_s", "in_tuning_range", "rx_power_dbw", "cn0_dbhz", "rx_data_rate_bps", "ebn0_db",
+            "margin_db", "max_data_rate_bps", "within_doppler_rate");
+    /** Columns added for a photon-counting (optical) link. */
+    public static final List<String> PHOTON_COLUMNS = List.of("tx_frequency_hz", "rx_frequency_hz",
+            "doppler_rate_hz_per_s", "in_tuning_range", "rx_power_dbw", "rx_photon_rate_per_s", "rx_data_rate_bps",
+            "photons_per_bit", "margin_db", "max_data_rate_bps", "within_doppler_rate");
+
     /** A streaming writer of one link's message rows. */
     public static final class MessageWriter implements AutoCloseable {
         private final CSVPrinter printer;
-        private final Object[] cells = new Object[MESSAGE_COLUMNS.size()];
+        private final Object[] cells;
+        private final LinkTerms terms;
 
-        public MessageWriter(Path file) throws IOException {
+        public MessageWriter(Path file, LinkTerms terms) throws IOException {
             BufferedWriter w = Files.newBufferedWriter(file, StandardCharsets.UTF_8);
+            this.terms = terms;
             printer = new CSVPrinter(w, FORMAT);
-            printer.printRecord(MESSAGE_COLUMNS);
+            List<String> header = new ArrayList<>(MESSAGE_COLUMNS);
+            if (terms != null) {
+                header.addAll(terms.detection() == LinkTerms.Detection.COHERENT ? COHERENT_COLUMNS : PHOTON_COLUMNS);
+            }
+            cells = new Object[header.size()];
+            printer.printRecord(header);
         }
 
         /** Writes one row; I/O failures surface as {@link UncheckedIOException}. */
@@ -51,6 +70,27 @@ public final class CsvTables {
             cells[7] = num(r.doppler());
             cells[8] = num(r.frequencyOffset());
             cells[9] = num(r.receiveInterval());
+            if (terms != null) {
+                Budget b = r.budget();
+                boolean coherent = terms.detection() == LinkTerms.Detection.COHERENT;
+                if (b == null) {
+                    for (int i = 10; i < cells.length; i++) {
+                        cells[i] = "";
+                    }
+                } else {
+                    cells[10] = num(b.txFrequencyHz());
+                    cells[11] = num(b.rxFrequencyHz());
+                    cells[12] = num(b.dopplerRateHzPerS());
+                    cells[13] = bool(b.inTuningRange());
+                    cells[14] = num(b.rxPowerDbw());
+                    cells[15] = num(coherent ? b.cn0DbHz() : b.rxPhotonRatePerS());
+                    cells[16] = num(b.rxDataRateBps());
+                    cells[17] = num(coherent ? b.ebN0Db() : b.photonsPerBit());
+                    cells[18] = num(b.marginDb());
+                    cells[19] = num(b.maxDataRateBps());
+                    cells[20] = bool(b.withinDopplerRate());
+                }
+            }
             try {
                 printer.printRecord(cells);
             } catch (IOException e) {

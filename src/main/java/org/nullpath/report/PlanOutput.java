@@ -39,7 +39,8 @@ public final class PlanOutput {
     public static Result write(Scenario s, OutputFolder out) throws IOException {
         List<LinkTally> tallies = new ArrayList<>();
         for (Scenario.Link link : s.links().values()) {
-            try (CsvTables.MessageWriter w = new CsvTables.MessageWriter(out.file(link.name() + ".csv"))) {
+            try (CsvTables.MessageWriter w = new CsvTables.MessageWriter(out.file(link.name() + ".csv"),
+                    link.terms().orElse(null))) {
                 tallies.add(LinkSchedule.run(s, link, w::write));
             }
         }

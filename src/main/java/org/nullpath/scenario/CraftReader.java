@@ -13,6 +13,7 @@ import org.nullpath.scenario.YamlTree.ScalarType;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
 import org.nullpath.units.Dimension;
+import org.nullpath.units.Spelling;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.StraightLineCraft;
 import org.nullpath.worldline.WorldlineException;
@@ -146,7 +147,7 @@ final class CraftReader {
                         + " and coast legs)");
                 ok = false;
             } else if (!LEG_TYPES.contains(e.key())) {
-                String hint = org.nullpath.units.Spelling.closest(e.key(), allLegTypes());
+                String hint = Spelling.closest(e.key(), allLegTypes());
                 problems.atKey(e, keyPath, "unknown leg type '" + e.key() + "'"
                         + (hint != null ? " (did you mean '" + hint + "'?)" : " (a leg is burn or coast)"));
                 ok = false;

@@ -197,7 +197,7 @@ final class Fields {
         return values.text(get(key), path(key), what);
     }
 
-    /** An optional boolean; empty when absent, {@code absent} then; null-free. */
+    /** An optional boolean: {@code absent} when the key is missing, empty when its value is not a boolean. */
     Optional<Boolean> bool(String key, boolean absent) {
         Node n = get(key);
         return n == null ? Optional.of(absent) : values.bool(n, path(key));

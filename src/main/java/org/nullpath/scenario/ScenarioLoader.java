@@ -16,6 +16,7 @@ import java.nio.file.Path;
 import java.time.Instant;
 import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.Collections;
 import java.util.HashMap;
 import java.util.LinkedHashMap;
@@ -419,7 +420,7 @@ public final class ScenarioLoader {
             return info;
         }
 
-        private static String hint(String name, java.util.Collection<String> known, String what) {
+        private static String hint(String name, Collection<String> known, String what) {
             if (known.isEmpty()) {
                 return " (the scenario defines no " + what + ")";
             }

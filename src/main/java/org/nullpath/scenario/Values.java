@@ -117,7 +117,10 @@ final class Values {
         return Double.NaN;
     }
 
-    /** A list of exactly three values read by {@code element}; null on a problem (all elements are checked). */
+    /**
+     * A list of exactly three quantities of dimension {@code d} (plain numbers for DIMENSIONLESS); null on a
+     * problem. Every element is checked, so each bad one is reported.
+     */
     Vec3 vector(Node n, String path, Dimension d) {
         if (!(n instanceof ListNode l) || l.items().size() != 3) {
             String form = switch (d) {
@@ -139,7 +142,7 @@ final class Values {
         return ok ? new Vec3(c[0], c[1], c[2]) : null;
     }
 
-    /** A list of quantities; null when {@code n} is not a list (problem added); elements with problems are left out. */
+    /** A list of quantities; null when {@code n} is not a list or any element is wrong (every problem added). */
     List<Double> quantities(Node n, String path, Dimension d, String what) {
         if (!(n instanceof ListNode l)) {
             problems.at(n, path, "expected a list of " + what + " such as [" + example(d).replace("'", "") + "], got "

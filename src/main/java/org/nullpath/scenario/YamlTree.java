@@ -59,7 +59,10 @@ final class YamlTree {
                 .maxNumberLength(1_000)
                 .maxTokenCount(4 * MAX_EXPANDED_NODES)
                 .build();
-        return YAMLFactory.builder().loaderOptions(options).streamReadConstraints(limits).build();
+        return YAMLFactory.builder().loaderOptions(options).streamReadConstraints(limits)
+                // "key:" with nothing after it is YAML null, as the YAML spec has it; '' stays empty text.
+                .enable(YAMLParser.Feature.EMPTY_STRING_AS_NULL)
+                .build();
     }
 
     /** A value in the tree. */

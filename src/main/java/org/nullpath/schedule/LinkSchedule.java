@@ -4,7 +4,11 @@ import java.util.function.Consumer;
 
 import org.nullpath.lightcone.LightCone;
 import org.nullpath.lightcone.SignalPath;
+import org.nullpath.link.Budget;
 import org.nullpath.link.Doppler;
+import org.nullpath.link.DopplerRate;
+import org.nullpath.link.LinkBudget;
+import org.nullpath.link.LinkTerms;
 import org.nullpath.scenario.Scenario;
 import org.nullpath.worldline.State;
 import org.nullpath.worldline.Worldline;
@@ -40,14 +44,27 @@ public final class LinkSchedule {
         return LightCone.future(send, receiver);
     }
 
+    /**
+     * Receiver-clock time between two arrivals, as an offset: the senders' mission-time step (from the
+     * clock step, walked along the sender) plus the change of light time, walked along the receiver.
+     * Differencing two large clock readings instead would lose ~1e-12 relative 30 years in.
+     */
+    static double arrivalInterval(Worldline sender, Worldline receiver, SignalPath first, SignalPath second) {
+        double sendStep = sender.advanceClock(first.send(), second.send().clock() - first.send().clock()).dtSeconds();
+        double arrivalStep = sendStep + (second.lightTimeSeconds() - first.lightTimeSeconds());
+        return receiver.advance(first.receive(), arrivalStep).dClockSeconds();
+    }
+
     /** Runs the schedule of {@code link}, giving each row to {@code sink}; returns the tally. */
     public static LinkTally run(Scenario s, Scenario.Link link, Consumer<MessageRow> sink) {
         Worldline sender = s.nodes().get(link.from()).worldline();
         Worldline receiver = s.nodes().get(link.to()).worldline();
+        LinkTerms terms = link.terms().orElse(null);
+        BudgetTally budgets = terms == null ? null : new BudgetTally(terms.carrierHz());
         SendOrder order = new SendOrder(SendOrder.plansOf(s, link.name()));
         long index = 0;
         long delivered = 0;
-        double previousArrivalClock = Double.NaN;
+        SignalPath previous = null;
         double lastArrivalClock = Double.NaN;
         double minD = Double.NaN;
         double maxD = Double.NaN;
@@ -62,9 +79,15 @@ public final class LinkSchedule {
                 delivered++;
                 Doppler.Factor d = Doppler.of(p);
                 double rxClock = p.receive().clock();
+                Budget budget = terms == null ? null
+                        : LinkBudget.evaluate(terms, p, d, DopplerRate.of(sender, receiver, p, d));
+                if (budget != null) {
+                    budgets.add(budget);
+                }
+                double interval = previous == null ? Double.NaN : arrivalInterval(sender, receiver, previous, p);
                 row = new MessageRow(index, clock, p.send().timeSeconds(), true, p.receive().timeSeconds(), rxClock,
-                        p.lightTimeSeconds(), d.doppler(), d.offset(), rxClock - previousArrivalClock);
-                previousArrivalClock = rxClock;
+                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, budget);
+                previous = p;
                 lastArrivalClock = rxClock;
                 minD = Double.isNaN(minD) ? d.doppler() : Math.min(minD, d.doppler());
                 maxD = Double.isNaN(maxD) ? d.doppler() : Math.max(maxD, d.doppler());
@@ -72,12 +95,12 @@ public final class LinkSchedule {
                 maxT = Double.isNaN(maxT) ? p.lightTimeSeconds() : Math.max(maxT, p.lightTimeSeconds());
             } else {
                 row = new MessageRow(index, clock, p.send().timeSeconds(), false, Double.NaN, Double.NaN, Double.NaN,
-                        Double.NaN, Double.NaN, Double.NaN);
-                previousArrivalClock = Double.NaN;
+                        Double.NaN, Double.NaN, Double.NaN, null);
+                previous = null;
             }
             sink.accept(row);
         }
         return new LinkTally(link.name(), index, delivered, index - delivered, minD, maxD, minT, maxT,
-                lastArrivalClock);
+                lastArrivalClock, budgets == null ? null : budgets.snapshot());
     }
 }

@@ -12,7 +12,9 @@ package org.nullpath.schedule;
  * @param minLightTime   shortest light time, s (NaN when none)
  * @param maxLightTime   longest light time, s (NaN when none)
  * @param lastArrivalClock receiver clock of the last arrival, s (NaN when none)
+ * @param budget         link-budget figures, null when the link has no terms
  */
 public record LinkTally(String link, long messages, long delivered, long never, double minDoppler,
-                        double maxDoppler, double minLightTime, double maxLightTime, double lastArrivalClock) {
+                        double maxDoppler, double minLightTime, double maxLightTime, double lastArrivalClock,
+                        BudgetTally.Figures budget) {
 }

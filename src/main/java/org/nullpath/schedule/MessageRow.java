@@ -1,5 +1,7 @@
 package org.nullpath.schedule;
 
+import org.nullpath.link.Budget;
+
 /**
  * One planned message and its fate (contract.md, {@code <link>.csv}). Values that do not exist are NaN.
  *
@@ -13,8 +15,9 @@ package org.nullpath.schedule;
  * @param doppler          f_rx / f_tx
  * @param frequencyOffset  doppler - 1, without cancellation
  * @param receiveInterval  receiver-clock time since the previous message of this link arrived, s
+ * @param budget           frequency plan and link budget, null when the link has no terms or the message never arrives
  */
 public record MessageRow(long message, double sendClock, double sendTime, boolean delivered, double receiveTime,
                          double receiveClock, double lightTime, double doppler, double frequencyOffset,
-                         double receiveInterval) {
+                         double receiveInterval, Budget budget) {
 }

@@ -115,7 +115,7 @@ public final class Hyperbolic {
             return C * du * FastMath.exp(-eta);
         }
         double dEta = a * du / C;
-        return -C * du * FastMath.exp(-eta) * expm1OverX(-dEta);
+        return C * du * FastMath.exp(-eta) * expm1OverX(-dEta);
     }
 
     /** Offset of {@code V = ct + s} after proper time {@code du}. */

@@ -79,6 +79,11 @@ public final class InertialWorldline implements Worldline {
     }
 
     @Override
+    public Step advanceClock(State from, double dClockSeconds) {
+        return advance(from, dClockSeconds * gamma);
+    }
+
+    @Override
     public double properAccelerationAt(double timeSeconds) {
         return 0;
     }

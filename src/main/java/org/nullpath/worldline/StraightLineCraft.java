@@ -312,6 +312,15 @@ public final class StraightLineCraft implements Worldline {
     }
 
     @Override
+    public Step advanceClock(State from, double dClockSeconds) {
+        LineWalk w = walkClock(lineAtTime(from.timeSeconds()), dClockSeconds);
+        Vec3 d = heading.times(w.dAlong());
+        State end = new State(from.clock() + dClockSeconds, from.timeSeconds() + w.dt(), from.position().plus(d),
+                heading, w.end().rapidity());
+        return new Step(w.dt(), dClockSeconds, d, end);
+    }
+
+    @Override
     public double properAccelerationAt(double timeSeconds) {
         return segments.get(segmentOfTime(timeSeconds)).a();
     }
@@ -370,6 +379,18 @@ public final class StraightLineCraft implements Worldline {
         }
     };
 
+    private static final Measure CLOCK = new Measure() {
+        @Override
+        public double toBoundary(LineState cur, Segment g, LineState b) {
+            return b.clock() - cur.clock();
+        }
+
+        @Override
+        public double properTime(LineState cur, Segment g, double amount) {
+            return amount;
+        }
+    };
+
     private static final Measure U = new Measure() {
         @Override
         public double toBoundary(LineState cur, Segment g, LineState b) {
@@ -397,6 +418,11 @@ public final class StraightLineCraft implements Worldline {
     /** Moves by mission time {@code dt} (any sign). */
     public LineWalk walkTime(LineState from, double dt) {
         return walk(from, dt, TIME, true);
+    }
+
+    /** Moves by craft-clock time {@code dClock} (any sign). */
+    public LineWalk walkClock(LineState from, double dClock) {
+        return walk(from, dClock, CLOCK, false);
     }
 
     /**

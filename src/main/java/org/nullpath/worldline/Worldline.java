@@ -21,6 +21,9 @@ public interface Worldline {
     /** The move from {@code from} (a state of this worldline) by mission time {@code dtSeconds} (any sign). */
     Step advance(State from, double dtSeconds);
 
+    /** The move from {@code from} (a state of this worldline) by own-clock time {@code dClockSeconds} (any sign). */
+    Step advanceClock(State from, double dClockSeconds);
+
     /**
      * Proper acceleration at mission time {@code timeSeconds}, m/s^2, signed along the state's
      * {@link State#direction()}; at a leg boundary, the value of the leg that starts there.

@@ -1,6 +1,7 @@
 package org.nullpath.reference;
 
 import java.math.BigDecimal;
+import java.math.BigInteger;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import java.util.Map;
@@ -14,9 +15,10 @@ import java.util.function.Supplier;
  * written for this package (no Hipparchus {@code Dfp}; Dfp is used only by the self-test as an
  * outside cross-check of these functions):
  * <ul>
- *   <li>{@code exp}: reduction by multiples of ln 2, then by 2^-8, Taylor series, repeated squaring;</li>
- *   <li>{@code expm1}: Taylor series on x/2^j and the doubling rule e(2y) = e(y) (e(y) + 2), which keeps
- *       the relative precision for tiny arguments;</li>
+ *   <li>{@code exp}: reduction by multiples of ln 2, then by 2^-j (j ~ sqrt of the digits), Taylor series
+ *       in binary fixed point (BigInteger), j squarings;</li>
+ *   <li>{@code expm1}: for |x| &lt;= 2^-10 the series x (1 + x/2! + x^2/3! + ...) in fixed point, which keeps
+ *       the relative precision for tiny arguments; otherwise exp(x) - 1 with extra guard digits;</li>
  *   <li>{@code ln}/{@code log1p}: reduction to [1/sqrt 2, sqrt 2] by powers of two, then
  *       ln m = 2 atanh((m - 1)/(m + 1)) by its power series; ln 2 = 2 atanh(1/3), cached per precision;</li>
  *   <li>{@code sqrt}: Newton (Heron) iteration from a double-precision seed;</li>
@@ -52,6 +54,8 @@ public final class RefMath {
     private static final int GUARD = 12;
     /** Largest |x| accepted by exp (e^100000 ~ 1e43429: far beyond any physical rapidity here). */
     private static final BigDecimal EXP_LIMIT = BigDecimal.valueOf(100_000);
+    /** 2^-10: below it expm1 sums its own series. */
+    private static final BigDecimal EXPM1_SERIES_LIMIT = new BigDecimal("0.0009765625");
 
     private static final ThreadLocal<MathContext> CONTEXT =
             ThreadLocal.withInitial(() -> new MathContext(DEFAULT_DIGITS, RoundingMode.HALF_EVEN));
@@ -174,25 +178,44 @@ public final class RefMath {
         return er.round(mc);
     }
 
-    /** e^r for |r| below about 0.5, at precision w. */
+    /** Bits of binary fixed point equivalent to {@code digits} decimal digits, plus {@code extra}. */
+    private static int bitsFor(int digits, int extra) {
+        return (int) Math.ceil(digits * 3.3219280948873626) + extra;
+    }
+
+    /** round(x 2^bits) as an integer. */
+    private static BigInteger toFixed(BigDecimal x, int bits) {
+        return x.multiply(new BigDecimal(BigInteger.ONE.shiftLeft(bits))).setScale(0, RoundingMode.HALF_EVEN)
+                .unscaledValue();
+    }
+
+    /** v 2^-bits rounded to mc. */
+    private static BigDecimal fromFixed(BigInteger v, int bits, MathContext mc) {
+        return new BigDecimal(v).divide(new BigDecimal(BigInteger.ONE.shiftLeft(bits)), mc);
+    }
+
+    /**
+     * e^r for |r| below about 0.5, at precision w: binary fixed point, r / 2^j, Taylor series, j squarings
+     * (each squaring can double the relative error: j + 16 guard bits cover it).
+     */
     private static BigDecimal expReduced(BigDecimal r, MathContext w) {
-        final int halvings = 8;
-        BigDecimal y = r.divide(BigDecimal.valueOf(1L << halvings), w);
-        // e^y - 1 by Taylor, then e^y = 1 + that; squaring 8 times costs < 3 digits (covered by the guard)
-        BigDecimal sum = BigDecimal.ONE;
-        BigDecimal term = BigDecimal.ONE;
-        BigDecimal eps = tenToMinus(w.getPrecision() + 2);
-        for (int n = 1; n < 10_000; n++) {
-            term = term.multiply(y, w).divide(BigDecimal.valueOf(n), w);
-            sum = sum.add(term, w);
-            if (term.abs().compareTo(eps) < 0) {
+        final int halvings = Math.max(8, (int) Math.round(1.2 * Math.sqrt(w.getPrecision())));
+        final int bits = bitsFor(w.getPrecision(), halvings + 16);
+        BigInteger one = BigInteger.ONE.shiftLeft(bits);
+        BigInteger y = toFixed(r, bits).shiftRight(halvings);
+        BigInteger sum = one;
+        BigInteger term = one;
+        for (int n = 1; n < 100_000; n++) {
+            term = term.multiply(y).shiftRight(bits).divide(BigInteger.valueOf(n));
+            if (term.signum() == 0) {
                 break;
             }
+            sum = sum.add(term);
         }
         for (int i = 0; i < halvings; i++) {
-            sum = sum.multiply(sum, w);
+            sum = sum.multiply(sum).shiftRight(bits);
         }
-        return sum;
+        return fromFixed(sum, bits, w);
     }
 
     /** e^x - 1 without cancellation for small x. */
@@ -204,31 +227,26 @@ public final class RefMath {
         if (x.signum() == 0) {
             return BigDecimal.ZERO;
         }
-        MathContext w = new MathContext(mc.getPrecision() + GUARD, RoundingMode.HALF_EVEN);
-        if (x.abs().compareTo(HALF) > 0) {
+        if (x.abs().compareTo(EXPM1_SERIES_LIMIT) > 0) {
+            // |x| > 2^-10: the subtraction cancels at most 4 digits, covered by the extra guard
+            MathContext w = new MathContext(mc.getPrecision() + GUARD + 4, RoundingMode.HALF_EVEN);
             return exp(x, w).subtract(BigDecimal.ONE, w).round(mc);
         }
-        // reduce to |y| < 2^-12 by halving, Taylor, then double back with e(2y) = e(y)(e(y) + 2)
-        int j = 0;
-        BigDecimal y = x;
-        BigDecimal limit = new BigDecimal("0.000244140625"); // 2^-12
-        while (y.abs().compareTo(limit) > 0) {
-            y = y.divide(TWO, w);
-            j++;
-        }
-        BigDecimal sum = BigDecimal.ZERO;
-        BigDecimal term = BigDecimal.ONE;
-        for (int n = 1; n < 10_000; n++) {
-            term = term.multiply(y, w).divide(BigDecimal.valueOf(n), w);
-            sum = sum.add(term, w);
-            if (term.abs().compareTo(sum.abs().multiply(tenToMinus(w.getPrecision() + 1))) < 0) {
+        // e^x - 1 = x S(x), S(x) = sum x^n / (n+1)! ~ 1, summed in binary fixed point (no cancellation)
+        MathContext w = new MathContext(mc.getPrecision() + GUARD, RoundingMode.HALF_EVEN);
+        final int bits = bitsFor(w.getPrecision(), 16);
+        BigInteger one = BigInteger.ONE.shiftLeft(bits);
+        BigInteger y = toFixed(x, bits);
+        BigInteger sum = one;
+        BigInteger term = one;
+        for (int n = 1; n < 100_000; n++) {
+            term = term.multiply(y).shiftRight(bits).divide(BigInteger.valueOf(n + 1));
+            if (term.signum() == 0) {
                 break;
             }
+            sum = sum.add(term);
         }
-        for (int i = 0; i < j; i++) {
-            sum = sum.multiply(sum.add(TWO), w);
-        }
-        return sum.round(mc);
+        return x.multiply(fromFixed(sum, bits, w), w).round(mc);
     }
 
     // ------------------------------------------------------------------ logarithms
@@ -381,6 +399,32 @@ public final class RefMath {
         MathContext w = new MathContext(mc.getPrecision() + GUARD, RoundingMode.HALF_EVEN);
         BigDecimal e = exp(x.abs(), w);
         return e.add(BigDecimal.ONE.divide(e, w), w).multiply(HALF).round(mc);
+    }
+
+    /**
+     * {cosh x, sinh x} from a single exponential (sinh through expm1 for |x| &lt; 1, so it keeps its relative
+     * precision for small x).
+     */
+    public static BigDecimal[] coshSinh(BigDecimal x) {
+        MathContext mc = mc();
+        if (x.signum() == 0) {
+            return new BigDecimal[] {BigDecimal.ONE, BigDecimal.ZERO};
+        }
+        MathContext w = new MathContext(mc.getPrecision() + GUARD, RoundingMode.HALF_EVEN);
+        BigDecimal ch;
+        BigDecimal sh;
+        if (x.abs().compareTo(BigDecimal.ONE) < 0) {
+            BigDecimal e = expm1(x, w);
+            BigDecimal ep = e.add(BigDecimal.ONE);
+            ch = ep.add(BigDecimal.ONE.divide(ep, w), w).multiply(HALF);
+            sh = e.multiply(e.add(TWO), w).divide(ep.multiply(TWO), w);
+        } else {
+            BigDecimal e = exp(x, w);
+            BigDecimal inv = BigDecimal.ONE.divide(e, w);
+            ch = e.add(inv, w).multiply(HALF);
+            sh = e.subtract(inv, w).multiply(HALF);
+        }
+        return new BigDecimal[] {ch.round(mc), sh.round(mc)};
     }
 
     public static BigDecimal tanh(BigDecimal x) {

@@ -13,7 +13,10 @@ final class RefRoots {
 
     /** f and its derivative at x. */
     interface Fn {
-        /** Returns {f(x), f'(x)}; the derivative may be approximate (it only steers the steps). */
+        /**
+         * Returns {f(x), f'(x)} or {f(x), f'(x), noise}: the derivative may be approximate (it only steers the
+         * steps); the optional noise is the size of the rounding error in f(x), below which |f| means "converged".
+         */
         BigDecimal[] valueAndSlope(BigDecimal x);
     }
 
@@ -45,7 +48,7 @@ final class RefRoots {
             BigDecimal fx = v[0];
             BigDecimal df = v[1];
             int s = fx.signum();
-            if (s == 0) {
+            if (s == 0 || (v.length > 2 && fx.abs().compareTo(v[2]) <= 0)) {
                 return x;
             }
             if (s < 0) {

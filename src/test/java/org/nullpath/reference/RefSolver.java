@@ -27,14 +27,48 @@ public final class RefSolver {
 
     private static final BigDecimal TWO = BigDecimal.valueOf(2);
     private static final int MAX_DOUBLINGS = 6000;
+    /** Results estimated to carry fewer significant digits than this are recomputed at a higher precision. */
+    public static final int TARGET_DIGITS = 50;
+    /** Highest working precision the automatic re-solve goes to. */
+    public static final int MAX_DIGITS = 1000;
 
     private RefSolver() {
     }
 
     // ------------------------------------------------------------------ future cone
 
-    /** The arrival of the future light cone of {@code emission} on {@code receiver}, or a never-arrival. */
+    /**
+     * The arrival of the future light cone of {@code emission} on {@code receiver}, or a never-arrival. The
+     * event's coordinates are taken as exact. If the arrival is so ill-conditioned (very close to a horizon)
+     * that the working precision would leave fewer than {@value #TARGET_DIGITS} digits of light time, it is
+     * recomputed at a higher precision (worldlines rebuild their legs from the double inputs there).
+     */
     public static RefArrival futureCone(RefEvent emission, RefWorldline receiver) {
+        return futureCone(emission, receiver, null);
+    }
+
+    private static RefArrival futureCone(RefEvent emission, RefWorldline receiver, BigDecimal[] bracketHint) {
+        Attempt at = futureConeOnce(emission, receiver, bracketHint);
+        if (at.raiseTo() > 0) {
+            return RefMath.withDigits(at.raiseTo(), () -> futureCone(emission, receiver, at.bracket()));
+        }
+        return at.arrival();
+    }
+
+    /** One solve at the working precision: the arrival, or the precision to retry at and the bracket found. */
+    private record Attempt(RefArrival arrival, int raiseTo, BigDecimal[] bracket) {
+    }
+
+    /** The higher precision to re-solve at, or 0 when the estimate already meets the target. */
+    private static int raisedDigits(double estimatedDigits) {
+        int p = RefMath.digits();
+        if (estimatedDigits >= TARGET_DIGITS || p >= MAX_DIGITS) {
+            return 0;
+        }
+        return Math.min(MAX_DIGITS, p + (int) Math.ceil(TARGET_DIGITS - estimatedDigits) + 20);
+    }
+
+    private static Attempt futureConeOnce(RefEvent emission, RefWorldline receiver, BigDecimal[] bracketHint) {
         MathContext mc = RefMath.mc();
         BigDecimal te = emission.t();
         BigDecimal[] re = emission.position();
@@ -46,17 +80,24 @@ public final class RefSolver {
             if (Boolean.FALSE.equals(criterion)) {
                 throw new IllegalStateException("emission on the receiver's worldline judged beyond its horizon");
             }
-            return arrival(emission, receiver, BigDecimal.ZERO, g);
+            return new Attempt(arrival(emission, receiver, BigDecimal.ZERO, g), 0, null);
         }
         BigDecimal t1 = d0.divide(RefMath.C, mc);
         if (Boolean.FALSE.equals(criterion)) {
             confirmNever(g, t1, te, ((RefCraft) receiver).asymptote());
-            return RefArrival.neverArrives(emission);
+            return new Attempt(RefArrival.neverArrives(emission), 0, null);
         }
         BigDecimal lo = BigDecimal.ZERO;
         BigDecimal hi = t1;
+        if (bracketHint != null && g.valueAndSlope(bracketHint[0])[0].signum() < 0
+                && g.valueAndSlope(bracketHint[1])[0].signum() >= 0) {
+            // the bracket found at a lower precision still holds
+            lo = bracketHint[0];
+            hi = bracketHint[1];
+        }
         int i = 0;
-        while (g.valueAndSlope(hi)[0].signum() < 0) {
+        BigDecimal[] atHi;
+        while ((atHi = g.valueAndSlope(hi))[0].signum() < 0) {
             if (++i > MAX_DOUBLINGS) {
                 throw new IllegalStateException(criterion == null
                         ? "no arrival found for a receiver without a horizon"
@@ -65,8 +106,18 @@ public final class RefSolver {
             lo = hi;
             hi = hi.multiply(TWO);
         }
+        BigDecimal[] bracket = {lo, hi};
+        // conditioning at the top of the bracket (pessimistic for a receiver speeding away): if the working
+        // precision cannot give the target digits, go up before spending iterations here
+        int raise = raisedDigits(conditionedDigits(atHi[2].movePointRight(RefMath.digits() - 1),
+                atHi[1].multiply(hi, mc)));
+        if (raise > 0) {
+            return new Attempt(null, raise, bracket);
+        }
         BigDecimal lightTime = RefRoots.increasing(g, lo, hi, null, BigDecimal.ZERO);
-        return arrival(emission, receiver, lightTime, g);
+        RefArrival a = arrival(emission, receiver, lightTime, g);
+        raise = raisedDigits(a.estimatedDigits());
+        return raise > 0 ? new Attempt(null, raise, bracket) : new Attempt(a, 0, null);
     }
 
     /** Convenience: emission at exactly converted doubles. */
@@ -129,7 +180,11 @@ public final class RefSolver {
             if (dist.signum() > 0) {
                 slope = slope.subtract(RefMath.dot(s.velocity(), dr).divide(dist, mc), mc);
             }
-            return new BigDecimal[] {value, slope};
+            // rounding error of the value: 10^-(p-1) of the terms that enter it
+            BigDecimal noise = RefMath.C.multiply(t.abs().add(tEvent.abs()).add(lightTime), mc)
+                    .add(dist).add(RefMath.norm(s.position())).add(RefMath.norm(rEvent))
+                    .multiply(RefMath.tenToMinus(RefMath.digits() - 1), mc);
+            return new BigDecimal[] {value, slope, noise};
         };
     }
 
@@ -143,17 +198,41 @@ public final class RefSolver {
             BigDecimal magnitude = RefMath.C.multiply(t.abs().add(emission.t().abs()).add(lightTime), mc)
                     .add(RefMath.norm(s.position())).add(RefMath.norm(emission.position()));
             BigDecimal slope = g.valueAndSlope(lightTime)[1];
-            double cond = RefMath.log10Approx(magnitude) - RefMath.log10Approx(slope.multiply(lightTime, mc));
-            digits = Math.min(digits, RefMath.digits() - 1 - Math.max(0.0, cond));
+            digits = conditionedDigits(magnitude, slope.multiply(lightTime, mc));
         }
         return new RefArrival(false, emission, t, s.clock(), s.position(), lightTime, s, digits);
     }
 
+    /**
+     * Digits left in a root x of g when g is evaluated with relative error 10^-p on terms of size
+     * {@code magnitude}: p - 2 - log10(magnitude / (g' |x|)), capped at p - 6 (the solver's tolerance).
+     * (The cone solvers stop once |g| is below 10^-(p-1) times those terms.)
+     */
+    private static double conditionedDigits(BigDecimal magnitude, BigDecimal slopeTimesRoot) {
+        int p = RefMath.digits();
+        if (slopeTimesRoot.signum() <= 0 || magnitude.signum() <= 0) {
+            return p - 6;
+        }
+        double cond = RefMath.log10Approx(magnitude) - RefMath.log10Approx(slopeTimesRoot.abs());
+        return Math.min(p - 6, p - 2 - Math.max(0.0, cond));
+    }
+
     // ------------------------------------------------------------------ past cone
 
-    /** The emission event on {@code sender} whose signal arrives at {@code reception} (with the sender's clock). */
+    /**
+     * The emission event on {@code sender} whose signal arrives at {@code reception} (with the sender's clock);
+     * re-solved at a higher precision when ill-conditioned, as in {@link #futureCone}.
+     */
     public static RefEvent pastCone(RefEvent reception, RefWorldline sender) {
+        double[] digits = new double[1];
+        RefEvent e = pastConeOnce(reception, sender, digits);
+        int raised = raisedDigits(digits[0]);
+        return raised > 0 ? RefMath.withDigits(raised, () -> pastCone(reception, sender)) : e;
+    }
+
+    private static RefEvent pastConeOnce(RefEvent reception, RefWorldline sender, double[] digitsOut) {
         MathContext mc = RefMath.mc();
+        digitsOut[0] = RefMath.digits() - 6;
         BigDecimal tr = reception.t();
         BigDecimal[] rr = reception.position();
         RefState now = sender.atTime(tr);
@@ -173,7 +252,11 @@ public final class RefSolver {
             hi = hi.multiply(TWO);
         }
         BigDecimal lightTime = RefRoots.increasing(g, lo, hi, null, BigDecimal.ZERO);
-        return RefEvent.of(sender.atTime(tr.subtract(lightTime, mc)));
+        RefState s = sender.atTime(tr.subtract(lightTime, mc));
+        BigDecimal magnitude = RefMath.C.multiply(tr.abs().add(s.t().abs()).add(lightTime), mc)
+                .add(RefMath.norm(s.position())).add(RefMath.norm(rr));
+        digitsOut[0] = conditionedDigits(magnitude, g.valueAndSlope(lightTime)[1].multiply(lightTime, mc));
+        return RefEvent.of(s);
     }
 
     /**
@@ -211,10 +294,22 @@ public final class RefSolver {
         return doppler(sender, receiver).subtract(BigDecimal.ONE, RefMath.mc());
     }
 
-    /** One message sent when the sender's clock reads {@code sendClock}. */
+    /**
+     * One message sent when the sender's clock reads {@code sendClock}; when the arrival is ill-conditioned
+     * the whole message (send event included) is recomputed at a higher precision.
+     */
     public static RefSignal send(RefWorldline sender, BigDecimal sendClock, RefWorldline receiver) {
+        return send(sender, sendClock, receiver, null);
+    }
+
+    private static RefSignal send(RefWorldline sender, BigDecimal sendClock, RefWorldline receiver,
+                                  BigDecimal[] bracketHint) {
         RefState tx = sender.atClock(sendClock);
-        RefArrival arrival = futureCone(RefEvent.of(tx), receiver);
+        Attempt at = futureConeOnce(RefEvent.of(tx), receiver, bracketHint);
+        if (at.raiseTo() > 0) {
+            return RefMath.withDigits(at.raiseTo(), () -> send(sender, sendClock, receiver, at.bracket()));
+        }
+        RefArrival arrival = at.arrival();
         if (arrival.never()) {
             return new RefSignal(tx, arrival, null, null);
         }
@@ -271,9 +366,17 @@ public final class RefSolver {
     /**
      * The supremum of the sender's mission times whose signals still reach {@code receiver}, with the sender's
      * clock there; none when the receiver has no open-ended burn or when every send arrives (a sender whose own
-     * open-ended burn runs in exactly the same direction with a limit not above the receiver's).
+     * open-ended burn runs in exactly the same direction with a limit not above the receiver's). Re-solved at a
+     * higher precision when ill-conditioned, as in {@link #futureCone}.
      */
     public static RefHorizon horizon(RefWorldline sender, RefCraft receiver) {
+        double[] digits = new double[1];
+        RefHorizon h = horizonOnce(sender, receiver, digits);
+        int raised = h.exists() ? raisedDigits(digits[0]) : 0;
+        return raised > 0 ? RefMath.withDigits(raised, () -> horizon(sender, receiver)) : h;
+    }
+
+    private static RefHorizon horizonOnce(RefWorldline sender, RefCraft receiver, double[] digitsOut) {
         RefCraft.Asymptote as = receiver.asymptote();
         if (as == null) {
             return RefHorizon.none();
@@ -324,7 +427,11 @@ public final class RefSolver {
             }
         }
         BigDecimal t = RefRoots.increasing(gFn, lo, hi, null, scale.multiply(RefMath.tenToMinus(30)));
-        return new RefHorizon(true, t, sender.atTime(t).clock(), limit);
+        RefState s = sender.atTime(t);
+        BigDecimal magnitude = RefMath.C.multiply(t.abs(), mc).add(RefMath.norm(s.position()))
+                .add(RefMath.norm(r0)).add(limit.abs());
+        digitsOut[0] = conditionedDigits(magnitude, gFn.valueAndSlope(t)[1].multiply(t.abs().add(BigDecimal.ONE), mc));
+        return new RefHorizon(true, t, s.clock(), limit);
     }
 
     /** Exact test on the doubles given as headings (signed by the acceleration): parallel, same sense. */

@@ -2,6 +2,8 @@ package org.nullpath.reference;
 
 import java.math.BigDecimal;
 import java.math.MathContext;
+import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * An inertial station: position r(t) = r0 + v t (r0 at mission time 0), clock = t / gamma + offset, so the
@@ -12,13 +14,14 @@ public final class RefStation implements RefWorldline {
     private final BigDecimal[] position0;
     private final BigDecimal[] velocity;
     private final BigDecimal offset;
-    private final BigDecimal gamma;
+    /** gamma at each working precision used so far. */
+    private final Map<Integer, BigDecimal> gammas = new ConcurrentHashMap<>();
 
     private RefStation(BigDecimal[] position0, BigDecimal[] velocity, BigDecimal offset) {
         this.position0 = position0;
         this.velocity = velocity;
         this.offset = offset;
-        this.gamma = RefState.gammaOf(velocity);
+        gamma(); // validates |v| < c
     }
 
     /**
@@ -41,20 +44,23 @@ public final class RefStation implements RefWorldline {
         return new BigDecimal[] {BigDecimal.ZERO, BigDecimal.ZERO, BigDecimal.ZERO};
     }
 
+    /** The Lorentz factor 1 / sqrt(1 - v^2/c^2) at the working precision. */
     public BigDecimal gamma() {
-        return gamma;
+        return gammas.computeIfAbsent(RefMath.digits(), p -> RefState.gammaOf(velocity));
     }
 
     @Override
     public RefState atTime(BigDecimal t) {
         MathContext mc = RefMath.mc();
         BigDecimal[] r = RefMath.add(position0, RefMath.scale(velocity, t));
+        BigDecimal gamma = gamma();
         BigDecimal clock = t.divide(gamma, mc).add(offset, mc);
         return new RefState(clock, t, r, velocity, gamma);
     }
 
     @Override
     public RefState atClock(BigDecimal clock) {
+        BigDecimal gamma = gamma();
         BigDecimal t = clock.subtract(offset, RefMath.mc()).multiply(gamma, RefMath.mc());
         BigDecimal[] r = RefMath.add(position0, RefMath.scale(velocity, t));
         return new RefState(clock, t, r, velocity, gamma);
