@@ -1,0 +1,49 @@
+package org.nullpath.scenario;
+
+import static org.junit.jupiter.api.Assertions.assertAll;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+import java.util.List;
+import java.util.stream.Collectors;
+
+/** Helpers for tests that a bad scenario gives exactly the expected problems. */
+final class ProblemAssertions {
+    static final String FILE = "scenario.yaml";
+
+    private ProblemAssertions() {
+    }
+
+    /** Every problem of a scenario that must not load. */
+    static List<Problem> problemsOf(String yaml) {
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load(yaml, FILE));
+        assertTrue(!e.problems().isEmpty(), "a ScenarioException carries at least one problem");
+        return e.problems();
+    }
+
+    /** The one problem of a scenario with exactly one thing wrong. */
+    static Problem onlyProblemOf(String yaml) {
+        List<Problem> all = problemsOf(yaml);
+        assertEquals(1, all.size(), () -> "expected one problem, got:\n" + rendered(all));
+        return all.get(0);
+    }
+
+    static String rendered(List<Problem> problems) {
+        return problems.stream().map(Problem::render).collect(Collectors.joining("\n"));
+    }
+
+    /** Asserts where a problem is and that its message contains every one of {@code gist}. */
+    static void assertProblem(Problem p, int line, int column, String key, String... gist) {
+        assertAll(p.render(),
+                () -> assertEquals(FILE, p.file(), "file"),
+                () -> assertEquals(line, p.line(), "line"),
+                () -> assertEquals(column, p.column(), "column"),
+                () -> assertEquals(key, p.key(), "key"),
+                () -> {
+                    for (String g : gist) {
+                        assertTrue(p.message().contains(g), "message should contain '" + g + "': " + p.message());
+                    }
+                });
+    }
+}
