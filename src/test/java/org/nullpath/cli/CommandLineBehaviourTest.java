@@ -1,0 +1,245 @@
+package org.nullpath.cli;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.stream.Stream;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
+import org.junit.jupiter.params.provider.MethodSource;
+
+import static org.junit.jupiter.api.Assertions.assertArrayEquals;
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/** The command line as a user meets it: exit codes, messages, and what is (not) written. */
+class CommandLineBehaviourTest {
+    @TempDir
+    Path tmp;
+
+    static final String GOOD = """
+            title: command line check
+            stations:
+              home: {}
+            craft:
+              probe:
+                heading: [1, 0, 0]
+                legs:
+                  - burn: {acceleration: 1 g0, duration: forever}
+            links:
+              up: {from: home, to: probe}
+              down: {from: probe, to: home}
+            messages:
+              - {link: up, first: 0 d, last: 1.5 yr, every: 10 d}
+              - {link: down, at: [1 d, 1 yr, 5 yr]}
+            cutoffs:
+              - {name: early, link: up, arrive-by: 0.5 yr}
+            exchanges:
+              - {name: ping, query: up, reply: down, turnaround: 1 h, first: 0 d, last: 1 yr, every: 30 d}
+            """;
+
+    private Path write(String name, String text) throws IOException {
+        Path f = tmp.resolve(name);
+        Files.writeString(f, text);
+        return f;
+    }
+
+    private static List<String> listing(Path dir) throws IOException {
+        List<String> out = new ArrayList<>();
+        if (!Files.exists(dir)) {
+            return out;
+        }
+        try (Stream<Path> s = Files.walk(dir)) {
+            for (Path p : s.sorted().toList()) {
+                out.add(dir.relativize(p) + (Files.isRegularFile(p) ? ":" + Files.size(p) + ":" + Files.readString(p).hashCode() : ""));
+            }
+        }
+        return out;
+    }
+
+    @Test
+    void planWritesEveryContractFileAndASummary() throws IOException {
+        Path out = tmp.resolve("out");
+        PlanRun.Outcome o = PlanRun.run("plan", write("s.yaml", GOOD).toString(), "--out", out.toString());
+        assertEquals(0, o.exitCode(), o.err());
+        for (String f : List.of("up.csv", "down.csv", "cutoffs.csv", "horizons.csv", "exchanges-ping.csv", "summary.json")) {
+            assertTrue(Files.isRegularFile(out.resolve(f)), f);
+        }
+        assertTrue(o.out().contains("command line check"), o.out());
+        assertTrue(o.out().contains("horizon"), o.out());
+        String json = Files.readString(out.resolve("summary.json"));
+        assertTrue(json.contains("\"title\" : \"command line check\""), json);
+        assertTrue(json.contains("\"has_horizon\" : true"), json);
+    }
+
+    @Test
+    void twoRunsGiveByteIdenticalFiles() throws IOException {
+        Path s = write("s.yaml", GOOD);
+        Path a = tmp.resolve("a");
+        Path b = tmp.resolve("b");
+        assertEquals(0, PlanRun.run("plan", s.toString(), "--out", a.toString()).exitCode());
+        assertEquals(0, PlanRun.run("plan", s.toString(), "--out", b.toString()).exitCode());
+        try (Stream<Path> files = Files.list(a)) {
+            for (Path f : files.toList()) {
+                assertArrayEquals(Files.readAllBytes(f), Files.readAllBytes(b.resolve(f.getFileName())), f.toString());
+            }
+        }
+    }
+
+    @Test
+    void anExistingOutputFolderIsUntouchedAfterABadScenario() throws IOException {
+        Path out = tmp.resolve("keep");
+        Files.createDirectories(out);
+        Files.writeString(out.resolve("notes.txt"), "mine");
+        Files.writeString(out.resolve("up.csv"), "an older plan");
+        List<String> before = listing(tmp);
+        PlanRun.Outcome o = PlanRun.run("plan", write("bad.yaml", GOOD.replace("1 g0", "1 ly")).toString(),
+                "--out", out.toString());
+        assertEquals(2, o.exitCode());
+        List<String> after = listing(tmp);
+        assertEquals(before.size() + 1, after.size(), "only the scenario file itself was added");
+        assertEquals("an older plan", Files.readString(out.resolve("up.csv")));
+        assertFalse(o.err().contains("Exception"), o.err());
+    }
+
+    @Test
+    void aMissingOutputFolderIsNotCreatedAfterABadScenario() throws IOException {
+        Path out = tmp.resolve("never-made");
+        PlanRun.Outcome o = PlanRun.run("plan", write("bad.yaml", "title: [").toString(), "--out", out.toString());
+        assertEquals(2, o.exitCode());
+        assertFalse(Files.exists(out));
+        try (Stream<Path> s = Files.list(tmp)) {
+            assertEquals(1, s.count(), "nothing left beside the output folder");
+        }
+    }
+
+    @Test
+    void anExistingOutputFolderKeepsItsOtherFilesAfterASuccessfulPlan() throws IOException {
+        Path out = tmp.resolve("shared");
+        Files.createDirectories(out);
+        Files.writeString(out.resolve("notes.txt"), "mine");
+        assertEquals(0, PlanRun.run("plan", write("s.yaml", GOOD).toString(), "--out", out.toString()).exitCode());
+        assertEquals("mine", Files.readString(out.resolve("notes.txt")));
+        assertTrue(Files.isRegularFile(out.resolve("up.csv")));
+        try (Stream<Path> s = Files.list(tmp)) {
+            assertEquals(2, s.count(), "no staging folder left behind");
+        }
+    }
+
+    static Stream<Arguments> badScenarios() {
+        return Stream.of(
+                Arguments.of("yaml syntax", GOOD.replace("title: command line check", "title: [unclosed"), "s.yaml:"),
+                Arguments.of("unknown key", GOOD.replace("heading:", "headin:"), "did you mean 'heading'"),
+                Arguments.of("wrong dimension", GOOD.replace("acceleration: 1 g0", "acceleration: 4 ly"),
+                        "craft.probe.legs[0].burn.acceleration: expected an acceleration, got a length"),
+                Arguments.of("nan", GOOD.replace("acceleration: 1 g0", "acceleration: NaN g0"), "acceleration"),
+                Arguments.of("speed of light", GOOD.replace("heading: [1, 0, 0]", "heading: [1, 0, 0]\n    start-speed: 1 c"),
+                        "start-speed"),
+                Arguments.of("unreachable until-speed", GOOD.replace("duration: forever", "until-speed: -0.5 c"),
+                        "until-speed"),
+                Arguments.of("open-ended not last", GOOD.replace("      - burn: {acceleration: 1 g0, duration: forever}",
+                        "      - burn: {acceleration: 1 g0, duration: forever}\n      - coast: {duration: 1 d}"), "last"),
+                Arguments.of("zero heading", GOOD.replace("heading: [1, 0, 0]", "heading: [0, 0, 0]"), "heading"),
+                Arguments.of("unknown node", GOOD.replace("to: probe}", "to: prob}"), "links.up.to"),
+                Arguments.of("non-positive every", GOOD.replace("every: 10 d", "every: 0 d"), "every"),
+                Arguments.of("alias bomb", "a: &a [x, x, x, x, x, x, x, x, x]\n"
+                        + "b: &b [*a, *a, *a, *a, *a, *a, *a, *a, *a]\n"
+                        + "c: &c [*b, *b, *b, *b, *b, *b, *b, *b, *b]\n"
+                        + "d: &d [*c, *c, *c, *c, *c, *c, *c, *c, *c]\n"
+                        + "e: &e [*d, *d, *d, *d, *d, *d, *d, *d, *d]\n"
+                        + "f: &f [*e, *e, *e, *e, *e, *e, *e, *e, *e]\n"
+                        + "g: &g [*f, *f, *f, *f, *f, *f, *f, *f, *f]\n", "alias"));
+    }
+
+    @ParameterizedTest(name = "{0}")
+    @MethodSource("badScenarios")
+    void badInputExitsWithTwoAndOneLinePerProblemWithoutAStackTrace(String what, String yaml, String expected)
+            throws IOException {
+        Path out = tmp.resolve("out");
+        PlanRun.Outcome o = PlanRun.run("plan", write("s.yaml", yaml).toString(), "--out", out.toString());
+        assertEquals(2, o.exitCode(), what + ": " + o.err());
+        assertTrue(o.err().contains(expected), what + ": " + o.err());
+        assertTrue(o.err().contains("s.yaml"), "names the file: " + o.err());
+        assertFalse(o.err().contains("\tat "), "no stack trace: " + o.err());
+        assertFalse(Files.exists(out), what);
+        PlanRun.Outcome c = PlanRun.run("check", tmp.resolve("s.yaml").toString());
+        assertEquals(2, c.exitCode(), what);
+    }
+
+    @Test
+    void errorsNameLineAndColumnOfTheOffendingValue() throws IOException {
+        String yaml = GOOD.replace("acceleration: 1 g0", "acceleration: 4 ly");
+        PlanRun.Outcome o = PlanRun.run("check", write("s.yaml", yaml).toString());
+        // the value '4 ly' stands on line 8, at column 39 of "      - burn: {acceleration: 4 ly, duration: forever}"
+        assertTrue(o.err().contains("s.yaml:8:"), o.err());
+        String line = yaml.lines().toList().get(7);
+        int column = line.indexOf("4 ly") + 1;
+        assertTrue(o.err().contains("s.yaml:8:" + column + ": craft.probe.legs[0].burn.acceleration"), o.err());
+    }
+
+    @Test
+    void aMessageFloodOverTheCapIsRefusedBeforeComputing() throws IOException {
+        Path s = write("s.yaml", GOOD.replace("every: 10 d", "every: 1 ms"));
+        Path out = tmp.resolve("out");
+        PlanRun.Outcome o = PlanRun.run("plan", s.toString(), "--out", out.toString());
+        assertEquals(2, o.exitCode());
+        assertTrue(o.err().contains("more than the cap of 50000000"), o.err());
+        assertTrue(o.err().contains("--max-messages"), o.err());
+        assertFalse(Files.exists(out));
+        PlanRun.Outcome lower = PlanRun.run("plan", write("t.yaml", GOOD).toString(), "--out", out.toString(),
+                "--max-messages", "10");
+        assertEquals(2, lower.exitCode());
+    }
+
+    @Test
+    void aMissingScenarioFileIsAnInputError() {
+        PlanRun.Outcome o = PlanRun.run("plan", tmp.resolve("nope.yaml").toString(), "--out", tmp.resolve("o").toString());
+        assertEquals(2, o.exitCode());
+        assertTrue(o.err().contains("nope.yaml"), o.err());
+    }
+
+    @Test
+    void aBadOptionIsAnInputError() throws IOException {
+        PlanRun.Outcome o = PlanRun.run("plan", write("s.yaml", GOOD).toString());
+        assertEquals(2, o.exitCode(), "--out is required");
+        assertEquals(2, PlanRun.run("plan", "--frobnicate").exitCode());
+    }
+
+    @Test
+    void checkPrintsOneLineForAUsableScenario() throws IOException {
+        PlanRun.Outcome o = PlanRun.run("check", write("s.yaml", GOOD).toString());
+        assertEquals(0, o.exitCode(), o.err());
+        assertEquals(1, o.out().lines().count(), o.out());
+        assertTrue(o.out().contains("usable"), o.out());
+    }
+
+    @Test
+    void helpListsPlanAndCheckAndVersionPrintsTheVersion() {
+        PlanRun.Outcome h = PlanRun.run("--help");
+        assertEquals(0, h.exitCode());
+        assertTrue(h.out().contains("plan") && h.out().contains("check"), h.out());
+        PlanRun.Outcome v = PlanRun.run("--version");
+        assertEquals(0, v.exitCode());
+        assertTrue(v.out().startsWith("nullpath "), v.out());
+    }
+
+    @Test
+    void everyDemoScenarioChecksAndPlansCleanly() throws IOException {
+        try (Stream<Path> demos = Files.list(Path.of("link-scenarios"))) {
+            List<Path> files = demos.filter(p -> p.toString().endsWith(".yaml")).sorted().toList();
+            assertTrue(files.size() >= 3, "at least three demos");
+            for (Path demo : files) {
+                assertEquals(0, PlanRun.run("check", demo.toString()).exitCode(), demo.toString());
+                Path out = tmp.resolve("demo-" + demo.getFileName());
+                PlanRun.Outcome o = PlanRun.run("plan", demo.toString(), "--out", out.toString());
+                assertEquals(0, o.exitCode(), demo + ": " + o.err());
+            }
+        }
+    }
+}
