@@ -17,6 +17,7 @@ import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.ExchangeRow;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.MessageRow;
+import org.nullpath.schedule.WindowRow;
 
 import static org.nullpath.report.Cells.bool;
 import static org.nullpath.report.Cells.num;
@@ -119,6 +120,15 @@ public final class CsvTables {
             p.printRecord("link", "has_horizon", "last_send_clock_s", "last_send_time_s");
             for (HorizonRow r : rows) {
                 p.printRecord(r.link(), bool(r.hasHorizon()), num(r.lastSendClock()), num(r.lastSendTime()));
+            }
+        }
+    }
+
+    public static void writeWindows(Path file, List<WindowRow> rows) throws IOException {
+        try (CSVPrinter p = new CSVPrinter(Files.newBufferedWriter(file, StandardCharsets.UTF_8), FORMAT)) {
+            p.printRecord("link", "opens_send_clock_s", "closes_send_clock_s", "closed_by");
+            for (WindowRow r : rows) {
+                p.printRecord(r.link(), num(r.opensClock()), num(r.closesClock()), r.closedBy());
             }
         }
     }

@@ -10,6 +10,8 @@ import org.nullpath.schedule.Deadlines;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkSchedule;
 import org.nullpath.schedule.LinkTally;
+import org.nullpath.schedule.WindowRow;
+import org.nullpath.schedule.Windows;
 
 /**
  * Runs a scenario's schedules and writes every output file into an {@link OutputFolder}: one CSV per
@@ -26,9 +28,10 @@ public final class PlanOutput {
      * @param exchanges per-exchange counts of completed round trips, in file order
      * @param cutoffs   cut-off rows
      * @param horizons  horizon rows
+     * @param windows   link windows of every scanned range
      */
     public record Result(List<LinkTally> links, List<ExchangeTally> exchanges, List<CutoffRow> cutoffs,
-                         List<HorizonRow> horizons) {
+                         List<HorizonRow> horizons, List<WindowRow> windows) {
     }
 
     /** @param name exchange name; @param roundTrips planned; @param complete completed */
@@ -55,7 +58,14 @@ public final class PlanOutput {
                 exchanges.add(new ExchangeTally(e.name(), e.count(), complete));
             }
         }
-        Result result = new Result(tallies, exchanges, cutoffs, horizons);
+        List<WindowRow> windows = new ArrayList<>();
+        for (Scenario.WindowScan w : s.windows()) {
+            windows.addAll(Windows.scan(s, w));
+        }
+        if (!s.windows().isEmpty()) {
+            CsvTables.writeWindows(out.file("windows.csv"), windows);
+        }
+        Result result = new Result(tallies, exchanges, cutoffs, horizons, windows);
         SummaryJson.write(out.file("summary.json"), s, result);
         return result;
     }
