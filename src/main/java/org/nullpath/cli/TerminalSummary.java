@@ -6,9 +6,11 @@ import java.nio.file.Path;
 import org.nullpath.report.PlanOutput;
 import org.nullpath.report.Readable;
 import org.nullpath.scenario.Scenario;
+import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkTally;
+import org.nullpath.schedule.WindowRow;
 
 /** The few lines {@code plan} prints when it is done. */
 final class TerminalSummary {
@@ -42,7 +44,37 @@ final class TerminalSummary {
         for (PlanOutput.ExchangeTally e : r.exchanges()) {
             out.printf("  exchange %-10s %d of %d round trips complete%n", e.name(), e.complete(), e.roundTrips());
         }
-        out.printf("  worst margin: no link budget terms in this scenario%n");
+        double worst = Double.NaN;
+        String worstLink = null;
+        for (LinkTally t : r.links()) {
+            BudgetTally.Figures b = t.budget();
+            if (b == null) {
+                continue;
+            }
+            out.printf("  budget %-12s margin %s to %s dB; %d of %d delivered close; received %s to %s Hz;"
+                            + " Doppler rate up to %s Hz/s; rate that closes for all: %s bit/s%n",
+                    t.link(), Readable.number(b.worstMarginDb()), Readable.number(b.bestMarginDb()), b.closing(),
+                    t.delivered(), Readable.number(b.minRxFrequencyHz()), Readable.number(b.maxRxFrequencyHz()),
+                    Readable.number(b.maxAbsDopplerRateHzPerS()), Readable.number(b.minMaxDataRateBps()));
+            if (b.extremeShift()) {
+                out.printf("  NOTE %s: the received frequency leaves [carrier/2, 2 x carrier] (%s to %s Hz):"
+                        + " another band entirely%n", t.link(), Readable.number(b.minRxFrequencyHz()),
+                        Readable.number(b.maxRxFrequencyHz()));
+            }
+            if (!Double.isNaN(b.worstMarginDb()) && (Double.isNaN(worst) || b.worstMarginDb() < worst)) {
+                worst = b.worstMarginDb();
+                worstLink = t.link();
+            }
+        }
+        for (WindowRow w : r.windows()) {
+            out.printf("  window on %-10s sends from %s to %s (sender's clock), closed by %s%n", w.link(),
+                    Readable.time(w.opensClock()), Readable.time(w.closesClock()), w.closedBy());
+        }
+        if (worstLink == null) {
+            out.printf("  worst margin: no link budget terms in this scenario%n");
+        } else {
+            out.printf("  worst margin: %s dB on %s%n", Readable.number(worst), worstLink);
+        }
         out.printf("  written to %s%n", dir);
     }
 }

@@ -11,9 +11,11 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import org.hipparchus.util.FastMath;
 import org.nullpath.scenario.Scenario;
+import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkTally;
+import org.nullpath.schedule.WindowRow;
 import org.nullpath.worldline.LegSpan;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.LineState;
@@ -75,6 +77,22 @@ final class SummaryJson {
             m.put("max_doppler", nan(t.maxDoppler()));
             m.put("min_light_time_s", nan(t.minLightTime()));
             m.put("max_light_time_s", nan(t.maxLightTime()));
+            BudgetTally.Figures b = t.budget();
+            if (b != null) {
+                Map<String, Object> bm = new LinkedHashMap<>();
+                bm.put("worst_margin_db", nan(b.worstMarginDb()));
+                bm.put("best_margin_db", nan(b.bestMarginDb()));
+                bm.put("messages_closing", b.closing());
+                bm.put("min_rx_frequency_hz", nan(b.minRxFrequencyHz()));
+                bm.put("max_rx_frequency_hz", nan(b.maxRxFrequencyHz()));
+                bm.put("max_abs_doppler_rate_hz_per_s", nan(b.maxAbsDopplerRateHzPerS()));
+                bm.put("max_data_rate_closing_all_bps", nan(b.minMaxDataRateBps()));
+                bm.put("max_data_rate_closing_any_bps", nan(b.maxMaxDataRateBps()));
+                bm.put("outside_tuning_range", b.outOfTuning());
+                bm.put("over_doppler_rate", b.overDopplerRate());
+                bm.put("extreme_shift", b.extremeShift());
+                m.put("budget", bm);
+            }
             links.add(m);
         }
         root.put("links", links);
@@ -109,6 +127,16 @@ final class SummaryJson {
             exchanges.add(m);
         }
         root.put("exchanges", exchanges);
+        List<Object> windows = new ArrayList<>();
+        for (WindowRow w : r.windows()) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("link", w.link());
+            m.put("opens_send_clock_s", w.opensClock());
+            m.put("closes_send_clock_s", w.closesClock());
+            m.put("closed_by", w.closedBy());
+            windows.add(m);
+        }
+        root.put("windows", windows);
         new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), root);
     }
 
