@@ -27,13 +27,21 @@ import org.nullpath.worldline.Worldline;
  * {@value #SAMPLES} evenly spaced send clocks to bracket sign changes (a condition that flips twice
  * between two samples, closer together than 1/{@value #SAMPLES} of the range, can be missed); each
  * bracketed edge is then found by Brent's method (Hipparchus) to a relative accuracy of
- * {@value #EDGE_RELATIVE_ACCURACY} in the send clock, and the horizon edge is exact.
+ * {@value #EDGE_RELATIVE_ACCURACY} in the send clock, and the horizon edge is exact. Approaching a
+ * horizon the margin always collapses (D -> 0, the distance -> infinity); when it does so only within
+ * {@value #HORIZON_SNAP} (relative) of the horizon, the window is reported as closed by the horizon.
  */
 public final class Windows {
     /** Evenly spaced samples used to bracket edges. */
     public static final int SAMPLES = 2048;
     /** Relative accuracy of each edge in the send clock. */
     public static final double EDGE_RELATIVE_ACCURACY = 1e-12;
+
+    /**
+     * A window whose other conditions fail only within this relative distance of the horizon is
+     * reported as closed by the horizon (the contract's edge tolerance).
+     */
+    public static final double HORIZON_SNAP = 1e-9;
 
     private static final String[] NAMES = {"horizon", "margin", "tuning", "doppler-rate"};
 
@@ -91,7 +99,13 @@ public final class Windows {
             ok[k] = !ok[k];
             boolean now = all(ok);
             if (open && !now) {
-                rows.add(new WindowRow(w.link(), opened, e[0], NAMES[k]));
+                if (horizon.exists() && Math.abs(lastClock - e[0]) <= HORIZON_SNAP * Math.abs(lastClock)) {
+                    // the margin collapses (as D -> 0 and R -> infinity) only within the edge tolerance of
+                    // the horizon itself: to that tolerance the horizon closed the window
+                    rows.add(new WindowRow(w.link(), opened, lastClock, NAMES[0]));
+                } else {
+                    rows.add(new WindowRow(w.link(), opened, e[0], NAMES[k]));
+                }
             } else if (!open && now) {
                 opened = e[0];
             }
