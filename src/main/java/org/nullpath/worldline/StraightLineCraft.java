@@ -33,7 +33,7 @@ public final class StraightLineCraft implements Worldline {
     private final Optional<Asymptote> asymptote;
 
     /** One piece of the worldline at constant proper acceleration; lo/hi null where it runs to infinity. */
-    private record Segment(double a, LineState ref, LineState lo, LineState hi) {
+    private record Segment(Piece piece, LineState ref, LineState lo, LineState hi) {
     }
 
     private StraightLineCraft(Vec3 origin, Vec3 heading, List<Segment> segments, List<LegSpan> legs) {
@@ -67,7 +67,7 @@ public final class StraightLineCraft implements Worldline {
         double eta0 = Hyperbolic.rapidityOfBeta(startSpeed / C);
         LineState start = new LineState(startClock, startTime, 0.0, eta0, 0);
         List<Segment> segs = new ArrayList<>();
-        segs.add(new Segment(0.0, start, null, start));
+        segs.add(new Segment(new ConstantPiece(0.0), start, null, start));
         List<LegSpan> spans = new ArrayList<>();
         LineState cur = start;
         boolean open = false;
@@ -76,33 +76,41 @@ public final class StraightLineCraft implements Worldline {
             if (open) {
                 throw new WorldlineException(i - 1, "an open-ended leg must be the last leg");
             }
-            double a = leg.accelerationMetresPerSecond2();
             if (leg.end() instanceof LegSpec.Forever) {
                 if (i != legSpecs.size() - 1) {
                     throw new WorldlineException(i, "an open-ended leg (duration: forever) must be the last leg");
                 }
                 LineState lo = withSegment(cur, segs.size());
-                segs.add(new Segment(a, lo, lo, null));
+                segs.add(new Segment(new ConstantPiece(leg.accelerationMetresPerSecond2()), lo, lo, null));
                 spans.add(new LegSpan(i, leg, lo, null));
                 open = true;
                 continue;
             }
-            double du = properTimeOfLeg(i, leg, cur);
             LineState lo = withSegment(cur, segs.size());
+            Piece piece;
+            double du;
+            if (leg instanceof LegSpec.ThrustRocket || leg instanceof LegSpec.Sail || leg instanceof LegSpec.Profile) {
+                IntegratedPiece ip = integrated(i, leg, lo, startPosition, n);
+                piece = ip;
+                du = ip.duration();
+            } else {
+                piece = new ConstantPiece(leg.accelerationMetresPerSecond2());
+                du = properTimeOfLeg(i, leg, cur);
+            }
             LineState hi = new LineState(cur.clock() + du,
-                    cur.timeSeconds() + Hyperbolic.timeOffset(cur.rapidity(), a, du),
-                    cur.along() + Hyperbolic.distanceOffset(cur.rapidity(), a, du),
-                    cur.rapidity() + a * du / C, segs.size());
+                    cur.timeSeconds() + piece.timeOffset(lo, du),
+                    cur.along() + piece.distanceOffset(lo, du),
+                    piece.rapidityAfter(lo, du), segs.size());
             checkRepresentable(i, hi);
             spans.add(new LegSpan(i, leg, lo, hi));
             if (du > 0) {
-                segs.add(new Segment(a, lo, lo, hi));
+                segs.add(new Segment(piece, lo, lo, hi));
             }
             cur = hi;
         }
         if (!open) {
             LineState lo = withSegment(cur, segs.size());
-            segs.add(new Segment(0.0, lo, lo, null));
+            segs.add(new Segment(new ConstantPiece(0.0), lo, lo, null));
         }
         return new StraightLineCraft(startPosition, n, Collections.unmodifiableList(segs),
                 Collections.unmodifiableList(spans));
@@ -118,6 +126,40 @@ public final class StraightLineCraft implements Worldline {
             throw new WorldlineException(leg, "the leg reaches a rapidity or distance beyond what double precision can hold"
                     + " (rapidity limit " + MAX_RAPIDITY + ")");
         }
+    }
+
+    /** The integrated piece of a profiled leg starting at {@code lo}. */
+    private static IntegratedPiece integrated(int i, LegSpec leg, LineState lo, Vec3 origin, Vec3 n) {
+        if (leg instanceof LegSpec.ThrustRocket r) {
+            double f = r.thrustNewtons();
+            double m0 = r.initialMassKg();
+            double rate = Math.abs(f) / r.exhaustSpeedMetresPerSecond();
+            return IntegratedPiece.throughKnots(lo, (u, eta) -> f / (m0 - rate * u), new double[] {0, r.burnTime()});
+        }
+        if (leg instanceof LegSpec.Profile p) {
+            return IntegratedPiece.throughKnots(lo, (u, eta) -> p.at(u), p.clockSeconds());
+        }
+        LegSpec.Sail sail = (LegSpec.Sail) leg;
+        InertialWorldline st = sail.beamStation();
+        State atStart = st.atTime(lo.timeSeconds());
+        Vec3 rel = atStart.position().minus(origin);
+        double along = n.dot(rel);
+        Vec3 perpendicular = rel.minus(n.times(along));
+        double scale = Math.max(rel.norm(), Math.abs(lo.along()));
+        if (perpendicular.norm() > 1e-12 * scale || st.velocity().cross(n).norm() > 1e-12 * Math.max(st.velocity().norm(), 1)) {
+            throw new WorldlineException(i, "the beam station must sit (and move, if it moves) on the craft's flight line");
+        }
+        if (!(along < lo.along())) {
+            throw new WorldlineException(i, "the beam station must be behind the craft on its flight line at the start of the leg");
+        }
+        double etaStation = FastMath.atanh(n.dot(st.velocity()) / C);
+        double k = (1 + sail.reflectivity()) * sail.beamPowerWatts() / (sail.massKg() * C);
+        State off = st.atClock(sail.beamOffClock());
+        double targetU = C * (off.timeSeconds() - lo.timeSeconds()) - (n.dot(off.position().minus(origin)) - lo.along());
+        if (!(targetU > 0)) {
+            throw new WorldlineException(i, "the beam is switched off before its light reaches the sail at the start of the leg");
+        }
+        return IntegratedPiece.untilU(lo, (u, eta) -> k * FastMath.exp(-2 * (eta - etaStation)), targetU, targetU / C);
     }
 
     /** Craft-clock duration of a finite leg starting at {@code cur}. */
@@ -264,8 +306,9 @@ public final class StraightLineCraft implements Worldline {
         Segment g = segments.get(i);
         LineState r = g.ref();
         double du = clock - r.clock();
-        return checked(new LineState(clock, r.timeSeconds() + Hyperbolic.timeOffset(r.rapidity(), g.a(), du),
-                r.along() + Hyperbolic.distanceOffset(r.rapidity(), g.a(), du), r.rapidity() + g.a() * du / C, i));
+        Piece p = g.piece();
+        return checked(new LineState(clock, r.timeSeconds() + p.timeOffset(r, du), r.along() + p.distanceOffset(r, du),
+                p.rapidityAfter(r, du), i));
     }
 
     /** Line state at a mission time. */
@@ -273,9 +316,9 @@ public final class StraightLineCraft implements Worldline {
         int i = segmentOfTime(t);
         Segment g = segments.get(i);
         LineState r = g.ref();
-        double du = Hyperbolic.properTimeForTime(r.rapidity(), g.a(), t - r.timeSeconds());
-        return checked(new LineState(r.clock() + du, t,
-                r.along() + Hyperbolic.distanceOffset(r.rapidity(), g.a(), du), r.rapidity() + g.a() * du / C, i));
+        Piece p = g.piece();
+        double du = p.properTimeForTime(r, t - r.timeSeconds());
+        return checked(new LineState(r.clock() + du, t, r.along() + p.distanceOffset(r, du), p.rapidityAfter(r, du), i));
     }
 
     private static LineState checked(LineState s) {
@@ -322,7 +365,8 @@ public final class StraightLineCraft implements Worldline {
 
     @Override
     public double properAccelerationAt(double timeSeconds) {
-        return segments.get(segmentOfTime(timeSeconds)).a();
+        LineState s = lineAtTime(timeSeconds);
+        return segments.get(s.segment()).piece().acceleration(s);
     }
 
     @Override
@@ -332,11 +376,11 @@ public final class StraightLineCraft implements Worldline {
 
     private Optional<Asymptote> findAsymptote() {
         Segment last = segments.get(segments.size() - 1);
-        if (last.a() == 0) {
+        double a = last.piece().constantAcceleration();
+        if (a == 0 || Double.isNaN(a)) {
             return Optional.empty();
         }
         LineState s = last.lo();
-        double a = last.a();
         if (a > 0) {
             double lineLimit = C * s.timeSeconds() - s.along() + Constants.C2 / a * FastMath.exp(-s.rapidity());
             return Optional.of(new Asymptote(heading, lineLimit - heading.dot(origin)));
@@ -375,7 +419,7 @@ public final class StraightLineCraft implements Worldline {
 
         @Override
         public double properTime(LineState cur, Segment g, double amount) {
-            return Hyperbolic.properTimeForTime(cur.rapidity(), g.a(), amount);
+            return g.piece().properTimeForTime(cur, amount);
         }
     };
 
@@ -394,24 +438,24 @@ public final class StraightLineCraft implements Worldline {
     private static final Measure U = new Measure() {
         @Override
         public double toBoundary(LineState cur, Segment g, LineState b) {
-            return Hyperbolic.uOffset(cur.rapidity(), g.a(), b.clock() - cur.clock());
+            return g.piece().uOffset(cur, b.clock() - cur.clock());
         }
 
         @Override
         public double properTime(LineState cur, Segment g, double amount) {
-            return Hyperbolic.properTimeForU(cur.rapidity(), g.a(), amount);
+            return g.piece().properTimeForU(cur, amount);
         }
     };
 
     private static final Measure V = new Measure() {
         @Override
         public double toBoundary(LineState cur, Segment g, LineState b) {
-            return Hyperbolic.vOffset(cur.rapidity(), g.a(), b.clock() - cur.clock());
+            return g.piece().vOffset(cur, b.clock() - cur.clock());
         }
 
         @Override
         public double properTime(LineState cur, Segment g, double amount) {
-            return Hyperbolic.properTimeForV(cur.rapidity(), g.a(), amount);
+            return g.piece().properTimeForV(cur, amount);
         }
     };
 
@@ -468,10 +512,11 @@ public final class StraightLineCraft implements Worldline {
             if (Double.isNaN(du)) {
                 return new LineWalk(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NaN, null);
             }
-            double ddt = exactTime ? rem : Hyperbolic.timeOffset(cur.rapidity(), g.a(), du);
-            double dds = Hyperbolic.distanceOffset(cur.rapidity(), g.a(), du);
+            Piece p = g.piece();
+            double ddt = exactTime ? rem : p.timeOffset(cur, du);
+            double dds = p.distanceOffset(cur, du);
             LineState end = checked(new LineState(cur.clock() + du, cur.timeSeconds() + ddt, cur.along() + dds,
-                    cur.rapidity() + g.a() * du / C, i));
+                    p.rapidityAfter(cur, du), i));
             return new LineWalk(dt + ddt, dClock + du, dAlong + dds, end);
         }
     }
