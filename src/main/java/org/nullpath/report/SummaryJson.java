@@ -46,10 +46,12 @@ final class SummaryJson {
             for (LegSpan span : c.legs()) {
                 Map<String, Object> leg = new LinkedHashMap<>();
                 leg.put("leg", span.index() + 1);
-                leg.put("kind", span.spec() instanceof LegSpec.Burn ? "burn" : "coast");
-                leg.put("acceleration_m_s2", span.spec().accelerationMetresPerSecond2());
+                leg.put("kind", kind(span.spec()));
+                leg.put("acceleration_m_s2", nan(span.spec().accelerationMetresPerSecond2()));
                 leg.put("start", event(span.start()));
                 leg.put("end", span.end() == null ? null : event(span.end()));
+                leg.put("rapidity_gained", span.end() == null ? null : span.end().rapidity() - span.start().rapidity());
+                propellant(span.spec(), leg);
                 legs.add(leg);
                 if (span.end() != null) {
                     arrival = span.end();
@@ -138,6 +140,37 @@ final class SummaryJson {
         }
         root.put("windows", windows);
         new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), root);
+    }
+
+    static String kind(LegSpec spec) {
+        if (spec instanceof LegSpec.Burn) {
+            return "burn";
+        }
+        if (spec instanceof LegSpec.Coast) {
+            return "coast";
+        }
+        if (spec instanceof LegSpec.Rocket || spec instanceof LegSpec.ThrustRocket) {
+            return "rocket";
+        }
+        return spec instanceof LegSpec.Sail ? "sail" : "profile";
+    }
+
+    /** The propellant story of rocket legs: mass ratio, exhaust speed, rapidity budget. */
+    private static void propellant(LegSpec spec, Map<String, Object> leg) {
+        if (spec instanceof LegSpec.Rocket r) {
+            leg.put("mass_ratio", r.massRatio());
+            leg.put("exhaust_speed_c", r.exhaustSpeedMetresPerSecond() / org.nullpath.units.Constants.C);
+            leg.put("rapidity_budget", r.rapidityBudget());
+        } else if (spec instanceof LegSpec.ThrustRocket t) {
+            leg.put("mass_ratio", t.initialMassKg() / t.burnoutMassKg());
+            leg.put("exhaust_speed_c", t.exhaustSpeedMetresPerSecond() / org.nullpath.units.Constants.C);
+            leg.put("propellant_kg", t.initialMassKg() - t.burnoutMassKg());
+            leg.put("burn_time_s", t.burnTime());
+        } else if (spec instanceof LegSpec.Sail sl) {
+            leg.put("beam_power_w", sl.beamPowerWatts());
+            leg.put("sail_mass_kg", sl.massKg());
+            leg.put("reflectivity", sl.reflectivity());
+        }
     }
 
     private static Map<String, Object> event(LineState st) {

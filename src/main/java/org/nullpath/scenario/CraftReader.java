@@ -22,9 +22,13 @@ import org.nullpath.worldline.WorldlineException;
 final class CraftReader {
     static final List<String> KEYS = List.of("start-position", "heading", "start-time", "start-clock", "start-speed",
             "legs");
-    static final List<String> LEG_TYPES = List.of("burn", "coast");
-    /** Leg types of the contract that this version does not fly yet. */
-    static final List<String> LATER_LEG_TYPES = List.of("rocket", "sail", "profile");
+    static final List<String> LEG_TYPES = List.of("burn", "coast", "rocket", "sail", "profile");
+    /** Leg types of the contract that this version does not fly yet (none left). */
+    static final List<String> LATER_LEG_TYPES = List.of();
+    static final List<String> ROCKET_KEYS = List.of("acceleration", "exhaust-speed", "mass-ratio", "thrust",
+            "initial-mass", "burnout-mass");
+    static final List<String> SAIL_KEYS = List.of("beam-from", "beam-power", "mass", "reflectivity", "beam-off");
+    static final List<String> PROFILE_KEYS = List.of("file");
     static final List<String> BURN_KEYS = List.of("acceleration", "duration", "duration-mission", "until-speed",
             "until-distance");
     static final List<String> BURN_ENDS = List.of("duration", "duration-mission", "until-speed", "until-distance");
@@ -34,14 +38,15 @@ final class CraftReader {
             "acceleration", "a coast has no acceleration; use a burn for powered flight");
 
     /** Where a leg was written, so that a problem found while flying it can point back at the file. */
-    private record LegSite(Node leg, String legPath, Node end, String endPath) {
+    record LegSite(Node leg, String legPath, Node end, String endPath) {
     }
 
     private CraftReader() {
     }
 
     /** The craft, or null when it has problems (all of them added). */
-    static Scenario.Node read(String name, Node node, String path, Values values) {
+    static Scenario.Node read(String name, Node node, String path, Values values, Map<String, Scenario.Node> stations,
+                              java.nio.file.Path scenarioFile) {
         Problems problems = values.problems();
         Fields f = Fields.of(node, path, values, "a craft", KEYS);
         if (!f.ok()) {
@@ -70,7 +75,7 @@ final class CraftReader {
         }
         List<LegSpec> legs = new ArrayList<>();
         List<LegSite> sites = new ArrayList<>();
-        boolean legsOk = legs(f, values, legs, sites);
+        boolean legsOk = legs(f, values, legs, sites, new Context(stations, scenarioFile));
         if (start == null || heading == null || Double.isNaN(startTime) || Double.isNaN(startClock)
                 || Double.isNaN(startSpeed) || !legsOk) {
             return null;
@@ -94,7 +99,11 @@ final class CraftReader {
     }
 
     /** Reads the legs into {@code legs}; false when any has a problem. */
-    private static boolean legs(Fields f, Values values, List<LegSpec> legs, List<LegSite> sites) {
+    /** What profiled legs need from the rest of the scenario. */
+    private record Context(Map<String, Scenario.Node> stations, java.nio.file.Path scenarioFile) {
+    }
+
+    private static boolean legs(Fields f, Values values, List<LegSpec> legs, List<LegSite> sites, Context context) {
         Node n = f.get("legs");
         if (n == null || n instanceof Scalar s && s.type() == ScalarType.NULL) {
             return true;
@@ -109,7 +118,7 @@ final class CraftReader {
         int last = list.items().size() - 1;
         for (int i = 0; i <= last; i++) {
             LegSite[] site = new LegSite[1];
-            LegSpec leg = leg(list.items().get(i), Values.item(path, i), values, site);
+            LegSpec leg = leg(list.items().get(i), Values.item(path, i), values, site, context);
             if (leg == null) {
                 ok = false;
                 continue;
@@ -127,7 +136,7 @@ final class CraftReader {
     }
 
     /** One leg: a mapping with exactly one key, its type. Null when it has problems. */
-    private static LegSpec leg(Node n, String path, Values values, LegSite[] site) {
+    private static LegSpec leg(Node n, String path, Values values, LegSite[] site, Context context) {
         Problems problems = values.problems();
         if (!(n instanceof MapNode m)) {
             problems.at(n, path, "expected a leg such as {burn: {acceleration: 1 g0, duration: 1 yr}} or"
@@ -135,7 +144,7 @@ final class CraftReader {
             return null;
         }
         if (m.entries().isEmpty()) {
-            problems.at(n, path, "a leg needs a type: burn or coast");
+            problems.at(n, path, "a leg needs a type: burn, coast, rocket, sail or profile");
             return null;
         }
         Entry type = null;
@@ -149,7 +158,7 @@ final class CraftReader {
             } else if (!LEG_TYPES.contains(e.key())) {
                 String hint = Spelling.closest(e.key(), allLegTypes());
                 problems.atKey(e, keyPath, "unknown leg type '" + e.key() + "'"
-                        + (hint != null ? " (did you mean '" + hint + "'?)" : " (a leg is burn or coast)"));
+                        + (hint != null ? " (did you mean '" + hint + "'?)" : " (a leg is burn, coast, rocket, sail or profile)"));
                 ok = false;
             } else if (type != null) {
                 problems.atKey(e, keyPath, "a leg has one type, got both '" + type.key() + "' and '" + e.key()
@@ -163,6 +172,19 @@ final class CraftReader {
             return null;
         }
         String typePath = Values.child(path, type.key());
+        switch (type.key()) {
+            case "rocket" -> {
+                return ProfiledLegReader.rocket(type.value(), typePath, values, site);
+            }
+            case "sail" -> {
+                return ProfiledLegReader.sail(type.value(), typePath, values, site, context.stations());
+            }
+            case "profile" -> {
+                return ProfiledLegReader.profile(type.value(), typePath, values, site, context.scenarioFile());
+            }
+            default -> {
+            }
+        }
         boolean burn = type.key().equals("burn");
         Fields f = burn
                 ? Fields.of(type.value(), typePath, values, "a burn", BURN_KEYS)

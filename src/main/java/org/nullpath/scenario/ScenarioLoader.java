@@ -354,7 +354,7 @@ public final class ScenarioLoader {
         private void craft(Entry e) {
             String p = Values.child("craft", e.key());
             boolean nameOk = declare(e, p, Scenario.Kind.CRAFT);
-            Scenario.Node n = CraftReader.read(e.key(), e.value(), p, values);
+            Scenario.Node n = CraftReader.read(e.key(), e.value(), p, values, nodes, path);
             if (nameOk && n != null) {
                 nodes.put(e.key(), n);
             }

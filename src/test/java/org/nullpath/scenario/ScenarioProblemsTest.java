@@ -257,18 +257,6 @@ class ScenarioProblemsTest {
     }
 
     @Test
-    void profiledLegTypesAreReportedAsNotSupportedYet() {
-        List<Problem> all = problemsOf(CRAFT
-                + "      - rocket: {acceleration: 1 g0, exhaust-speed: 0.5 c, mass-ratio: 10}\n"
-                + "      - sail: {beam-from: home, beam-power: 100 GW, mass: 10 g, reflectivity: 1, beam-off: 600 s}\n"
-                + "      - profile: {file: ramp.csv}\n");
-        assertEquals(3, all.size(), () -> ProblemAssertions.rendered(all));
-        assertProblem(all.get(0), 7, 9, "craft.lark.legs[0].rocket", "leg type 'rocket' is not supported yet");
-        assertProblem(all.get(1), 8, 9, "craft.lark.legs[1].sail", "leg type 'sail' is not supported yet");
-        assertProblem(all.get(2), 9, 9, "craft.lark.legs[2].profile", "leg type 'profile' is not supported yet");
-    }
-
-    @Test
     void anUnknownLegTypeIsReportedWithDidYouMean() {
         Problem p = onlyProblemOf(CRAFT + "      - brun: {acceleration: 1 g0, duration: 1 yr}\n");
         assertProblem(p, 7, 9, "craft.lark.legs[0].brun", "unknown leg type 'brun'", "did you mean 'burn'?");

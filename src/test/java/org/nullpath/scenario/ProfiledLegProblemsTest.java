@@ -1,0 +1,142 @@
+package org.nullpath.scenario;
+
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.nullpath.scenario.ProblemAssertions.assertProblem;
+import static org.nullpath.scenario.ProblemAssertions.onlyProblemOf;
+
+/** Bad profiled legs (rocket, sail, profile) each give one located problem. */
+class ProfiledLegProblemsTest {
+    /** Lines 1-7; a leg follows on line 8. */
+    private static final String CRAFT = """
+            stations:
+              home: {}
+              aside: {position: [0 m, 1e9 m, 0 m]}
+            craft:
+              lark:
+                heading: [1, 0, 0]
+                legs:
+            """;
+
+    @TempDir
+    Path tmp;
+
+    @Test
+    void aMassRatioOfOneOrLessIsRejected() {
+        Problem p = onlyProblemOf(CRAFT + "      - rocket: {acceleration: 1 g0, exhaust-speed: 0.5 c, mass-ratio: 1}\n");
+        assertProblem(p, 8, 72, "craft.lark.legs[0].rocket.mass-ratio", "greater than 1");
+    }
+
+    @Test
+    void aBurnoutMassAtOrAboveTheInitialMassIsRejected() {
+        Problem p = onlyProblemOf(CRAFT + "      - rocket: {thrust: 2 MN, initial-mass: 20 t, burnout-mass: 20 t,"
+                + " exhaust-speed: 0.1 c}\n");
+        assertEquals("craft.lark.legs[0].rocket.burnout-mass", p.key(), p.render());
+        assertTrue(p.message().contains("below the initial mass"), p.render());
+    }
+
+    @Test
+    void anExhaustSpeedAboveLightIsRejected() {
+        Problem p = onlyProblemOf(CRAFT + "      - rocket: {acceleration: 1 g0, exhaust-speed: 1.5 c, mass-ratio: 4}\n");
+        assertEquals("craft.lark.legs[0].rocket.exhaust-speed", p.key(), p.render());
+    }
+
+    @Test
+    void mixingTheTwoRocketFormsIsRejected() {
+        Problem p = onlyProblemOf(CRAFT + "      - rocket: {acceleration: 1 g0, thrust: 2 MN, exhaust-speed: 0.1 c}\n");
+        assertEquals("craft.lark.legs[0].rocket.thrust", p.key(), p.render());
+    }
+
+    @Test
+    void aBeamStationOffTheFlightLineIsRejected() {
+        Problem p = onlyProblemOf(CRAFT + "      - sail: {beam-from: aside, beam-power: 100 GW, mass: 10 g, beam-off: 600 s}\n");
+        assertProblem(p, 8, 27, "craft.lark.legs[0].sail.beam-from", "flight line");
+    }
+
+    @Test
+    void aBeamStationAheadOfTheSailIsRejected() {
+        String yaml = CRAFT.replace("aside: {position: [0 m, 1e9 m, 0 m]}", "ahead: {position: [1e9 m, 0 m, 0 m]}")
+                + "      - sail: {beam-from: ahead, beam-power: 100 GW, mass: 10 g, beam-off: 600 s}\n";
+        Problem p = onlyProblemOf(yaml);
+        assertProblem(p, 8, 27, "craft.lark.legs[0].sail.beam-from", "behind the craft");
+    }
+
+    @Test
+    void anUnknownBeamStationIsRejectedWithDidYouMean() {
+        Problem p = onlyProblemOf(CRAFT + "      - sail: {beam-from: hme, beam-power: 100 GW, mass: 10 g, beam-off: 600 s}\n");
+        assertProblem(p, 8, 27, "craft.lark.legs[0].sail.beam-from", "not a station", "did you mean 'home'?");
+    }
+
+    @Test
+    void aReflectivityOutsideZeroToOneIsRejected() {
+        Problem p = onlyProblemOf(CRAFT + "      - sail: {beam-from: home, beam-power: 1 GW, mass: 1 g, reflectivity: 1.5,"
+                + " beam-off: 60 s}\n");
+        assertEquals("craft.lark.legs[0].sail.reflectivity", p.key(), p.render());
+    }
+
+    private Problem profileProblem(String table) throws IOException {
+        Path scenario = tmp.resolve("s.yaml");
+        Files.writeString(scenario, CRAFT + "      - profile: {file: ramp.csv}\n");
+        if (table != null) {
+            Files.writeString(tmp.resolve("ramp.csv"), table);
+        }
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load(scenario));
+        List<Problem> all = e.problems();
+        assertEquals(1, all.size(), () -> ProblemAssertions.rendered(all));
+        Problem p = all.get(0);
+        assertEquals(8, p.line(), p.render());
+        assertEquals(25, p.column(), p.render());
+        assertEquals("craft.lark.legs[0].profile.file", p.key(), p.render());
+        return p;
+    }
+
+    @Test
+    void aMissingProfileFileIsRejected() throws IOException {
+        Problem p = profileProblem(null);
+        assertTrue(p.message().contains("'ramp.csv' not found"), p.render());
+    }
+
+    @Test
+    void anUnsortedProfileNamesTheFileRowAndColumn() throws IOException {
+        Problem p = profileProblem("clock_s,acceleration_m_s2\n0,1\n100,2\n50,3\n");
+        assertTrue(p.message().contains("ramp.csv: row 4, column clock_s"), p.render());
+        assertTrue(p.message().contains("increase strictly"), p.render());
+    }
+
+    @Test
+    void aNonNumericProfileCellNamesTheFileRowAndColumn() throws IOException {
+        Problem p = profileProblem("clock_s,acceleration_m_s2\n0,1\n100,fast\n");
+        assertTrue(p.message().contains("ramp.csv: row 3, column acceleration_m_s2: expected a number, got 'fast'"),
+                p.render());
+    }
+
+    @Test
+    void aProfileWithoutItsColumnsIsRejected() throws IOException {
+        Problem p = profileProblem("time,accel\n0,1\n100,2\n");
+        assertTrue(p.message().contains("clock_s and acceleration_m_s2"), p.render());
+    }
+
+    @Test
+    void aProfileMustStartAtTheLegStart() throws IOException {
+        Problem p = profileProblem("clock_s,acceleration_m_s2\n10,1\n100,2\n");
+        assertTrue(p.message().contains("row 2, column clock_s: the first sample must be at clock 0"), p.render());
+    }
+
+    @Test
+    void aValidProfileLoadsRelativeToTheScenarioFile() throws IOException, ScenarioException {
+        Path scenario = tmp.resolve("s.yaml");
+        Files.writeString(scenario, CRAFT + "      - profile: {file: ramp.csv}\n");
+        Files.writeString(tmp.resolve("ramp.csv"), "clock_s,acceleration_m_s2\n0,0\n100,2\n200,0\n");
+        Scenario s = ScenarioLoader.load(scenario);
+        assertEquals(1, s.nodes().get("lark").legs().size());
+    }
+}
