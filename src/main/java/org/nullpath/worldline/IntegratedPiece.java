@@ -82,8 +82,9 @@ final class IntegratedPiece implements Piece {
     }
 
     private static DormandPrince853Integrator integrator(double span) {
-        double[] abs = {1e-17, 1e-15 * Math.max(span, 1), 1e-15 * C * Math.max(span, 1),
-                        1e-15 * C * Math.max(span, 1), 1e-15 * C * Math.max(span, 1)};
+        // absolute floors far below anything meaningful: error control is relative, also early in the leg
+        // where the offsets are still small
+        double[] abs = {1e-30, 1e-30, 1e-30, 1e-30, 1e-30};
         double[] rel = {RELATIVE_TOLERANCE, RELATIVE_TOLERANCE, RELATIVE_TOLERANCE, RELATIVE_TOLERANCE,
                         RELATIVE_TOLERANCE};
         return new DormandPrince853Integrator(0.0, Math.max(span, 1e-9), abs, rel);
