@@ -74,17 +74,18 @@ final class IntegratedPiece implements Piece {
             @Override
             public double[] computeDerivatives(double u, double[] y) {
                 double eta = y[ETA];
-                double ep = FastMath.exp(eta);
-                double em = 1 / ep;
-                return new double[] {law.at(u, eta) / C, 0.5 * (ep + em), C * 0.5 * (ep - em), C * em, C * ep};
+                // sinh from FastMath, not (e^eta - e^-eta)/2, which cancels to noise at small rapidity
+                return new double[] {law.at(u, eta) / C, FastMath.cosh(eta), C * FastMath.sinh(eta),
+                                     C * FastMath.exp(-eta), C * FastMath.exp(eta)};
             }
         };
     }
 
     private static DormandPrince853Integrator integrator(double span) {
-        // absolute floors far below anything meaningful: error control is relative, also early in the leg
-        // where the offsets are still small
-        double[] abs = {1e-30, 1e-30, 1e-30, 1e-30, 1e-30};
+        // absolute floors far below anything a link planner resolves (1e-20 in rapidity, a picosecond,
+        // a nanometre), so error control stays relative also early in the leg where the offsets are small,
+        // without driving the step size to zero where an offset starts flat
+        double[] abs = {1e-20, 1e-12, 1e-9, 1e-9, 1e-9};
         double[] rel = {RELATIVE_TOLERANCE, RELATIVE_TOLERANCE, RELATIVE_TOLERANCE, RELATIVE_TOLERANCE,
                         RELATIVE_TOLERANCE};
         return new DormandPrince853Integrator(0.0, Math.max(span, 1e-9), abs, rel);
