@@ -80,7 +80,7 @@ final class Values {
     /** A quantity {@code NUMBER UNIT} of dimension {@code d}, in SI (dB for gains and ratios); NaN on a problem. */
     double quantity(Node n, String path, Dimension d) {
         if (!(n instanceof Scalar s) || s.type() == ScalarType.NULL || s.type() == ScalarType.BINARY) {
-            problems.at(n, path, "expected " + d.description() + " ('NUMBER UNIT', e.g. " + example(d) + "), got "
+            problems.at(n, path, "expected " + d.description() + " ('NUMBER UNIT', e.g. " + Units.example(d) + "), got "
                     + describe(n));
             return Double.NaN;
         }
@@ -145,7 +145,7 @@ final class Values {
     /** A list of quantities; null when {@code n} is not a list or any element is wrong (every problem added). */
     List<Double> quantities(Node n, String path, Dimension d, String what) {
         if (!(n instanceof ListNode l)) {
-            problems.at(n, path, "expected a list of " + what + " such as [" + example(d).replace("'", "") + "], got "
+            problems.at(n, path, "expected a list of " + what + " such as [" + Units.example(d).replace("'", "") + "], got "
                     + describe(n));
             return null;
         }
@@ -175,25 +175,5 @@ final class Values {
         }
         problems.at(n, path, "expected true or false, got " + describe(n));
         return Optional.empty();
-    }
-
-    static String example(Dimension d) {
-        return switch (d) {
-            case TIME -> "'10 d'";
-            case LENGTH -> "'4.2 ly'";
-            case SPEED -> "'0.3 c'";
-            case ACCELERATION -> "'1 g0'";
-            case FREQUENCY -> "'7.2 GHz'";
-            case FREQUENCY_RATE -> "'100 Hz/s'";
-            case POWER -> "'20 kW'";
-            case GAIN -> "'74 dBi'";
-            case RATIO -> "'1 dB'";
-            case TEMPERATURE -> "'300 K'";
-            case DATA_RATE -> "'1 kbit/s'";
-            case ANGLE -> "'1 urad'";
-            case MASS -> "'10 g'";
-            case FORCE -> "'2 MN'";
-            case DIMENSIONLESS -> "'0.6'";
-        };
     }
 }

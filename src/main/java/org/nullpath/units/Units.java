@@ -155,7 +155,8 @@ public final class Units {
         return b.toString();
     }
 
-    private static String example(Dimension d) {
+    /** A typical quantity text of a dimension, quoted, for messages: "'4.2 ly'". */
+    public static String example(Dimension d) {
         return switch (d) {
             case TIME -> "'10 d'";
             case LENGTH -> "'4.2 ly'";
