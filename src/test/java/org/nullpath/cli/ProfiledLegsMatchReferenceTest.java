@@ -1,0 +1,289 @@
+package org.nullpath.cli;
+
+import java.io.IOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.apache.commons.csv.CSVRecord;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+import org.nullpath.reference.RefCraft;
+import org.nullpath.reference.RefMath;
+import org.nullpath.reference.RefProfiledCraft;
+import org.nullpath.reference.RefSignal;
+import org.nullpath.reference.RefSolver;
+import org.nullpath.reference.RefStation;
+import org.nullpath.reference.RefWorldline;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+
+/**
+ * End to end: {@code plan} on one scenario per profiled leg kind of contract.md ("Profiled legs"), every
+ * message of a downlink sent during and after the leg (and a few uplinks received during and after it)
+ * compared with the independent high-precision reference in {@code org.nullpath.reference}, which shares no
+ * code with src/main:
+ * <ul>
+ *   <li>the propellant-limited {@code rocket} (constant proper acceleration until the propellant is spent) is a
+ *       constant-acceleration burn of craft-clock length v_ex ln(MR) / |a| (Ackeret's rocket equation, Helv.
+ *       Phys. Acta 19, 1946), flown by {@link RefCraft} in the closed forms of hyperbolic motion (Rindler 2006);
+ *       the tolerance is the product's closed-form one, 1e-12 relative;</li>
+ *   <li>constant thrust, the beam-pushed sail (Kulkarni, Lubin &amp; Zhang, AJ 155:155, 2018) and the tabulated
+ *       profile are flown by {@link RefProfiledCraft}, Gauss–Legendre quadrature of dt/du = cosh eta,
+ *       ds/du = c sinh eta at 100 digits, good to 45+ digits (RefProfiledSelfTest); nullpath integrates these
+ *       legs numerically and promises 1e-10 relative.</li>
+ * </ul>
+ * Frequency offsets are held to 1e-9 relative in every case (the product's offset tolerance). Inputs reach the
+ * reference as the very doubles the scenario's quantities convert to: number times unit factor (c from the SI
+ * Brochure 2019, g0 from the 3rd CGPM 1901, d = 86 400 s, Julian year from the IAU; t = 1e3 kg, g = 1e-3 kg,
+ * MN = 1e6 N, GW = 1e9 W, km = 1e3 m). Craft and station names are invented.
+ */
+class ProfiledLegsMatchReferenceTest {
+    static final double C = 299_792_458.0;
+    static final double G0 = 9.80665;
+    static final double DAY = 86_400.0;
+    static final double YR = 31_557_600.0;
+    static final double[] ORIGIN = {0, 0, 0};
+    static final double[] X = {1, 0, 0};
+    /** Closed-form legs: the product's tolerance for times, clocks, light times, intervals, Doppler factors. */
+    static final double CLOSED_TOL = 1e-12;
+    /** Integrated legs (thrust, sail, profile): the issue's tolerance. */
+    static final double INTEGRATED_TOL = 1e-10;
+    /** Frequency offsets, every leg kind. */
+    static final double OFFSET_TOL = 1e-9;
+    static final List<String> COLUMNS = List.of("send_time_s", "receive_time_s", "receive_clock_s", "light_time_s",
+            "doppler", "frequency_offset", "receive_interval_s");
+
+    /** Worst relative error seen per leg kind and column (printed after the run for the record). */
+    private static final Map<String, Map<String, Double>> WORST = new LinkedHashMap<>();
+
+    @TempDir
+    Path tmp;
+
+    @AfterAll
+    static void printWorst() {
+        StringBuilder b = new StringBuilder("worst relative error per leg kind and column:\n");
+        WORST.forEach((kind, cols) -> {
+            b.append(String.format("  %-22s", kind));
+            cols.forEach((c, v) -> b.append(String.format(" %s=%.2e", c, v)));
+            b.append('\n');
+        });
+        System.out.print(b);
+    }
+
+    // ---------------------------------------------------------------- helpers
+
+    private static double num(CSVRecord r, String column) {
+        return Double.parseDouble(r.get(column));
+    }
+
+    private static void close(String kind, String what, long row, double actual, BigDecimal expected, double tol) {
+        BigDecimal diff = new BigDecimal(actual).subtract(expected).abs();
+        double rel = expected.signum() == 0 ? diff.doubleValue()
+                : diff.divide(expected.abs(), MathContext.DECIMAL64).doubleValue();
+        WORST.computeIfAbsent(kind, k -> new LinkedHashMap<>()).merge(what, rel, Math::max);
+        assertTrue(rel <= tol, () -> kind + " " + what + " row " + row + ": got " + actual + ", reference "
+                + expected.round(new MathContext(20)) + " (relative error " + rel + " > " + tol + ")");
+    }
+
+    /**
+     * Compares every row of a link CSV with the reference (every message must be delivered: no horizons here);
+     * returns the send clocks.
+     */
+    private static double[] assertLinkMatches(String kind, List<CSVRecord> rows, RefWorldline sender,
+                                              RefWorldline receiver, double tol) {
+        assertTrue(rows.size() >= 2, kind + ": rows");
+        double[] clocks = new double[rows.size()];
+        BigDecimal previousArrival = null;
+        int i = 0;
+        for (CSVRecord r : rows) {
+            long row = Long.parseLong(r.get("message"));
+            double clock = num(r, "send_clock_s");
+            clocks[i++] = clock;
+            RefSignal ref = RefSolver.send(sender, clock, receiver);
+            assertEquals(false, ref.never(), kind + " row " + row + " arrives");
+            assertEquals("delivered", r.get("status"), kind + " status row " + row);
+            close(kind, "send_time_s", row, num(r, "send_time_s"), ref.sender().t(), tol);
+            close(kind, "receive_time_s", row, num(r, "receive_time_s"), ref.arrival().t(), tol);
+            close(kind, "receive_clock_s", row, num(r, "receive_clock_s"), ref.arrival().clock(), tol);
+            close(kind, "light_time_s", row, num(r, "light_time_s"), ref.arrival().lightTime(), tol);
+            close(kind, "doppler", row, num(r, "doppler"), ref.doppler(), tol);
+            close(kind, "frequency_offset", row, num(r, "frequency_offset"), ref.frequencyOffset(), OFFSET_TOL);
+            if (previousArrival == null) {
+                assertEquals("", r.get("receive_interval_s"), kind + " receive_interval_s row " + row);
+            } else {
+                close(kind, "receive_interval_s", row, num(r, "receive_interval_s"),
+                        ref.arrival().clock().subtract(previousArrival), tol);
+            }
+            previousArrival = ref.arrival().clock();
+        }
+        return clocks;
+    }
+
+    /** The messages really straddle the leg: some sent (or received) before its end, some after. */
+    private static void assertStraddles(String kind, double[] clocks, double legEndClock) {
+        long during = java.util.Arrays.stream(clocks).filter(c -> c < legEndClock).count();
+        long after = java.util.Arrays.stream(clocks).filter(c -> c > legEndClock).count();
+        assertTrue(during >= 2 && after >= 2, kind + ": " + during + " sends during the leg, " + after + " after");
+    }
+
+    private static RefStation home() {
+        return RefStation.of(ORIGIN, null, 0);
+    }
+
+    // ---------------------------------------------------------------- 1. propellant-limited rocket
+
+    @Test
+    void propellantLimitedRocketMatchesHyperbolicMotionToTheClosedFormTolerance() throws IOException {
+        Path out = PlanRun.plan(tmp, "rocket", """
+                title: propellant-limited rocket check
+                stations:
+                  home: {}
+                craft:
+                  kite:
+                    heading: [1, 0, 0]
+                    legs:
+                      - rocket: {acceleration: 1 g0, exhaust-speed: 0.5 c, mass-ratio: 10}
+                links:
+                  down: {from: kite, to: home}
+                  up: {from: home, to: kite}
+                messages:
+                  - {link: down, first: 10 d, last: 3 yr, every: 50 d}
+                  - {link: up, first: 1 d, last: 2 yr, every: 60 d}
+                """);
+        // Ackeret: the rapidity budget (v_ex / c) ln(MR) at constant proper acceleration a lasts v_ex ln(MR) / |a|
+        // of craft clock. nullpath computes that duration in double; the reference is handed the very same double
+        // (v_ex * Math.log(MR) / |a|, evaluated in that order), so both fly identical inputs. (The exact duration
+        // differs from this double by < 2e-16 relative, far inside the tolerance either way; checked below.)
+        double vex = 0.5 * C;
+        double a = 1 * G0;
+        double duration = vex * Math.log(10.0) / Math.abs(a);
+        BigDecimal exact = RefMath.bd(vex).multiply(RefMath.ln(BigDecimal.TEN), RefMath.mc())
+                .divide(RefMath.bd(a), RefMath.mc());
+        assertTrue(exact.subtract(RefMath.bd(duration)).abs().compareTo(exact.multiply(new BigDecimal("2e-16"))) < 0);
+        RefCraft kite = RefCraft.start(ORIGIN, X, 0, 0, 0).burnForClock(a, duration);
+        double[] down = assertLinkMatches("rocket (propellant) down", PlanRun.csv(out.resolve("down.csv")), kite, home(),
+                CLOSED_TOL);
+        assertStraddles("rocket (propellant) down", down, duration);
+        List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
+        assertLinkMatches("rocket (propellant) up", up, home(), kite, CLOSED_TOL);
+        assertStraddles("rocket (propellant) up", up.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray(),
+                duration);
+        // the burn reaches the budgeted speed (Ackeret, from rest): v/c = (MR^(2 v_ex/c) - 1) / (MR^(2 v_ex/c) + 1),
+        // here (10 - 1) / (10 + 1) = 9/11
+        assertEquals(9.0 / 11.0, Math.tanh(kite.rapidityAtClock(RefMath.bd(2 * YR)).doubleValue()), 1e-15);
+    }
+
+    // ---------------------------------------------------------------- 2. constant thrust
+
+    @Test
+    void constantThrustRocketMatchesQuadratureReference() throws IOException {
+        Path out = PlanRun.plan(tmp, "thrust", """
+                title: constant-thrust rocket check
+                stations:
+                  home: {}
+                craft:
+                  mule:
+                    heading: [1, 0, 0]
+                    start-time: 1 d
+                    start-clock: 100 s
+                    start-speed: 0.01 c
+                    legs:
+                      - rocket: {thrust: 2 MN, initial-mass: 100 t, burnout-mass: 20 t, exhaust-speed: 0.1 c}
+                links:
+                  down: {from: mule, to: home}
+                  up: {from: home, to: mule}
+                messages:
+                  - {link: down, first: 0 d, last: 40 d, every: 2 d}
+                  - {link: up, at: [2 d, 11 d, 20 d, 32 d]}
+                """);
+        RefProfiledCraft mule = RefProfiledCraft.thrust(ORIGIN, X, 1 * DAY, 100, 0.01 * C, 2 * 1e6, 100 * 1e3,
+                20 * 1e3, 0.1 * C);
+        double end = mule.legEndClockDouble();
+        double[] down = assertLinkMatches("rocket (thrust) down", PlanRun.csv(out.resolve("down.csv")), mule, home(),
+                INTEGRATED_TOL);
+        assertStraddles("rocket (thrust) down", down, end);
+        List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
+        assertLinkMatches("rocket (thrust) up", up, home(), mule, INTEGRATED_TOL);
+        assertStraddles("rocket (thrust) up", up.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray(), end);
+    }
+
+    // ---------------------------------------------------------------- 3. beam-pushed sail
+
+    @Test
+    void beamPushedSailMatchesQuadratureReference() throws IOException {
+        Path out = PlanRun.plan(tmp, "sail", """
+                title: beam-pushed sail check
+                stations:
+                  home: {}
+                craft:
+                  wisp:
+                    start-position: [1000 km, 0 km, 0 km]
+                    heading: [1, 0, 0]
+                    legs:
+                      - sail: {beam-from: home, beam-power: 100 GW, mass: 10 g, reflectivity: 1, beam-off: 600 s}
+                links:
+                  down: {from: wisp, to: home}
+                  up: {from: home, to: wisp}
+                messages:
+                  - {link: down, first: 0 s, last: 1200 s, every: 40 s}
+                  - {link: up, at: [100 s, 500 s, 700 s, 900 s]}
+                """);
+        // the station sits at the origin, 1000 km behind the start: along-track coordinate b = -1000 km
+        RefProfiledCraft wisp = RefProfiledCraft.sail(new double[] {1000 * 1e3, 0, 0}, X, 0, 0, 0, -1000 * 1e3,
+                100 * 1e9, 10 * 1e-3, 1, 600);
+        double end = wisp.legEndClockDouble();
+        double[] down = assertLinkMatches("sail down", PlanRun.csv(out.resolve("down.csv")), wisp, home(), INTEGRATED_TOL);
+        assertStraddles("sail down", down, end);
+        List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
+        assertLinkMatches("sail up", up, home(), wisp, INTEGRATED_TOL);
+        assertStraddles("sail up", up.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray(), end);
+    }
+
+    // ---------------------------------------------------------------- 4. tabulated profile
+
+    @Test
+    void tabulatedProfileMatchesQuadratureReference() throws IOException {
+        // invented table: ramp up to 50 m/s^2, hold, ramp down through zero to -20 m/s^2, hold (peak ~0.59 c)
+        Files.writeString(tmp.resolve("ramp.csv"), """
+                clock_s,acceleration_m_s2
+                0,0
+                1e6,50
+                4e6,50
+                5e6,-20
+                6e6,-20
+                """);
+        Path out = PlanRun.plan(tmp, "profile", """
+                title: tabulated profile check
+                stations:
+                  home: {}
+                craft:
+                  reed:
+                    heading: [3, 4, 0]
+                    start-clock: 50 s
+                    legs:
+                      - profile: {file: ramp.csv}
+                links:
+                  down: {from: reed, to: home}
+                  up: {from: home, to: reed}
+                messages:
+                  - {link: down, first: 1 d, last: 120 d, every: 4 d}
+                  - {link: up, at: [5 d, 20 d, 150 d, 400 d]}
+                """);
+        RefProfiledCraft reed = RefProfiledCraft.profile(ORIGIN, new double[] {3, 4, 0}, 0, 50, 0,
+                new double[] {0, 1e6, 4e6, 5e6, 6e6}, new double[] {0, 50, 50, -20, -20});
+        double end = reed.legEndClockDouble();
+        double[] down = assertLinkMatches("profile down", PlanRun.csv(out.resolve("down.csv")), reed, home(),
+                INTEGRATED_TOL);
+        assertStraddles("profile down", down, end);
+        List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
+        assertLinkMatches("profile up", up, home(), reed, INTEGRATED_TOL);
+        assertStraddles("profile up", up.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray(), end);
+    }
+}
