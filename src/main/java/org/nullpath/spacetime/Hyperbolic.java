@@ -68,8 +68,8 @@ public final class Hyperbolic {
      */
     public static double deltaAsinh(double a, double b, double aMinusB) {
         if (a * b >= 0) {
-            double ca = Math.hypot(1, a);
-            double cb = Math.hypot(1, b);
+            double ca = cosh(a);
+            double cb = cosh(b);
             double sum = a + b;
             if (sum == 0) {
                 return 0;
@@ -79,6 +79,12 @@ public final class Hyperbolic {
             return FastMath.asinh(aMinusB * (sum / denominator));
         }
         return FastMath.asinh(a) - FastMath.asinh(b);
+    }
+
+    /** sqrt(1 + x^2), the cosh of asinh(x), without overflow (and faster than Math.hypot). */
+    private static double cosh(double x) {
+        double ax = Math.abs(x);
+        return ax < 1e150 ? Math.sqrt(1 + x * x) : ax;
     }
 
     /** Proper time for a null offset of U (coast or burn); NaN beyond a horizon. */
