@@ -41,6 +41,7 @@ public class PlanBench {
                 "  home: {}",
                 "craft:",
                 "  probe:",
+                "    heading: [1, 0, 0]",
                 "    legs:",
                 "      - burn: {acceleration: 1 g0, duration: 1 yr}",
                 "      - coast: {duration: 1 yr}",
