@@ -1,0 +1,242 @@
+package org.nullpath.lightcone;
+
+import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.nullpath.lightcone.Flights.C;
+import static org.nullpath.lightcone.Flights.YR;
+
+import net.jqwik.api.Arbitrary;
+import net.jqwik.api.Assume;
+import net.jqwik.api.Disabled;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.Provide;
+import net.jqwik.api.ShrinkingMode;
+import net.jqwik.api.constraints.DoubleRange;
+import net.jqwik.api.constraints.Scale;
+import org.nullpath.worldline.InertialWorldline;
+import org.nullpath.worldline.StraightLineCraft;
+import org.nullpath.worldline.Worldline;
+
+/**
+ * Laws of light-cone intersection that hold for every timelike worldline (special relativity, Einstein
+ * 1905; the uniqueness argument of physics.md): signals arrive after they are sent and travel at c, later
+ * sends arrive later, the past cone of an arrival is its send, and an open-ended burn has a sharp horizon.
+ * Each law runs twice: with stations off the flight line (bracketed solve) and on it (closed forms in
+ * c t -+ s). Invented demo flights from {@link Flights}; stations moving at up to 0.9 c.
+ */
+class LightConeLawsTest {
+    private static final String CLOCK_LABEL_BUG = "bug: on the flight line, a signal whose walk crosses a leg boundary "
+            + "loses precision in proportion to the craft clock's magnitude (StraightLineCraft.walk measures the "
+            + "distance to a boundary as boundary.clock() - cur.clock(), two absolute readings): e.g. c T - |r_rx - r_tx| "
+            + "= -0.437 m for a 25.34 s light time (5.8e-11 relative); see "
+            + "LightConeTest.theLightTimeDoesNotDependOnTheCraftClockReadingAtItsStart";
+    @Provide
+    Arbitrary<Flights.Pair> offLine() {
+        return Flights.offLine(Flights.plans());
+    }
+
+    @Provide
+    Arbitrary<Flights.Pair> onLine() {
+        return Flights.onLine(Flights.plans());
+    }
+
+    @Provide
+    Arbitrary<Flights.Pair> openOffLine() {
+        return Flights.offLine(Flights.plans(true));
+    }
+
+    @Provide
+    Arbitrary<Flights.Pair> openOnLine() {
+        return Flights.onLine(Flights.plans(true));
+    }
+
+    // ---- signals arrive after they are sent, and travel at c --------------------------------------
+
+    /**
+     * The rounding an event's absolute coordinates already carry: each position component is a double, so
+     * a difference of two positions is known to about ulp(|r|) however the light time was found.
+     */
+    private static double positionUlp(SignalPath p) {
+        return Math.ulp(Math.max(p.send().position().norm(), p.receive().position().norm()));
+    }
+
+    /**
+     * c T against the distance between the send and receive positions: 1e-12 relative, plus the few ulps
+     * of the absolute positions themselves (which matter only for short signals far from the origin).
+     */
+    private static void assertTravelsAtC(SignalPath p) {
+        assertTrue(p.lightTimeSeconds() >= 0, "light time " + p.lightTimeSeconds());
+        assertTrue(p.receive().timeSeconds() >= p.send().timeSeconds());
+        double distance = p.receive().position().minus(p.send().position()).norm();
+        double cT = C * p.lightTimeSeconds();
+        assertEquals(distance, cT, 1e-12 * cT + 4 * positionUlp(p),
+                () -> "c T = " + cT + " m, distance = " + distance + " m");
+    }
+
+    private static void signalsArriveAfterTheyAreSentAndTravelAtC(Flights.Pair pair, double sendYears) {
+        StraightLineCraft craft = pair.craft();
+        InertialWorldline home = pair.home();
+        SignalPath up = LightCone.future(home.atClock(sendYears * YR), craft);
+        if (up.delivered()) {
+            assertTravelsAtC(up);
+        }
+        SignalPath down = LightCone.future(craft.atClock(sendYears * YR), home);
+        assertTrue(down.delivered(), "a station is reached by every signal");
+        assertTravelsAtC(down);
+    }
+
+    @Property(tries = 200, shrinking = ShrinkingMode.OFF)
+    void signalsArriveAfterTheyAreSentAndTravelAtCOffTheLine(
+            @ForAll("offLine") Flights.Pair pair, @ForAll @Scale(9) @DoubleRange(min = -2, max = 6) double sendYears) {
+        signalsArriveAfterTheyAreSentAndTravelAtC(pair, sendYears);
+    }
+
+    @Disabled(CLOCK_LABEL_BUG)
+    @Property(tries = 200, shrinking = ShrinkingMode.OFF)
+    void signalsArriveAfterTheyAreSentAndTravelAtCOnTheLine(
+            @ForAll("onLine") Flights.Pair pair, @ForAll @Scale(9) @DoubleRange(min = -2, max = 6) double sendYears) {
+        signalsArriveAfterTheyAreSentAndTravelAtC(pair, sendYears);
+    }
+
+    // ---- arrival time increases with send time ----------------------------------------------------
+
+    private static void laterSendsArriveLater(Flights.Pair pair, double sendYears, double gapYears) {
+        StraightLineCraft craft = pair.craft();
+        InertialWorldline home = pair.home();
+        double t1 = sendYears * YR;
+        double t2 = (sendYears + gapYears) * YR;
+        SignalPath up1 = LightCone.future(home.atClock(t1), craft);
+        SignalPath up2 = LightCone.future(home.atClock(t2), craft);
+        if (up2.delivered()) {
+            assertTrue(up1.delivered(), "an earlier send arrives when a later one does");
+            assertTrue(up2.receive().timeSeconds() > up1.receive().timeSeconds(), "uplink arrival time");
+            assertTrue(up2.receive().clock() > up1.receive().clock(), "uplink arrival clock");
+        }
+        SignalPath down1 = LightCone.future(craft.atClock(t1), home);
+        SignalPath down2 = LightCone.future(craft.atClock(t2), home);
+        assertTrue(down2.receive().timeSeconds() > down1.receive().timeSeconds(), "downlink arrival time");
+        assertTrue(down2.receive().clock() > down1.receive().clock(), "downlink arrival clock");
+    }
+
+    @Property(tries = 200, shrinking = ShrinkingMode.OFF)
+    void aLaterSendArrivesLaterOffTheLine(@ForAll("offLine") Flights.Pair pair,
+                                          @ForAll @Scale(9) @DoubleRange(min = -2, max = 5) double sendYears,
+                                          @ForAll @Scale(9) @DoubleRange(min = 1e-3, max = 1) double gapYears) {
+        laterSendsArriveLater(pair, sendYears, gapYears);
+    }
+
+    @Property(tries = 200, shrinking = ShrinkingMode.OFF)
+    void aLaterSendArrivesLaterOnTheLine(@ForAll("onLine") Flights.Pair pair,
+                                         @ForAll @Scale(9) @DoubleRange(min = -2, max = 5) double sendYears,
+                                         @ForAll @Scale(9) @DoubleRange(min = 1e-3, max = 1) double gapYears) {
+        laterSendsArriveLater(pair, sendYears, gapYears);
+    }
+
+    // ---- the past cone of an arrival gives back its send ------------------------------------------
+
+    /**
+     * The past cone of the arrival gives back the send time: to 1e-12 of the light time, plus the rounding
+     * the arrival event already carries (ulp of its time and a few ulps of its position), carried back to the
+     * sender by 1 / (1 - beta_s . k), and the send time's own ulp.
+     */
+    private static void assertPastConeReturns(SignalPath p, Worldline sender) {
+        SignalPath back = LightCone.past(p.receive(), sender);
+        double te = p.send().timeSeconds();
+        double lever = 1;
+        if (p.path().norm() > 0) {
+            lever = 1 / (1 - p.send().velocity().dot(p.path().unit()) / C);
+        }
+        double carried = lever * (Math.ulp(p.receive().timeSeconds()) + 4 * positionUlp(p) / C);
+        double tolerance = 1e-12 * p.lightTimeSeconds() + 2 * Math.ulp(te) + carried;
+        assertEquals(te, back.send().timeSeconds(), tolerance, "send time from the past cone");
+        assertEquals(p.lightTimeSeconds(), back.lightTimeSeconds(), tolerance, "light time from the past cone");
+    }
+
+    private static void thePastConeOfAnArrivalIsItsSend(Flights.Pair pair, double sendYears) {
+        StraightLineCraft craft = pair.craft();
+        InertialWorldline home = pair.home();
+        SignalPath up = LightCone.future(home.atClock(sendYears * YR), craft);
+        if (up.delivered()) {
+            assertPastConeReturns(up, home);
+        }
+        assertPastConeReturns(LightCone.future(craft.atClock(sendYears * YR), home), craft);
+    }
+
+    @Property(tries = 200, shrinking = ShrinkingMode.OFF)
+    void thePastConeOfAnArrivalIsItsSendOffTheLine(
+            @ForAll("offLine") Flights.Pair pair, @ForAll @Scale(9) @DoubleRange(min = -2, max = 6) double sendYears) {
+        thePastConeOfAnArrivalIsItsSend(pair, sendYears);
+    }
+
+    @Property(tries = 200, shrinking = ShrinkingMode.OFF)
+    void thePastConeOfAnArrivalIsItsSendOnTheLine(
+            @ForAll("onLine") Flights.Pair pair, @ForAll @Scale(9) @DoubleRange(min = -2, max = 6) double sendYears) {
+        thePastConeOfAnArrivalIsItsSend(pair, sendYears);
+    }
+
+    // ---- horizons ---------------------------------------------------------------------------------
+
+    private static void sendsBeforeAHorizonArriveAndAfterItNever(Flights.Pair pair, double log10Before) {
+        StraightLineCraft craft = pair.craft();
+        InertialWorldline home = pair.home();
+        Horizon h = LightCone.horizon(home, craft);
+        assertTrue(h.exists(), "an open-ended burn has a horizon");
+        double th = h.lastSend().timeSeconds();
+        double delta = Math.pow(10, log10Before) * Math.max(Math.abs(th), YR);
+        assertTrue(LightCone.future(home.atTime(th - delta), craft).delivered(), "just before the horizon");
+        assertFalse(LightCone.future(home.atTime(th + delta), craft).delivered(), "just after the horizon");
+        assertFalse(LightCone.future(home.atTime(th + 10 * YR), craft).delivered(), "long after the horizon");
+    }
+
+    @Property(tries = 200, shrinking = ShrinkingMode.OFF)
+    void sendsJustBeforeAHorizonArriveAndSendsAfterItNeverDoOffTheLine(
+            @ForAll("openOffLine") Flights.Pair pair, @ForAll @Scale(3) @DoubleRange(min = -9, max = -3) double log10Before) {
+        sendsBeforeAHorizonArriveAndAfterItNever(pair, log10Before);
+    }
+
+    @Property(tries = 200, shrinking = ShrinkingMode.OFF)
+    void sendsJustBeforeAHorizonArriveAndSendsAfterItNeverDoOnTheLine(
+            @ForAll("openOnLine") Flights.Pair pair, @ForAll @Scale(3) @DoubleRange(min = -9, max = -3) double log10Before) {
+        sendsBeforeAHorizonArriveAndAfterItNever(pair, log10Before);
+    }
+
+    @Disabled("bug: the send at the horizon itself (Horizon.lastSend) is sometimes delivered: the computed "
+            + "supremum lands a rounding short of the asymptote's limit, so LightCone.future finds a (very late) "
+            + "arrival where the contract says a send at the horizon never arrives; see "
+            + "HorizonTest.aSendAtTheComputedHorizonItselfNeverArrives")
+    @Property(tries = 200, shrinking = ShrinkingMode.OFF)
+    void aSendAtTheHorizonItselfNeverArrives(@ForAll("openOffLine") Flights.Pair pair) {
+        Horizon h = LightCone.horizon(pair.home(), pair.craft());
+        assertFalse(LightCone.future(h.lastSend(), pair.craft()).delivered(), "at the horizon");
+    }
+
+    // ---- closed forms on the line against the bracketed solve just off it ---------------------------
+
+    @Disabled("bug: the bracketed solve off the line loses precision as 2 gamma^2 of a receding craft (e.g. "
+            + "2.0e-12 relative at arrival rapidity 4.9, light time 5.05e9 s, where the on-line closed form is right to "
+            + "1e-14); see LightConeTest.anUplinkFromOffTheLineMatchesA70DigitSolveWhenTheCraftRecedesFast")
+    @Property(tries = 200, shrinking = ShrinkingMode.OFF, maxDiscardRatio = 20)
+    void aStationOnTheFlightLineGetsTheSameArrivalAsOneJustOffIt(
+            @ForAll("onLine") Flights.Pair pair, @ForAll @Scale(9) @DoubleRange(min = -2, max = 6) double sendYears) {
+        // a station on the line (closed forms in c t -+ s) and a twin displaced 1 km sideways, where the
+        // bracketed solve runs: for light times over 1e6 s (distances over 3e14 m) the 1 km lengthens the path
+        // by under (1 km)^2 / (2 x 3e14 m) = 1.7e-9 m, below 1e-12 of the light time even after a receding
+        // craft stretches it by (1 + beta) gamma^2 <= 2 e^24
+        StraightLineCraft craft = pair.craft();
+        InertialWorldline a = pair.home();
+        org.nullpath.spacetime.Vec3 side = craft.heading().cross(org.nullpath.spacetime.Vec3.of(0.3, -0.5, 0.8));
+        Assume.that(side.norm() > 0.1);
+        InertialWorldline b = InertialWorldline.of(a.positionAtZero().plus(side.unit().times(1e3)), a.velocity(),
+                a.clockOffset());
+        SignalPath pa = LightCone.future(a.atClock(sendYears * YR), craft);
+        SignalPath pb = LightCone.future(b.atClock(sendYears * YR), craft);
+        Assume.that(pa.delivered() && pb.delivered() && pb.lightTimeSeconds() > 1e6);
+        Assume.that(pa.onFlightLine() && !pb.onFlightLine());
+        // the bound above needs the craft's rapidity at arrival below 12 (near a horizon the arrival is
+        // arbitrarily sensitive to the send: any 1 km is amplified without limit)
+        Assume.that(Math.abs(pa.receive().rapidity()) < 12);
+        assertEquals(pb.lightTimeSeconds(), pa.lightTimeSeconds(), 1e-12 * pb.lightTimeSeconds());
+    }
+}
