@@ -30,6 +30,12 @@ final class TerminalSummary {
                     t.link(), l.from(), l.to(), t.messages(), t.delivered(), Readable.time(t.minLightTime()),
                     Readable.time(t.maxLightTime()), Readable.number(t.minDoppler()), Readable.number(t.maxDoppler()));
         }
+        for (LinkTally t : r.links()) {
+            if (t.illConditioned() > 0) {
+                out.printf("  NOTE %s: %d light times are ill-conditioned (known to worse than 1e-12 relative; see the"
+                        + " light_time_condition column)%n", t.link(), t.illConditioned());
+            }
+        }
         for (CutoffRow c : r.cutoffs()) {
             out.printf("  cut-off %-12s on %s: %s%n", c.name(), c.link(), c.reachable()
                     ? "send by " + Readable.time(c.latestSendClock()) + " on the sender's clock"

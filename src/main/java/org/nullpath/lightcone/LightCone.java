@@ -61,8 +61,8 @@ public final class LightCone {
                 && !(asymptote.get().nullCoordinate(send.timeSeconds(), send.position()) < asymptote.get().limitMetres())) {
             return SignalPath.never(send);
         }
-        if (receiver instanceof StraightLineCraft craft && onLine(craft, send.position())) {
-            return futureOnLine(send, craft);
+        if (receiver instanceof StraightLineCraft craft) {
+            return onLine(craft, send.position()) ? futureOnLine(send, craft) : futureOffLine(send, craft);
         }
         State at = receiver.atTime(send.timeSeconds());
         Vec3 d0 = at.position().minus(send.position());
@@ -81,8 +81,8 @@ public final class LightCone {
             Step step = station.advance(at, -t);
             return new SignalPath(step.end(), receive, t, d0.minus(step.displacement()), false);
         }
-        if (sender instanceof StraightLineCraft craft && onLine(craft, receive.position())) {
-            return pastOnLine(receive, craft);
+        if (sender instanceof StraightLineCraft craft) {
+            return onLine(craft, receive.position()) ? pastOnLine(receive, craft) : pastOffLine(receive, craft);
         }
         State at = sender.atTime(receive.timeSeconds());
         Vec3 d0 = receive.position().minus(at.position());
@@ -111,7 +111,7 @@ public final class LightCone {
         if (sender instanceof InertialWorldline station) {
             Vec3 k = a.direction();
             double t = (a.limitMetres() + k.dot(station.positionAtZero())) / (C - k.dot(station.velocity()));
-            return new Horizon(true, station.atTime(t));
+            return new Horizon(true, firstNever(sender, a, t));
         }
         // c t - k.r increases strictly along a timelike worldline (by at least gamma c (1 - beta) per unit clock)
         State ref = sender.atTime(0);
@@ -121,7 +121,21 @@ public final class LightCone {
             return g0 + C * dt - a.direction().dot(s.displacement());
         };
         double dt = solveSigned(g, Math.max(1.0, Math.abs(g0) / C));
-        return new Horizon(true, sender.atTime(ref.timeSeconds() + dt));
+        return new Horizon(true, firstNever(sender, a, ref.timeSeconds() + dt));
+    }
+
+    /**
+     * The send state at {@code t}, moved up by the few ulps needed so that the future-cone test itself
+     * classes it as never arriving: the reported supremum is then consistent with every message row
+     * (a send at or after it never arrives).
+     */
+    private static State firstNever(Worldline sender, Asymptote a, double t) {
+        State s = sender.atTime(t);
+        for (int i = 0; i < 64 && a.nullCoordinate(s.timeSeconds(), s.position()) < a.limitMetres(); i++) {
+            t = Math.nextUp(t);
+            s = sender.atTime(t);
+        }
+        return s;
     }
 
     /** True when {@code position} lies on the craft's flight line to within {@link #ON_LINE_ANGLE}. */
@@ -174,6 +188,71 @@ public final class LightCone {
         }
         double t = -w.dt();
         return new SignalPath(craft.toState(w.end()), receive, t, craft.heading().times(sign * C * t), true);
+    }
+
+    /**
+     * A craft receiver off its flight line, emitter at along-track b and distance rho from the line. With
+     * A = c dt - dz and B = c dt + dz (dz the craft's along-track distance from b, dt the light time), the
+     * cone condition c^2 dt^2 = dz^2 + rho^2 reads A B = rho^2. A and B are null-coordinate offsets that
+     * the craft's pieces give without cancellation, so h(du) = A B - rho^2 is evaluated to a few ulps of
+     * rho^2 even for a craft fleeing at high gamma (where c T - |dr| loses 2 gamma^2 of precision). h is
+     * negative while A or B is not positive and increases strictly once both are, so its root in the
+     * craft's proper time du is unique; Brent finds it to {@value #RELATIVE_ACCURACY} relative.
+     */
+    private static SignalPath futureOffLine(State send, StraightLineCraft craft) {
+        double b = craft.alongOf(send.position());
+        Vec3 perpendicular = craft.perpendicularOf(send.position());
+        double rho2 = perpendicular.normSquared();
+        LineState at = craft.lineAtTime(send.timeSeconds());
+        double a0 = b - at.along();
+        DoubleUnaryOperator h = du -> {
+            StraightLineCraft.LineWalk w = craft.walkClock(at, du);
+            return (a0 + w.dU()) * (-a0 + w.dV()) - rho2;
+        };
+        double guess = Math.sqrt(a0 * a0 + rho2) / C / Math.cosh(Math.min(Math.abs(at.rapidity()), 700));
+        double du = solveAfterSignChange(h, guess > 0 ? guess : 1.0);
+        StraightLineCraft.LineWalk w = craft.walkClock(at, du);
+        double dz = 0.5 * (w.dV() - w.dU()) - a0;
+        Vec3 path = craft.heading().times(dz).minus(perpendicular);
+        return new SignalPath(send, craft.toState(w.end()), w.dt(), path, false);
+    }
+
+    /** The mirror image of {@link #futureOffLine}: the emission on a craft off whose line the reception lies. */
+    private static SignalPath pastOffLine(State receive, StraightLineCraft craft) {
+        double b = craft.alongOf(receive.position());
+        Vec3 perpendicular = craft.perpendicularOf(receive.position());
+        double rho2 = perpendicular.normSquared();
+        LineState at = craft.lineAtTime(receive.timeSeconds());
+        double a0 = at.along() - b;
+        DoubleUnaryOperator h = du -> {
+            StraightLineCraft.LineWalk w = craft.walkClock(at, -du);
+            return (a0 - w.dU()) * (-a0 - w.dV()) - rho2;
+        };
+        double guess = Math.sqrt(a0 * a0 + rho2) / C / Math.cosh(Math.min(Math.abs(at.rapidity()), 700));
+        double du = solveAfterSignChange(h, guess > 0 ? guess : 1.0);
+        StraightLineCraft.LineWalk w = craft.walkClock(at, -du);
+        // photon displacement: receive minus emit = (b - along_emit) heading + perpendicular
+        double dzEmit = a0 + 0.5 * (w.dV() - w.dU()); // along_emit - b
+        Vec3 path = perpendicular.minus(craft.heading().times(dzEmit));
+        return new SignalPath(craft.toState(w.end()), receive, -w.dt(), path, false);
+    }
+
+    /**
+     * The root of a function negative at 0 that changes sign once: bracketed by doubling from {@code guess}
+     * (the last negative point is kept as the lower end), then Brent.
+     */
+    private static double solveAfterSignChange(DoubleUnaryOperator f, double guess) {
+        double lo = 0;
+        double hi = guess;
+        int doublings = 0;
+        while (!(f.applyAsDouble(hi) > 0)) {
+            lo = hi;
+            hi *= 2;
+            if (++doublings > 2000 || !Double.isFinite(hi)) {
+                throw new ArithmeticException("light-cone solve: no bracket found");
+            }
+        }
+        return brent(f, lo, hi);
     }
 
     /**

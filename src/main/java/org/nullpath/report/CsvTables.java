@@ -32,6 +32,12 @@ public final class CsvTables {
     public static final List<String> MESSAGE_COLUMNS = List.of("message", "send_clock_s", "send_time_s", "status",
             "receive_time_s", "receive_clock_s", "light_time_s", "doppler", "frequency_offset", "receive_interval_s");
 
+    /**
+     * nullpath's own last column: the light time's relative condition number (lightcone.Conditioning);
+     * the light time is known to about this times 1.1e-16 relative.
+     */
+    public static final String CONDITION_COLUMN = "light_time_condition";
+
     /** Columns added for a coherent (radio) link. */
     public static final List<String> COHERENT_COLUMNS = List.of("tx_frequency_hz", "rx_frequency_hz",
             "doppler_rate_hz_per_s", "in_tuning_range", "rx_power_dbw", "cn0_dbhz", "rx_data_rate_bps", "ebn0_db",
@@ -55,6 +61,7 @@ public final class CsvTables {
             if (terms != null) {
                 header.addAll(terms.detection() == LinkTerms.Detection.COHERENT ? COHERENT_COLUMNS : PHOTON_COLUMNS);
             }
+            header.add(CONDITION_COLUMN);
             cells = new Object[header.size()];
             printer.printRecord(header);
         }
@@ -92,6 +99,7 @@ public final class CsvTables {
                     cells[20] = bool(b.withinDopplerRate());
                 }
             }
+            cells[cells.length - 1] = num(r.lightTimeCondition());
             try {
                 printer.printRecord(cells);
             } catch (IOException e) {

@@ -79,6 +79,7 @@ final class SummaryJson {
             m.put("max_doppler", nan(t.maxDoppler()));
             m.put("min_light_time_s", nan(t.minLightTime()));
             m.put("max_light_time_s", nan(t.maxLightTime()));
+            m.put("ill_conditioned_light_times", t.illConditioned());
             BudgetTally.Figures b = t.budget();
             if (b != null) {
                 Map<String, Object> bm = new LinkedHashMap<>();

@@ -2,6 +2,7 @@ package org.nullpath.schedule;
 
 import java.util.function.Consumer;
 
+import org.nullpath.lightcone.Conditioning;
 import org.nullpath.lightcone.LightCone;
 import org.nullpath.lightcone.SignalPath;
 import org.nullpath.link.Budget;
@@ -20,6 +21,9 @@ import org.nullpath.worldline.Worldline;
 public final class LinkSchedule {
     private LinkSchedule() {
     }
+
+    /** Light times whose condition number times the unit roundoff exceeds this are counted as ill-conditioned. */
+    public static final double ILL_CONDITIONED = 1e-12;
 
     /** Total messages the scenario plans (message plans plus two per exchange round trip). */
     public static long plannedMessages(Scenario s) {
@@ -64,6 +68,7 @@ public final class LinkSchedule {
         SendOrder order = new SendOrder(SendOrder.plansOf(s, link.name()));
         long index = 0;
         long delivered = 0;
+        long illConditioned = 0;
         SignalPath previous = null;
         double lastArrivalClock = Double.NaN;
         double minD = Double.NaN;
@@ -86,7 +91,10 @@ public final class LinkSchedule {
                 }
                 double interval = previous == null ? Double.NaN : arrivalInterval(sender, receiver, previous, p);
                 row = new MessageRow(index, clock, p.send().timeSeconds(), true, p.receive().timeSeconds(), rxClock,
-                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, budget);
+                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, budget, Conditioning.ofLightTime(p));
+                if (row.lightTimeCondition() * Conditioning.EPSILON > ILL_CONDITIONED) {
+                    illConditioned++;
+                }
                 previous = p;
                 lastArrivalClock = rxClock;
                 minD = Double.isNaN(minD) ? d.doppler() : Math.min(minD, d.doppler());
@@ -95,12 +103,12 @@ public final class LinkSchedule {
                 maxT = Double.isNaN(maxT) ? p.lightTimeSeconds() : Math.max(maxT, p.lightTimeSeconds());
             } else {
                 row = new MessageRow(index, clock, p.send().timeSeconds(), false, Double.NaN, Double.NaN, Double.NaN,
-                        Double.NaN, Double.NaN, Double.NaN, null);
+                        Double.NaN, Double.NaN, Double.NaN, null, Double.NaN);
                 previous = null;
             }
             sink.accept(row);
         }
         return new LinkTally(link.name(), index, delivered, index - delivered, minD, maxD, minT, maxT,
-                lastArrivalClock, budgets == null ? null : budgets.snapshot());
+                lastArrivalClock, budgets == null ? null : budgets.snapshot(), illConditioned);
     }
 }

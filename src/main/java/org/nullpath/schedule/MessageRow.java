@@ -16,8 +16,9 @@ import org.nullpath.link.Budget;
  * @param frequencyOffset  doppler - 1, without cancellation
  * @param receiveInterval  receiver-clock time since the previous message of this link arrived, s
  * @param budget           frequency plan and link budget, null when the link has no terms or the message never arrives
+ * @param lightTimeCondition relative condition number of the light time (see lightcone.Conditioning); NaN when never
  */
 public record MessageRow(long message, double sendClock, double sendTime, boolean delivered, double receiveTime,
                          double receiveClock, double lightTime, double doppler, double frequencyOffset,
-                         double receiveInterval, Budget budget) {
+                         double receiveInterval, Budget budget, double lightTimeCondition) {
 }

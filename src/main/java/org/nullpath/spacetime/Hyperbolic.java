@@ -146,8 +146,18 @@ public final class Hyperbolic {
         return FastMath.atanh(beta);
     }
 
-    /** atanh(b1) - atanh(b0) without cancellation: atanh((b1 - b0)/(1 - b1 b0)). */
+    /**
+     * atanh(b1) - atanh(b0) without cancellation. When the two rapidities are close, the difference
+     * cancels and atanh((b1 - b0)/(1 - b1 b0)) is used instead; when they are far apart that quotient
+     * nears 1, where atanh amplifies rounding, and the plain difference is exact to rounding.
+     */
     public static double deltaRapidity(double beta1, double beta0) {
+        double e1 = FastMath.atanh(beta1);
+        double e0 = FastMath.atanh(beta0);
+        double direct = e1 - e0;
+        if (Math.abs(direct) >= 0.5 * Math.max(Math.abs(e1), Math.abs(e0))) {
+            return direct;
+        }
         return FastMath.atanh((beta1 - beta0) / (1 - beta1 * beta0));
     }
 

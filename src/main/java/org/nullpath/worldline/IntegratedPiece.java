@@ -187,7 +187,7 @@ final class IntegratedPiece implements Piece {
     }
 
     private double local(LineState cur) {
-        return cur.clock() - start.clock();
+        return cur.local();
     }
 
     private double offset(LineState cur, double du, int k) {

@@ -65,7 +65,7 @@ public final class StraightLineCraft implements Worldline {
         }
         Vec3 n = heading.unit();
         double eta0 = Hyperbolic.rapidityOfBeta(startSpeed / C);
-        LineState start = new LineState(startClock, startTime, 0.0, eta0, 0);
+        LineState start = new LineState(startClock, startTime, 0.0, eta0, 0, 0.0);
         List<Segment> segs = new ArrayList<>();
         segs.add(new Segment(new ConstantPiece(0.0), start, null, start));
         List<LegSpan> spans = new ArrayList<>();
@@ -100,7 +100,7 @@ public final class StraightLineCraft implements Worldline {
             LineState hi = new LineState(cur.clock() + du,
                     cur.timeSeconds() + piece.timeOffset(lo, du),
                     cur.along() + piece.distanceOffset(lo, du),
-                    piece.rapidityAfter(lo, du), segs.size());
+                    piece.rapidityAfter(lo, du), segs.size(), du);
             checkRepresentable(i, hi);
             spans.add(new LegSpan(i, leg, lo, hi));
             if (du > 0) {
@@ -117,7 +117,7 @@ public final class StraightLineCraft implements Worldline {
     }
 
     private static LineState withSegment(LineState s, int index) {
-        return new LineState(s.clock(), s.timeSeconds(), s.along(), s.rapidity(), index);
+        return new LineState(s.clock(), s.timeSeconds(), s.along(), s.rapidity(), index, 0.0);
     }
 
     private static void checkRepresentable(int leg, LineState s) {
@@ -308,7 +308,7 @@ public final class StraightLineCraft implements Worldline {
         double du = clock - r.clock();
         Piece p = g.piece();
         return checked(new LineState(clock, r.timeSeconds() + p.timeOffset(r, du), r.along() + p.distanceOffset(r, du),
-                p.rapidityAfter(r, du), i));
+                p.rapidityAfter(r, du), i, r.local() + du));
     }
 
     /** Line state at a mission time. */
@@ -318,7 +318,8 @@ public final class StraightLineCraft implements Worldline {
         LineState r = g.ref();
         Piece p = g.piece();
         double du = p.properTimeForTime(r, t - r.timeSeconds());
-        return checked(new LineState(r.clock() + du, t, r.along() + p.distanceOffset(r, du), p.rapidityAfter(r, du), i));
+        return checked(new LineState(r.clock() + du, t, r.along() + p.distanceOffset(r, du), p.rapidityAfter(r, du), i,
+                r.local() + du));
     }
 
     private static LineState checked(LineState s) {
@@ -395,67 +396,69 @@ public final class StraightLineCraft implements Worldline {
      * @param dt     mission-time difference
      * @param dClock craft-clock difference
      * @param dAlong distance difference along the heading
+     * @param dU     difference of U = c t - along, summed from the pieces' own offsets (no cancellation)
+     * @param dV     difference of V = c t + along, likewise
      * @param end    the state reached, or null when the move can never be completed (beyond a horizon)
      */
-    public record LineWalk(double dt, double dClock, double dAlong, LineState end) {
+    public record LineWalk(double dt, double dClock, double dAlong, double dU, double dV, LineState end) {
         public boolean never() {
             return end == null;
         }
     }
 
     private interface Measure {
-        /** The measure's change from {@code cur} to {@code boundary} within segment {@code g}. */
-        double toBoundary(LineState cur, Segment g, LineState boundary);
+        /** The measure's change over proper time {@code du} from {@code cur} within piece {@code p}. */
+        double offset(Piece p, LineState cur, double du);
 
-        /** Proper time from {@code cur} for a change {@code amount} within segment {@code g}; NaN if never. */
-        double properTime(LineState cur, Segment g, double amount);
+        /** Proper time from {@code cur} for a change {@code amount} within piece {@code p}; NaN if never. */
+        double properTime(Piece p, LineState cur, double amount);
     }
 
     private static final Measure TIME = new Measure() {
         @Override
-        public double toBoundary(LineState cur, Segment g, LineState b) {
-            return b.timeSeconds() - cur.timeSeconds();
+        public double offset(Piece p, LineState cur, double du) {
+            return p.timeOffset(cur, du);
         }
 
         @Override
-        public double properTime(LineState cur, Segment g, double amount) {
-            return g.piece().properTimeForTime(cur, amount);
+        public double properTime(Piece p, LineState cur, double amount) {
+            return p.properTimeForTime(cur, amount);
         }
     };
 
     private static final Measure CLOCK = new Measure() {
         @Override
-        public double toBoundary(LineState cur, Segment g, LineState b) {
-            return b.clock() - cur.clock();
+        public double offset(Piece p, LineState cur, double du) {
+            return du;
         }
 
         @Override
-        public double properTime(LineState cur, Segment g, double amount) {
+        public double properTime(Piece p, LineState cur, double amount) {
             return amount;
         }
     };
 
     private static final Measure U = new Measure() {
         @Override
-        public double toBoundary(LineState cur, Segment g, LineState b) {
-            return g.piece().uOffset(cur, b.clock() - cur.clock());
+        public double offset(Piece p, LineState cur, double du) {
+            return p.uOffset(cur, du);
         }
 
         @Override
-        public double properTime(LineState cur, Segment g, double amount) {
-            return g.piece().properTimeForU(cur, amount);
+        public double properTime(Piece p, LineState cur, double amount) {
+            return p.properTimeForU(cur, amount);
         }
     };
 
     private static final Measure V = new Measure() {
         @Override
-        public double toBoundary(LineState cur, Segment g, LineState b) {
-            return g.piece().vOffset(cur, b.clock() - cur.clock());
+        public double offset(Piece p, LineState cur, double du) {
+            return p.vOffset(cur, du);
         }
 
         @Override
-        public double properTime(LineState cur, Segment g, double amount) {
-            return g.piece().properTimeForV(cur, amount);
+        public double properTime(Piece p, LineState cur, double amount) {
+            return p.properTimeForV(cur, amount);
         }
     };
 
@@ -484,7 +487,7 @@ public final class StraightLineCraft implements Worldline {
 
     private LineWalk walk(LineState from, double amount, Measure m, boolean exactTime) {
         if (amount == 0) {
-            return new LineWalk(0, 0, 0, from);
+            return new LineWalk(0, 0, 0, 0, 0, from);
         }
         boolean forward = amount > 0;
         int i = from.segment();
@@ -492,32 +495,41 @@ public final class StraightLineCraft implements Worldline {
         double dt = 0;
         double dClock = 0;
         double dAlong = 0;
+        double dU = 0;
+        double dV = 0;
         double rem = amount;
         while (true) {
             Segment g = segments.get(i);
+            Piece p = g.piece();
             LineState boundary = forward ? g.hi() : g.lo();
             if (boundary != null) {
-                double cap = m.toBoundary(cur, g, boundary);
+                // every step is an offset over a proper time that is a difference of local (small) values
+                double du = boundary.local() - cur.local();
+                double cap = m.offset(p, cur, du);
                 if (forward ? rem > cap : rem < cap) {
-                    dt += boundary.timeSeconds() - cur.timeSeconds();
-                    dClock += boundary.clock() - cur.clock();
-                    dAlong += boundary.along() - cur.along();
+                    dt += p.timeOffset(cur, du);
+                    dClock += du;
+                    dAlong += p.distanceOffset(cur, du);
+                    dU += p.uOffset(cur, du);
+                    dV += p.vOffset(cur, du);
                     rem -= cap;
                     i += forward ? 1 : -1;
-                    cur = withSegment(boundary, i);
+                    Segment next = segments.get(i);
+                    cur = forward ? next.lo() : next.hi();
                     continue;
                 }
             }
-            double du = m.properTime(cur, g, rem);
+            double du = m.properTime(p, cur, rem);
             if (Double.isNaN(du)) {
-                return new LineWalk(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NaN, null);
+                return new LineWalk(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NaN, Double.NaN,
+                        Double.NaN, null);
             }
-            Piece p = g.piece();
             double ddt = exactTime ? rem : p.timeOffset(cur, du);
             double dds = p.distanceOffset(cur, du);
             LineState end = checked(new LineState(cur.clock() + du, cur.timeSeconds() + ddt, cur.along() + dds,
-                    p.rapidityAfter(cur, du), i));
-            return new LineWalk(dt + ddt, dClock + du, dAlong + dds, end);
+                    p.rapidityAfter(cur, du), i, cur.local() + du));
+            return new LineWalk(dt + ddt, dClock + du, dAlong + dds, dU + p.uOffset(cur, du), dV + p.vOffset(cur, du),
+                    end);
         }
     }
 }

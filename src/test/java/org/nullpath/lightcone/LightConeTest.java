@@ -10,7 +10,6 @@ import java.util.List;
 
 import org.apache.commons.math3.analysis.solvers.AllowedSolution;
 import org.apache.commons.math3.analysis.solvers.BracketingNthOrderBrentSolver;
-import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -175,12 +174,6 @@ class LightConeTest {
         assertTrue(relativeError(p.receive().clock(), clock) < TOL);
     }
 
-    @Disabled("bug: the light time depends on the craft's clock label. Craft from rest at the origin heading +x, "
-            + "start time 0, Burn(0.49134708620235 m/s^2, ClockDuration(1e6 s)); station at rest at x = -7.6e9 m "
-            + "sends at t = -16.4 s. Closed form T = 25.35087130071463 s; with start clock 0 the error is 1e-16, "
-            + "with start clock 2.3523837217799243e7 s it is 5.9e-11, 1e9 s: 9.4e-10, 3e9 s: 3.8e-9. "
-            + "StraightLineCraft.walk takes boundary.clock() - cur.clock() (two absolute readings) as the proper time "
-            + "to the leg boundary, so the walk inherits ulp(clock) * c of U")
     @ParameterizedTest(name = "start clock {0} s, a = {1} m/s^2")
     @CsvSource({"0, 0.49134708620235", "2.3523837217799243e7, 0.49134708620235", "1e9, -0.49134708620235",
             "3e9, 0.49134708620235"})
@@ -238,16 +231,30 @@ class LightConeTest {
                 () -> "light time " + p.lightTimeSeconds() + " expected " + lightTime);
     }
 
-    @Disabled("bug: off the flight line, the bracketed solve of F(T) = c T - |d0 + dr(T)| loses precision as "
-            + "(1 - beta . k)^-1 ~ 2 gamma^2 of a receding receiver, though the light time itself is well "
-            + "conditioned (relative condition ~1). Station at rest at (0, 1 ly, 0), craft from rest at the origin "
-            + "on an open 1 g0 burn along +x, send at f c/g0: relative error of the light time against the 70-digit "
-            + "solve 5.8e-12 at f = 0.99 (arrival rapidity 5.3), 1.9e-10 at 0.999 (7.6), 4.7e-8 at 0.9999 (9.9), "
-            + "7.9e-6 at 0.99999 (12.2); station 1 au off the line: 3.9e-12 at 0.999, 1.5e-8 at 0.9999")
     @ParameterizedTest(name = "send at {0} of the horizon time, station {1} m off the line")
     @CsvSource({"0.99, 9460730472580800", "0.999, 9460730472580800", "0.9999, 9460730472580800",
-            "0.99999, 9460730472580800", "0.9999, 149597870700"})
+            "0.9999, 149597870700"})
     void anUplinkFromOffTheLineMatchesA70DigitSolveWhenTheCraftRecedesFast(double fraction, double d) {
         anUplinkFromOffTheLineMatchesA70DigitSolveWhileTheCraftIsSlow(fraction, d);
+    }
+
+    /**
+     * Sent at 0.99999 of the horizon time from 1 ly off the line, the light time (about 100 000 yr) depends
+     * on the send time with a relative condition number near 1e5 (Conditioning): doubles for t_e and r_e
+     * alone then fix it only to ~1e-11. The solver must meet that bound, and nullpath must say the value
+     * is ill-conditioned rather than pass it off as good to 1e-12.
+     */
+    @Test
+    void anIllConditionedLightTimeIsAccurateToItsConditionAndFlaggedAsSuch() {
+        StraightLineCraft craft = fromRest(G0, new LegSpec.Burn(G0, new LegSpec.Forever()));
+        double d = 9460730472580800.0;
+        double te = 0.99999 * C_MS / G0;
+        SignalPath p = LightCone.future(InertialWorldline.atRest(Vec3.of(0, d, 0)).atTime(te), craft);
+        BigDecimal lightTime = offLineLightTime(G0, d, te, p.receive().clock());
+        double kappa = Conditioning.ofLightTime(p);
+        assertTrue(kappa * Conditioning.EPSILON > 1e-12, () -> "flagged as ill-conditioned: kappa = " + kappa);
+        double error = relativeError(p.lightTimeSeconds(), lightTime);
+        assertTrue(error < 4 * kappa * Conditioning.EPSILON,
+                () -> "error " + error + " within 4 kappa eps = " + 4 * kappa * Conditioning.EPSILON);
     }
 }
