@@ -18,7 +18,8 @@ import picocli.CommandLine.Spec;
 /** {@code nullpath plan SCENARIO --out DIR}: the main job. */
 @Command(name = "plan", mixinStandardHelpOptions = true,
         description = "Compute every planned message, cut-off, horizon and round trip of a scenario and write "
-                + "them as CSV and JSON into a folder (all files appear together, or none on failure).")
+                + "them as CSV and JSON, with an HTML report, into a folder (all files appear together, or none on "
+                + "failure).")
 final class PlanCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -32,6 +33,9 @@ final class PlanCommand implements Callable<Integer> {
     @Option(names = "--max-messages", paramLabel = "N", description = "cap on messages per plan (default: ${DEFAULT-VALUE})")
     long maxMessages = Inputs.DEFAULT_MAX_MESSAGES;
 
+    @Option(names = "--no-report", description = "do not write report.html")
+    boolean noReport;
+
     @Option(names = "--debug", description = "show stack traces for unexpected failures")
     boolean debug;
 
@@ -44,7 +48,7 @@ final class PlanCommand implements Callable<Integer> {
         }
         PlanOutput.Result result;
         try (OutputFolder folder = OutputFolder.begin(out)) {
-            result = PlanOutput.write(s, folder);
+            result = PlanOutput.write(s, folder, !noReport);
             folder.commit();
         } catch (IOException | UncheckedIOException e) {
             err.println("nullpath: cannot write " + out + ": " + e.getMessage());

@@ -15,7 +15,8 @@ import org.nullpath.schedule.Windows;
 
 /**
  * Runs a scenario's schedules and writes every output file into an {@link OutputFolder}: one CSV per
- * link (streamed row by row), cutoffs.csv, horizons.csv, one CSV per exchange plan and summary.json.
+ * link (streamed row by row), cutoffs.csv, horizons.csv, one CSV per exchange plan, summary.json and
+ * (unless asked not to) report.html.
  */
 public final class PlanOutput {
     private PlanOutput() {
@@ -38,8 +39,16 @@ public final class PlanOutput {
     public record ExchangeTally(String name, long roundTrips, long complete) {
     }
 
-    /** Computes and writes everything; the caller commits or discards the folder. */
+    /** Computes and writes everything, report.html included; the caller commits or discards the folder. */
     public static Result write(Scenario s, OutputFolder out) throws IOException {
+        return write(s, out, true);
+    }
+
+    /**
+     * Computes and writes everything; report.html only when {@code report} is true. The caller commits or
+     * discards the folder.
+     */
+    public static Result write(Scenario s, OutputFolder out, boolean report) throws IOException {
         List<LinkTally> tallies = new ArrayList<>();
         for (Scenario.Link link : s.links().values()) {
             try (CsvTables.MessageWriter w = new CsvTables.MessageWriter(out.file(link.name() + ".csv"),
@@ -67,6 +76,17 @@ public final class PlanOutput {
         }
         Result result = new Result(tallies, exchanges, cutoffs, horizons, windows);
         SummaryJson.write(out.file("summary.json"), s, result);
+        if (report) {
+            try {
+                HtmlReport.write(out.file("report.html"), s, result);
+            } catch (java.awt.AWTError | UnsatisfiedLinkError | NoClassDefFoundError e) {
+                // charts need AWT font metrics; on a Java installation without any fonts, the data files are
+                // still the product: leave the report out and say why on standard error
+                java.nio.file.Files.deleteIfExists(out.file("report.html"));
+                System.err.println("nullpath: report.html left out: this Java has no usable fonts for charts ("
+                        + e.getClass().getSimpleName() + "); install a font package such as fonts-dejavu-core");
+            }
+        }
         return result;
     }
 }

@@ -1,0 +1,479 @@
+package org.nullpath.report;
+
+import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.Stroke;
+import java.awt.geom.Rectangle2D;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+
+import org.jfree.chart.ChartRenderingInfo;
+import org.jfree.chart.JFreeChart;
+import org.jfree.chart.axis.LogAxis;
+import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.axis.NumberTickUnit;
+import org.jfree.chart.axis.ValueAxis;
+import org.jfree.chart.plot.CombinedRangeXYPlot;
+import org.jfree.chart.plot.IntervalMarker;
+import org.jfree.chart.plot.ValueMarker;
+import org.jfree.chart.plot.XYPlot;
+import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
+import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.RectangleAnchor;
+import org.jfree.chart.ui.RectangleInsets;
+import org.jfree.chart.ui.TextAnchor;
+import org.jfree.data.xy.XYSeries;
+import org.jfree.data.xy.XYSeriesCollection;
+import org.jfree.svg.SVGGraphics2D;
+import org.jfree.svg.ViewBox;
+
+/**
+ * The report's charts: JFreeChart plots drawn to inline SVG with JFreeSVG, in nullpath's own plain
+ * look. Colours come from the Okabe-Ito palette (Okabe and Ito, "Color Universal Design", 2008), which
+ * stays distinguishable with the common forms of colour blindness; every series also has its own dash
+ * pattern, so nothing depends on colour alone. Keys are written as HTML beside each chart, not inside it.
+ *
+ * <p>Output is deterministic: each SVG's definitions (clip paths) are prefixed with the figure's own id
+ * instead of JFreeSVG's time-based default, coordinates are written with a fixed number of decimals
+ * without the machine's locale, and ranges and tick steps are set here rather than left to auto-ranging.
+ */
+final class Charts {
+    static {
+        if (System.getProperty("java.awt.headless") == null) {
+            System.setProperty("java.awt.headless", "true");
+        }
+    }
+
+    // Okabe-Ito palette
+    static final Color BLACK = new Color(0x000000);
+    static final Color ORANGE = new Color(0xE69F00);
+    static final Color SKY_BLUE = new Color(0x56B4E9);
+    static final Color GREEN = new Color(0x009E73);
+    static final Color YELLOW = new Color(0xF0E442);
+    static final Color BLUE = new Color(0x0072B2);
+    static final Color VERMILLION = new Color(0xD55E00);
+    static final Color PURPLE = new Color(0xCC79A7);
+
+    static final Color INK = new Color(0x222222);
+    static final Color GRID = new Color(0xE1E1E1);
+    static final Color FRAME = new Color(0x9A9A9A);
+    static final Color MUTED = new Color(0x6B6B6B);
+
+    static final Font AXIS_FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 13);
+    static final Font TICK_FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 11);
+    static final Font NOTE_FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 11);
+
+    /** Width and height of a per-link chart, px (the SVG scales with the page). */
+    static final int WIDTH = 900;
+    static final int HEIGHT = 300;
+
+    private Charts() {
+    }
+
+    /** How a line is drawn; each has a CSS border style for the HTML key. */
+    enum Dash {
+        SOLID(null, "solid"), DASHED(new float[] {7f, 4f}, "dashed"), DOTTED(new float[] {1.5f, 3f}, "dotted"),
+        LONG_DASH(new float[] {12f, 4f, 3f, 4f}, "dashed");
+
+        final float[] pattern;
+        final String css;
+
+        Dash(float[] pattern, String css) {
+            this.pattern = pattern;
+            this.css = css;
+        }
+    }
+
+    /** What a key entry shows. */
+    enum Swatch {
+        LINE, BAND, POINT
+    }
+
+    /**
+     * One entry of a figure's key.
+     *
+     * @param label  what it is, in words
+     * @param colour its colour
+     * @param dash   its line style
+     * @param swatch a line, a shaded band or a point mark
+     */
+    record Key(String label, Color colour, Dash dash, Swatch swatch) {
+        static Key line(String label, Color colour, Dash dash) {
+            return new Key(label, colour, dash, Swatch.LINE);
+        }
+
+        static Key band(String label, Color colour) {
+            return new Key(label, colour, Dash.SOLID, Swatch.BAND);
+        }
+
+        static Key point(String label, Color colour) {
+            return new Key(label, colour, Dash.SOLID, Swatch.POINT);
+        }
+    }
+
+    /**
+     * A rendered chart.
+     *
+     * @param id  the SVG element's id (unique in the report)
+     * @param svg the inline {@code <svg>} element
+     * @param key what its lines mean
+     */
+    record Figure(String id, String svg, List<Key> key) {
+    }
+
+    /**
+     * A series of points already in display units; NaN breaks the line.
+     *
+     * @param label  key label
+     * @param colour line colour
+     * @param dash   line style
+     * @param width  line width, px
+     * @param x      abscissae
+     * @param y      ordinates
+     */
+    record Line(String label, Color colour, Dash dash, float width, double[] x, double[] y) {
+    }
+
+    /** A horizontal line across a chart (a threshold), in display units. */
+    record Level(double y, String label, Color colour, Dash dash) {
+    }
+
+    /** A vertical line in one panel, in display units. */
+    record Mark(double x, String label, Color colour, Dash dash) {
+    }
+
+    /**
+     * One panel of a chart that shares its vertical axis with the others.
+     *
+     * @param xLabel the horizontal axis' label, with its unit
+     * @param lines  the series
+     * @param marks  vertical lines
+     */
+    record Panel(String xLabel, List<Line> lines, List<Mark> marks) {
+    }
+
+    /**
+     * The vertical axis of a chart.
+     *
+     * @param label       label with unit
+     * @param log         logarithmic
+     * @param floorAtZero when the data are all >= 0, let the axis start at 0 rather than below it
+     */
+    record YAxis(String label, boolean log, boolean floorAtZero) {
+    }
+
+    /**
+     * A chart of side-by-side panels sharing one vertical axis.
+     *
+     * @param band   a shaded band of the vertical axis (a tuning range), {lo, hi} in display units, or null
+     * @param levels horizontal lines
+     */
+    static Figure panels(String id, String title, YAxis y, List<Panel> panels, double[] band, List<Level> levels,
+                         List<Key> key) {
+        List<Double> ys = new ArrayList<>();
+        for (Panel p : panels) {
+            for (Line l : p.lines()) {
+                for (double v : l.y()) {
+                    ys.add(v);
+                }
+            }
+        }
+        if (band != null) {
+            ys.add(band[0]);
+            ys.add(band[1]);
+        }
+        for (Level l : levels) {
+            ys.add(l.y());
+        }
+        ValueAxis yAxis = y.log() ? logAxis(y.label(), ys) : linearAxis(y.label(), ys, 0.05, y.floorAtZero(), 5);
+        CombinedRangeXYPlot plot = new CombinedRangeXYPlot(yAxis);
+        plot.setGap(26);
+        for (Panel p : panels) {
+            List<Double> xs = new ArrayList<>();
+            for (Line l : p.lines()) {
+                for (double v : l.x()) {
+                    xs.add(v);
+                }
+            }
+            XYPlot sub = new XYPlot(dataset(p.lines(), y.log()), linearAxis(p.xLabel(), xs, 0.01, false, 5), null,
+                    renderer(p.lines()));
+            style(sub);
+            if (band != null) {
+                IntervalMarker m = new IntervalMarker(band[0], band[1]);
+                m.setPaint(new Color(YELLOW.getRed(), YELLOW.getGreen(), YELLOW.getBlue(), 110));
+                m.setOutlinePaint(null);
+                sub.addRangeMarker(m, Layer.BACKGROUND);
+                for (double edge : band) {
+                    ValueMarker e = new ValueMarker(edge, new Color(0x8A7F00), stroke(Dash.SOLID, 1f));
+                    sub.addRangeMarker(e, Layer.BACKGROUND);
+                }
+            }
+            for (Level l : levels) {
+                ValueMarker m = new ValueMarker(l.y(), l.colour(), stroke(l.dash(), 1.3f));
+                sub.addRangeMarker(m, Layer.FOREGROUND);
+            }
+            for (Mark mk : p.marks()) {
+                ValueMarker m = new ValueMarker(mk.x(), mk.colour(), stroke(mk.dash(), 1.4f));
+                m.setLabel(mk.label());
+                m.setLabelFont(NOTE_FONT);
+                m.setLabelPaint(mk.colour().darker());
+                m.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+                m.setLabelAnchor(RectangleAnchor.TOP_LEFT);
+                m.setLabelTextAnchor(TextAnchor.TOP_RIGHT);
+                m.setLabelOffset(new RectangleInsets(4, 4, 4, 4));
+                sub.addDomainMarker(m, Layer.FOREGROUND);
+            }
+            plot.add(sub, 1);
+        }
+        style(plot);
+        return new Figure(id, render(chart(plot), id, title, WIDTH, HEIGHT), key);
+    }
+
+    /** A single-panel chart with a linear vertical axis (the clock image). */
+    static Figure single(String id, String title, String xLabel, String yLabel, List<Line> lines, List<Mark> marks,
+                         List<Key> key, int width, int height) {
+        List<Double> xs = new ArrayList<>();
+        List<Double> ys = new ArrayList<>();
+        for (Line l : lines) {
+            for (double v : l.x()) {
+                xs.add(v);
+            }
+            for (double v : l.y()) {
+                ys.add(v);
+            }
+        }
+        XYPlot plot = new XYPlot(dataset(lines), linearAxis(xLabel, xs, 0.01, false, 6),
+                linearAxis(yLabel, ys, 0.04, true, 6), renderer(lines));
+        style(plot);
+        for (Mark mk : marks) {
+            ValueMarker m = new ValueMarker(mk.x(), mk.colour(), stroke(mk.dash(), 1.4f));
+            m.setLabel(mk.label());
+            m.setLabelFont(NOTE_FONT);
+            m.setLabelPaint(mk.colour().darker());
+            m.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+            m.setLabelAnchor(RectangleAnchor.TOP_LEFT);
+            m.setLabelTextAnchor(TextAnchor.TOP_RIGHT);
+            m.setLabelOffset(new RectangleInsets(4, 4, 4, 4));
+            plot.addDomainMarker(m, Layer.FOREGROUND);
+        }
+        return new Figure(id, render(chart(plot), id, title, width, height), key);
+    }
+
+    static XYSeriesCollection dataset(List<Line> lines) {
+        return dataset(lines, false);
+    }
+
+    /** The lines as a dataset; non-finite values (and with {@code positiveOnly}, values <= 0) become gaps. */
+    static XYSeriesCollection dataset(List<Line> lines, boolean positiveOnly) {
+        XYSeriesCollection c = new XYSeriesCollection();
+        for (int i = 0; i < lines.size(); i++) {
+            Line l = lines.get(i);
+            // keys must be unique within a collection; the label is shown in the HTML key, not here
+            XYSeries s = new XYSeries(i + ": " + l.label(), false, true);
+            for (int k = 0; k < l.x().length; k++) {
+                double x = l.x()[k];
+                double y = l.y()[k];
+                // a value that cannot be drawn (an infinite margin at zero distance) leaves a gap
+                boolean drawable = Double.isFinite(x) && Double.isFinite(y) && (!positiveOnly || y > 0);
+                s.add(x, drawable ? y : Double.NaN, false);
+            }
+            c.addSeries(s);
+        }
+        return c;
+    }
+
+    static XYLineAndShapeRenderer renderer(List<Line> lines) {
+        XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
+        r.setDrawSeriesLineAsPath(true);
+        for (int i = 0; i < lines.size(); i++) {
+            r.setSeriesPaint(i, lines.get(i).colour());
+            r.setSeriesStroke(i, stroke(lines.get(i).dash(), lines.get(i).width()));
+        }
+        return r;
+    }
+
+    static Stroke stroke(Dash dash, float width) {
+        return new BasicStroke(width, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, dash.pattern, 0f);
+    }
+
+    static JFreeChart chart(XYPlot plot) {
+        JFreeChart chart = new JFreeChart(null, AXIS_FONT, plot, false);
+        chart.setBackgroundPaint(Color.WHITE);
+        chart.setBorderVisible(false);
+        chart.setPadding(new RectangleInsets(8, 4, 4, 14));
+        chart.setAntiAlias(true);
+        chart.setTextAntiAlias(true);
+        return chart;
+    }
+
+    static void style(XYPlot plot) {
+        plot.setBackgroundPaint(Color.WHITE);
+        plot.setOutlinePaint(FRAME);
+        plot.setOutlineStroke(new BasicStroke(0.8f));
+        plot.setDomainGridlinePaint(GRID);
+        plot.setRangeGridlinePaint(GRID);
+        plot.setDomainGridlineStroke(new BasicStroke(0.8f));
+        plot.setRangeGridlineStroke(new BasicStroke(0.8f));
+        plot.setAxisOffset(new RectangleInsets(2, 2, 2, 2));
+        plot.setInsets(new RectangleInsets(2, 2, 2, 2));
+    }
+
+    static void styleAxis(ValueAxis a) {
+        a.setLabelFont(AXIS_FONT);
+        a.setLabelPaint(INK);
+        a.setTickLabelFont(TICK_FONT);
+        a.setTickLabelPaint(INK);
+        a.setAxisLinePaint(FRAME);
+        a.setTickMarkPaint(FRAME);
+        a.setTickMarkOutsideLength(3f);
+        a.setTickMarkInsideLength(0f);
+    }
+
+    /** Finite values' {min, max}; null when there are none. */
+    static double[] extent(List<Double> values) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (double v : values) {
+            if (Double.isFinite(v)) {
+                lo = Math.min(lo, v);
+                hi = Math.max(hi, v);
+            }
+        }
+        return lo <= hi ? new double[] {lo, hi} : null;
+    }
+
+    /** A linear axis over the values (padded by {@code pad} of the span) with about {@code ticks} steps. */
+    static NumberAxis linearAxis(String label, List<Double> values, double pad, boolean floorAtZero, int ticks) {
+        double[] e = extent(values);
+        double lo;
+        double hi;
+        if (e == null) {
+            lo = 0;
+            hi = 1;
+        } else {
+            lo = e[0];
+            hi = e[1];
+            double span = hi - lo;
+            if (!(span > Math.abs(hi) * 1e-12)) {
+                double half = Math.max(Math.abs(hi) * 0.01, 1e-12);
+                if (hi == 0) {
+                    half = 1;
+                }
+                lo -= half;
+                hi += half;
+            } else {
+                boolean nonNegative = lo >= 0;
+                lo -= pad * span;
+                hi += pad * span;
+                if (floorAtZero && nonNegative && lo < 0) {
+                    lo = 0;
+                }
+            }
+        }
+        return fixedAxis(label, lo, hi, ticks);
+    }
+
+    /** A linear axis over exactly [lo, hi]. */
+    static NumberAxis fixedAxis(String label, double lo, double hi, int ticks) {
+        NumberAxis a = new NumberAxis(label);
+        styleAxis(a);
+        a.setAutoRange(false);
+        a.setRange(lo, hi);
+        double step = Scales.step(hi - lo, ticks);
+        a.setTickUnit(new NumberTickUnit(step, Scales.ticks(step)));
+        a.setMinorTickMarksVisible(false);
+        return a;
+    }
+
+    /** A base-10 logarithmic axis over the positive values, labelled at powers of ten. */
+    static LogAxis logAxis(String label, List<Double> values) {
+        List<Double> positive = new ArrayList<>();
+        for (double v : values) {
+            if (v > 0) {
+                positive.add(v);
+            }
+        }
+        double[] e = extent(positive);
+        double lo = e == null ? 1 : e[0];
+        double hi = e == null ? 10 : e[1];
+        double llo = Math.log10(lo);
+        double lhi = Math.log10(hi);
+        double span = Math.max(lhi - llo, 0.5);
+        llo -= 0.05 * span;
+        lhi += 0.05 * span;
+        LogAxis a = new LogAxis(label);
+        styleAxis(a);
+        a.setAutoRange(false);
+        a.setRange(Math.pow(10, llo), Math.pow(10, lhi));
+        double decades = lhi - llo;
+        a.setTickUnit(new NumberTickUnit(Math.max(1, Math.ceil(decades / 6))));
+        a.setNumberFormatOverride(Scales.powers());
+        a.setMinorTickMarksVisible(true);
+        a.setMinorTickCount(9);
+        return a;
+    }
+
+    /**
+     * Draws the chart to an inline SVG element with the given id, with a {@code <title>} for readers of
+     * the SVG on its own and without the namespace declarations HTML does not need.
+     */
+    static String render(JFreeChart chart, String id, String title, int width, int height) {
+        SVGGraphics2D g = new SVGGraphics2D(width, height);
+        g.setDefsKeyPrefix(id + "-");
+        g.setGeomDoubleConverter(Charts::coordinate);
+        g.setTransformDoubleConverter(Charts::transform);
+        chart.draw(g, new Rectangle2D.Double(0, 0, width, height), (ChartRenderingInfo) null);
+        String svg = g.getSVGElement(id, false, new ViewBox(0, 0, width, height), null, null);
+        return inline(svg, id, title);
+    }
+
+    /** The data area a chart would draw into, found by drawing it once to a throwaway SVG. */
+    static Rectangle2D dataArea(JFreeChart chart, int width, int height) {
+        SVGGraphics2D g = new SVGGraphics2D(width, height);
+        g.setDefsKeyPrefix("measure-");
+        ChartRenderingInfo info = new ChartRenderingInfo();
+        chart.draw(g, new Rectangle2D.Double(0, 0, width, height), info);
+        return info.getPlotInfo().getDataArea();
+    }
+
+    static String inline(String svg, String id, String title) {
+        int close = svg.indexOf('>');
+        // inline SVG in HTML needs no namespace declarations, and nothing here uses the xlink or jfreesvg ones
+        String s = svg.substring(0, close).replaceAll(" xmlns(:[a-z]+)?=(['\"])[^'\"]*\\2", "")
+                + svg.substring(close);
+        close = s.indexOf('>');
+        String open = s.substring(0, close);
+        String rest = s.substring(close + 1);
+        return open + " role=\"img\" aria-labelledby=\"" + id + "-title\"" + " class=\"chart\">"
+                + "<title id=\"" + id + "-title\">" + Html.escape(title) + "</title>" + rest;
+    }
+
+    static String coordinate(double v) {
+        return trim(String.format(Locale.ROOT, "%.2f", v));
+    }
+
+    static String transform(double v) {
+        return trim(String.format(Locale.ROOT, "%.4f", v));
+    }
+
+    private static String trim(String s) {
+        if (s.indexOf('.') >= 0) {
+            int end = s.length();
+            while (s.charAt(end - 1) == '0') {
+                end--;
+            }
+            if (s.charAt(end - 1) == '.') {
+                end--;
+            }
+            s = s.substring(0, end);
+        }
+        return s.equals("-0") ? "0" : s;
+    }
+
+    /** A colour as CSS hex. */
+    static String hex(Color c) {
+        return String.format(Locale.ROOT, "#%02x%02x%02x", c.getRed(), c.getGreen(), c.getBlue());
+    }
+}

@@ -1,0 +1,300 @@
+package org.nullpath.report;
+
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+
+import org.nullpath.scenario.Scenario;
+import org.nullpath.schedule.BudgetTally;
+import org.nullpath.schedule.CutoffRow;
+import org.nullpath.schedule.DiagramTraces;
+import org.nullpath.schedule.HorizonRow;
+import org.nullpath.schedule.LinkTally;
+import org.nullpath.schedule.SampledSeries;
+import org.nullpath.schedule.WindowRow;
+
+/**
+ * report.html: one self-contained page (inline CSS and SVG, no scripts, nothing fetched) with the
+ * scenario's title, a caution, the spacetime diagram, per-link charts from a bounded sample of signals
+ * ({@link SampledSeries}), the tables of cut-offs, horizons, windows and round trips, and the scenario
+ * file as read. The same inputs always give the same bytes.
+ */
+public final class HtmlReport {
+    /** The caution every report carries, word for word. */
+    static final String CAUTION = "These results are planning estimates, computed from the scenario as written. "
+            + "Mission-critical command timing (cut-offs, burn commands, deadlines) needs independent verification "
+            + "and margin before anyone relies on it. High-power radio-frequency and laser transmitters carry "
+            + "exposure and eye-safety hazards; the link budgets here say nothing about safe operation: defer to "
+            + "the applicable safety rules and licensed practice.";
+
+    private HtmlReport() {
+    }
+
+    /** Writes the report of a finished plan to {@code file}. */
+    public static void write(Path file, Scenario s, PlanOutput.Result result) throws IOException {
+        Files.writeString(file, render(s, result), StandardCharsets.UTF_8);
+    }
+
+    /** The whole page. */
+    static String render(Scenario s, PlanOutput.Result r) {
+        List<SampledSeries.LinkSeries> series = SampledSeries.of(s);
+        DiagramTraces.Diagram diagram = SpacetimeChart.layout(s, series);
+        StringBuilder h = new StringBuilder(1 << 20);
+        h.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
+                .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
+                .append("<title>").append(Html.escape(s.title())).append(" \u2014 nullpath plan report</title>\n")
+                .append("<style>\n").append(Style.CSS).append("</style>\n</head>\n<body>\n");
+        masthead(h, s, r);
+        h.append("<aside class=\"caution\" id=\"caution\">\n<h2>Before relying on any of this</h2>\n<p>")
+                .append(Html.escape(CAUTION)).append("</p>\n</aside>\n");
+        contents(h, s);
+        diagramSection(h, s, diagram);
+        linkSections(h, s, r, series);
+        tables(h, r);
+        scenarioSection(h, s);
+        h.append("<footer><p>Written by nullpath. Every value here is rounded for reading; the CSV and JSON files ")
+                .append("beside this report carry full precision.</p></footer>\n</body>\n</html>\n");
+        return h.toString();
+    }
+
+    private static void masthead(StringBuilder h, Scenario s, PlanOutput.Result r) {
+        long stations = s.nodes().values().stream().filter(n -> n.kind() == Scenario.Kind.STATION).count();
+        long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
+        long never = r.links().stream().mapToLong(LinkTally::never).sum();
+        String file = s.file().getFileName() == null ? s.file().toString() : s.file().getFileName().toString();
+        h.append("<header class=\"masthead\">\n<p class=\"kicker\">nullpath \u00b7 plan report</p>\n<h1 id=\"title\">")
+                .append(Html.escape(s.title())).append("</h1>\n<p class=\"meta\">scenario <code>")
+                .append(Html.escape(file)).append("</code> \u00b7 ").append(stations).append(" station")
+                .append(stations == 1 ? "" : "s").append(", ").append(s.nodes().size() - stations).append(" craft, ")
+                .append(s.links().size()).append(" link").append(s.links().size() == 1 ? "" : "s").append(" \u00b7 ")
+                .append(messages).append(" planned messages, ").append(messages - never).append(" delivered, ")
+                .append(never).append(" never arrive");
+        s.epoch().ifPresent(e -> h.append(" \u00b7 mission time 0 is ").append(Html.escape(e.toString())));
+        h.append("</p>\n</header>\n");
+    }
+
+    private static void contents(StringBuilder h, Scenario s) {
+        h.append("<nav class=\"contents\" aria-label=\"contents\">\n<ol>\n")
+                .append("<li><a href=\"#spacetime\">Spacetime diagram</a></li>\n<li><a href=\"#links\">Links</a><ol>\n");
+        for (Scenario.Link l : s.links().values()) {
+            h.append("<li><a href=\"#link-").append(Html.id(l.name())).append("\">").append(Html.escape(l.name()))
+                    .append("</a></li>\n");
+        }
+        h.append("</ol></li>\n<li><a href=\"#tables\">Cut-offs, horizons, windows, round trips</a></li>\n")
+                .append("<li><a href=\"#scenario\">The scenario as read</a></li>\n</ol>\n</nav>\n");
+    }
+
+    private static void diagramSection(StringBuilder h, Scenario s, DiagramTraces.Diagram d) {
+        List<String> links = new ArrayList<>();
+        Map<String, String> ends = new LinkedHashMap<>();
+        for (Scenario.Link l : s.links().values()) {
+            links.add(l.name());
+            ends.put(l.name(), l.from() + " \u2192 " + l.to());
+        }
+        String title = "Spacetime diagram of " + s.title() + ": mission time against distance along the flight line";
+        Charts.Figure f = SpacetimeChart.of(d, links, ends, "svg-spacetime", title);
+        double[] a = d.axis();
+        String axis = d.axisCraft() == null ? "the mission frame's x axis"
+                : Html.escape(d.axisCraft()) + "'s heading (" + Scales.number(a[0]) + ", " + Scales.number(a[1])
+                + ", " + Scales.number(a[2]) + ")";
+        h.append("<section id=\"spacetime\">\n<h2>Spacetime diagram</h2>\n<figure id=\"fig-spacetime\" class=\"wide\">\n")
+                .append(f.svg()).append("\n<figcaption><p>Mission time runs up, distance along ").append(axis)
+                .append(" across; every body is projected onto that line. One unit of c\u00a0t and one of distance ")
+                .append("take the same length, so a signal along the line runs at 45\u00b0 (off the line its ")
+                .append("projection is steeper). Up to ").append(DiagramTraces.RAYS_PER_LINK)
+                .append(" signals per link, evenly spaced over its planned sends, are drawn from send to arrival.</p>\n");
+        key(h, f.key());
+        h.append("</figcaption>\n</figure>\n</section>\n");
+    }
+
+    private static void linkSections(StringBuilder h, Scenario s, PlanOutput.Result r,
+                                     List<SampledSeries.LinkSeries> series) {
+        h.append("<section id=\"links\">\n<h2>Links</h2>\n");
+        if (series.isEmpty()) {
+            h.append("<p class=\"empty\">No links are defined in this scenario.</p>\n");
+        }
+        for (int i = 0; i < series.size(); i++) {
+            SampledSeries.LinkSeries ls = series.get(i);
+            LinkTally t = r.links().get(i);
+            String id = Html.id(ls.link());
+            h.append("<section class=\"link\" id=\"link-").append(id).append("\">\n<h3>").append(Html.escape(ls.link()))
+                    .append(" <span class=\"ends\">").append(Html.escape(ls.from())).append(" \u2192 ")
+                    .append(Html.escape(ls.to())).append("</span></h3>\n");
+            facts(h, ls, t);
+            for (LinkCharts.Plot p : LinkCharts.of(ls)) {
+                h.append("<figure id=\"fig-").append(id).append('-').append(p.name()).append("\">\n<h4>")
+                        .append(Html.escape(p.heading())).append("</h4>\n").append(p.figure().svg())
+                        .append("\n<figcaption><p>").append(Html.escape(p.caption())).append("</p>\n");
+                key(h, p.figure().key());
+                h.append("</figcaption>\n</figure>\n");
+            }
+            h.append("</section>\n");
+        }
+        h.append("</section>\n");
+    }
+
+    private static void facts(StringBuilder h, SampledSeries.LinkSeries ls, LinkTally t) {
+        h.append("<table class=\"facts\">\n<tbody>\n");
+        row(h, "messages", t.messages() + " planned, " + t.delivered() + " delivered, " + t.never() + " never arrive");
+        if (t.delivered() > 0) {
+            row(h, "light time", Readable.time(t.minLightTime()) + " to " + Readable.time(t.maxLightTime()));
+            row(h, "Doppler factor", shown(t.minDoppler()) + " to " + shown(t.maxDoppler()));
+        }
+        row(h, "horizon", ls.horizon().hasHorizon()
+                ? "nothing sent after " + Readable.time(ls.horizon().lastSendClock()) + " on " + ls.from()
+                + "'s clock ever arrives" : "none: every send arrives");
+        BudgetTally.Figures b = t.budget();
+        if (b != null && t.delivered() > 0) {
+            row(h, "margin", shown(b.worstMarginDb()) + " to " + shown(b.bestMarginDb()) + " dB; "
+                    + b.closing() + " of " + t.delivered() + " delivered messages close");
+            Scales.Unit f = Scales.frequency(ls.terms().carrierHz());
+            row(h, "received frequency", shown(f.of(b.minRxFrequencyHz())) + " to "
+                    + shown(f.of(b.maxRxFrequencyHz())) + " " + f.symbol() + (b.extremeShift()
+                    ? " (leaves [carrier / 2, 2 \u00d7 carrier]: another band entirely)" : ""));
+            row(h, "largest |Doppler rate|", shown(b.maxAbsDopplerRateHzPerS()) + " Hz/s");
+            row(h, "rate that closes for every message", shown(b.minMaxDataRateBps()) + " bit/s");
+        }
+        String sampled;
+        if (!ls.hasPlannedSends()) {
+            sampled = "nothing is planned on this link, so nothing is plotted";
+        } else if (ls.samples().isEmpty()) {
+            sampled = "no send in the planned range arrives, so nothing is plotted";
+        } else {
+            sampled = ls.samples().size() + " sampled sends from " + Readable.time(ls.firstSendClock()) + " to "
+                    + Readable.time(ls.horizonCutsRange() ? ls.horizon().lastSendClock() : ls.lastSendClock())
+                    + " on " + ls.from() + "'s clock" + (ls.horizonCutsRange() ? " (up to the horizon)" : "")
+                    + (ls.skipped() > 0 ? "; " + ls.skipped() + " left out (beyond double precision)" : "");
+        }
+        row(h, "plotted", sampled);
+        h.append("</tbody>\n</table>\n");
+    }
+
+    /** A number for reading, infinities as the sign. */
+    private static String shown(double v) {
+        if (Double.isInfinite(v)) {
+            return v > 0 ? "\u221e" : "\u2212\u221e";
+        }
+        return Readable.number(v);
+    }
+
+    private static void row(StringBuilder h, String name, String value) {
+        h.append("<tr><th scope=\"row\">").append(Html.escape(name)).append("</th><td>").append(Html.escape(value))
+                .append("</td></tr>\n");
+    }
+
+    private static void key(StringBuilder h, List<Charts.Key> key) {
+        if (key.isEmpty()) {
+            return;
+        }
+        h.append("<ul class=\"key\">\n");
+        for (Charts.Key k : key) {
+            String colour = Charts.hex(k.colour());
+            String style = switch (k.swatch()) {
+                case LINE -> "border-top: 3px " + k.dash().css + " " + colour;
+                case BAND -> "background: " + colour + "; opacity: 0.6; height: 0.8em";
+                case POINT -> "border: 2px solid " + colour + "; width: 0.5em; height: 0.5em; transform: rotate(45deg)";
+            };
+            h.append("<li><span class=\"swatch\" style=\"").append(style).append("\"></span>")
+                    .append(Html.escape(k.label())).append("</li>\n");
+        }
+        h.append("</ul>\n");
+    }
+
+    /** A time for a table cell: readable, with the exact seconds on hover. */
+    private static String time(double seconds) {
+        if (Double.isNaN(seconds)) {
+            return "<td class=\"none\">\u2014</td>";
+        }
+        return "<td title=\"" + Cells.num(seconds) + " s\">" + Html.escape(Readable.time(seconds)) + "</td>";
+    }
+
+    private static String cell(String text) {
+        return "<td>" + Html.escape(text) + "</td>";
+    }
+
+    private static void tables(StringBuilder h, PlanOutput.Result r) {
+        h.append("<section id=\"tables\">\n<h2>Cut-offs, horizons, windows and round trips</h2>\n");
+
+        h.append("<h3 id=\"table-cutoffs\">Cut-offs</h3>\n");
+        if (r.cutoffs().isEmpty()) {
+            h.append("<p class=\"empty\">No cut-offs are asked for in this scenario.</p>\n");
+        } else {
+            h.append("<p>The latest send on a link whose message still arrives by a deadline on the receiver's ")
+                    .append("clock.</p>\n<table class=\"grid\">\n<thead><tr><th>cut-off</th><th>link</th>")
+                    .append("<th>arrive by (receiver's clock)</th><th>latest send (sender's clock)</th>")
+                    .append("<th>latest send (mission time)</th><th>status</th></tr></thead>\n<tbody>\n");
+            for (CutoffRow c : r.cutoffs()) {
+                h.append("<tr>").append(cell(c.name())).append(cell(c.link())).append(time(c.arriveByClock()))
+                        .append(time(c.latestSendClock())).append(time(c.latestSendTime()))
+                        .append(cell(c.reachable() ? "ok" : "unreachable: it would need a send before mission time 0"))
+                        .append("</tr>\n");
+            }
+            h.append("</tbody>\n</table>\n");
+        }
+
+        h.append("<h3 id=\"table-horizons\">Horizons</h3>\n<p>For each link, the last send that still arrives; ")
+                .append("a send at or after it never does.</p>\n<table class=\"grid\">\n<thead><tr><th>link</th>")
+                .append("<th>horizon</th><th>last send (sender's clock)</th><th>last send (mission time)</th>")
+                .append("</tr></thead>\n<tbody>\n");
+        for (HorizonRow hr : r.horizons()) {
+            h.append("<tr>").append(cell(hr.link())).append(cell(hr.hasHorizon() ? "yes" : "none"))
+                    .append(time(hr.lastSendClock())).append(time(hr.lastSendTime())).append("</tr>\n");
+        }
+        h.append("</tbody>\n</table>\n");
+
+        h.append("<h3 id=\"table-windows\">Link windows</h3>\n");
+        if (r.windows().isEmpty()) {
+            h.append("<p class=\"empty\">No link window was found (or none was asked for): a window needs a ")
+                    .append("<code>windows</code> entry on a link with link terms.</p>\n");
+        } else {
+            h.append("<p>Send-clock intervals in which a message would be received: margin at or above 0 dB, ")
+                    .append("inside the tuning range and within the Doppler-rate limit.</p>\n<table class=\"grid\">\n")
+                    .append("<thead><tr><th>link</th><th>opens (sender's clock)</th><th>closes (sender's clock)</th>")
+                    .append("<th>length</th><th>closed by</th></tr></thead>\n<tbody>\n");
+            for (WindowRow w : r.windows()) {
+                h.append("<tr>").append(cell(w.link())).append(time(w.opensClock())).append(time(w.closesClock()))
+                        .append(time(w.closesClock() - w.opensClock())).append(cell(w.closedBy())).append("</tr>\n");
+            }
+            h.append("</tbody>\n</table>\n");
+        }
+
+        h.append("<h3 id=\"table-round-trips\">Round trips</h3>\n");
+        if (r.exchanges().isEmpty()) {
+            h.append("<p class=\"empty\">No query and reply exchanges are planned in this scenario.</p>\n");
+        } else {
+            h.append("<p>Query and reply exchanges; each round trip's time on the querier's clock is in its ")
+                    .append("<code>exchanges-NAME.csv</code>.</p>\n<table class=\"grid\">\n<thead><tr>")
+                    .append("<th>exchange</th><th>planned</th><th>complete</th><th>never complete</th></tr></thead>\n")
+                    .append("<tbody>\n");
+            for (PlanOutput.ExchangeTally e : r.exchanges()) {
+                h.append("<tr>").append(cell(e.name())).append(cell(Long.toString(e.roundTrips())))
+                        .append(cell(Long.toString(e.complete()))).append(cell(Long.toString(e.roundTrips() - e.complete())))
+                        .append("</tr>\n");
+            }
+            h.append("</tbody>\n</table>\n");
+        }
+        h.append("</section>\n");
+    }
+
+    private static void scenarioSection(StringBuilder h, Scenario s) {
+        h.append("<section id=\"scenario\">\n<h2>The scenario as read</h2>\n");
+        String text;
+        try {
+            text = Files.readString(s.file(), StandardCharsets.UTF_8);
+        } catch (IOException | RuntimeException e) {
+            text = null;
+        }
+        if (text == null) {
+            h.append("<p class=\"empty\">The scenario file could not be read again for this page.</p>\n");
+        } else {
+            h.append("<p>The file exactly as planned, with its units.</p>\n<pre class=\"scenario\">")
+                    .append(Html.escape(text)).append("</pre>\n");
+        }
+        h.append("</section>\n");
+    }
+}

@@ -1,0 +1,275 @@
+package org.nullpath.report;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.ToDoubleFunction;
+
+import org.nullpath.link.Budget;
+import org.nullpath.link.LinkTerms;
+import org.nullpath.schedule.SampledSeries;
+
+/**
+ * The charts of one link, from its sampled series: light time, Doppler factor, received frequency,
+ * margin and highest data rate, each against mission time at sending and against the receiver's clock
+ * at arrival, and the clock image (receiver clock against sender clock).
+ */
+final class LinkCharts {
+    private LinkCharts() {
+    }
+
+    /**
+     * A chart with its place in the report.
+     *
+     * @param name    short name, part of the figure id
+     * @param heading the figure's heading
+     * @param caption what it shows, in a sentence or two
+     * @param figure  the chart itself
+     */
+    record Plot(String name, String heading, String caption, Charts.Figure figure) {
+    }
+
+    /** Ids are {@code svg-<link>-<name>}; figures {@code fig-<link>-<name>}. */
+    static String svgId(String link, String name) {
+        return "svg-" + Html.id(link) + "-" + name;
+    }
+
+    static List<Plot> of(SampledSeries.LinkSeries ls) {
+        List<Plot> out = new ArrayList<>();
+        List<SampledSeries.Sample> samples = ls.samples();
+        if (samples.isEmpty()) {
+            return out;
+        }
+        int n = samples.size();
+        double[] sendTime = new double[n];
+        double[] rxClock = new double[n];
+        double maxSend = 0;
+        double maxRx = 0;
+        for (int i = 0; i < n; i++) {
+            sendTime[i] = samples.get(i).sendTime();
+            rxClock[i] = samples.get(i).receiveClock();
+            maxSend = Math.max(maxSend, Math.abs(sendTime[i]));
+            maxRx = Math.max(maxRx, Math.abs(rxClock[i]));
+        }
+        Scales.Unit tSend = Scales.time(maxSend);
+        Scales.Unit tRx = Scales.time(maxRx);
+        double[] x1 = scaled(sendTime, tSend);
+        double[] x2 = scaled(rxClock, tRx);
+        String x1Label = "mission time at sending (" + tSend.symbol() + ")";
+        String x2Label = ls.to() + "'s clock at arrival (" + tRx.symbol() + ")";
+        List<Charts.Mark> horizonMark = new ArrayList<>();
+        List<Charts.Key> horizonKey = new ArrayList<>();
+        if (ls.horizonCutsRange()) {
+            horizonMark.add(new Charts.Mark(tSend.of(ls.horizon().lastSendTime()), "horizon", Charts.PURPLE,
+                    Charts.Dash.DOTTED));
+            horizonKey.add(Charts.Key.line("horizon: sends from here on never arrive", Charts.PURPLE,
+                    Charts.Dash.DOTTED));
+        }
+        String link = ls.link();
+
+        // light time
+        double[] light = column(samples, SampledSeries.Sample::lightTime);
+        Scales.Unit lu = Scales.time(max(light));
+        out.add(plot(link, "light-time", "Light time",
+                "How long each sampled signal is in flight in the mission frame (arrival minus sending, in mission"
+                        + " time).",
+                new Charts.YAxis("light time (" + lu.symbol() + ")", false, true),
+                List.of(series("light time", Charts.BLUE, Charts.Dash.SOLID, x1, x2, scaled(light, lu))),
+                horizonMark, null, List.of(), with(List.of(Charts.Key.line("light time", Charts.BLUE,
+                        Charts.Dash.SOLID)), horizonKey), x1Label, x2Label));
+
+        // Doppler factor, or the frequency offset when the shift is small
+        double[] doppler = column(samples, SampledSeries.Sample::doppler);
+        double[] offset = column(samples, SampledSeries.Sample::frequencyOffset);
+        double maxOffset = Math.max(Math.abs(min(offset)), Math.abs(max(offset)));
+        if (maxOffset >= 1e-3) {
+            boolean log = min(doppler) > 0 && max(doppler) / min(doppler) > 30;
+            out.add(plot(link, "doppler", "Doppler factor",
+                    "The Doppler factor D = f received / f sent: below 1 the signal arrives red-shifted (and the"
+                            + " receiver's clock sees the sender's seconds stretched by 1/D), above 1 blue-shifted.",
+                    new Charts.YAxis("Doppler factor D", log, false),
+                    List.of(series("Doppler factor", Charts.BLUE, Charts.Dash.SOLID, x1, x2, doppler)),
+                    horizonMark, null, List.of(new Charts.Level(1, "no shift", Charts.MUTED, Charts.Dash.DASHED)),
+                    with(List.of(Charts.Key.line("Doppler factor D", Charts.BLUE, Charts.Dash.SOLID),
+                            Charts.Key.line("D = 1: no shift", Charts.MUTED, Charts.Dash.DASHED)), horizonKey),
+                    x1Label, x2Label));
+        } else {
+            int exp = maxOffset > 0 ? (int) Math.floor(Math.log10(maxOffset) / 3) * 3 : 0;
+            double unit = Math.pow(10, exp);
+            String label = exp == 0 ? "frequency offset D \u2212 1" : "frequency offset D \u2212 1 (\u00d710"
+                    + Scales.superscript(exp) + ")";
+            double[] off = new double[n];
+            for (int i = 0; i < n; i++) {
+                off[i] = offset[i] / unit;
+            }
+            out.add(plot(link, "doppler", "Doppler shift",
+                    "The shift is small here, so the frequency offset D \u2212 1 (computed without cancellation)"
+                            + " is drawn rather than D itself.",
+                    new Charts.YAxis(label, false, false),
+                    List.of(series("offset", Charts.BLUE, Charts.Dash.SOLID, x1, x2, off)), horizonMark, null,
+                    List.of(new Charts.Level(0, "no shift", Charts.MUTED, Charts.Dash.DASHED)),
+                    with(List.of(Charts.Key.line("frequency offset D \u2212 1", Charts.BLUE, Charts.Dash.SOLID),
+                            Charts.Key.line("0: no shift", Charts.MUTED, Charts.Dash.DASHED)), horizonKey),
+                    x1Label, x2Label));
+        }
+
+        // clock image
+        double[] sendClock = column(samples, SampledSeries.Sample::sendClock);
+        Scales.Unit cu = Scales.time(Math.max(Math.max(Math.abs(min(sendClock)), Math.abs(max(sendClock))), maxRx));
+        double[] cx = scaled(sendClock, cu);
+        double[] cy = scaled(rxClock, cu);
+        double[] diagX = {min(cx), max(cx)};
+        List<Charts.Line> clockLines = List.of(
+                new Charts.Line("equal readings", Charts.MUTED, Charts.Dash.DASHED, 1.2f, diagX, diagX.clone()),
+                new Charts.Line("clock image", Charts.BLUE, Charts.Dash.SOLID, 2.2f, cx, cy));
+        List<Charts.Mark> clockMarks = new ArrayList<>();
+        if (ls.horizonCutsRange()) {
+            clockMarks.add(new Charts.Mark(cu.of(ls.horizon().lastSendClock()), "horizon", Charts.PURPLE,
+                    Charts.Dash.DOTTED));
+        }
+        String clockId = svgId(link, "clock-image");
+        String clockTitle = "Clock image on " + link + ": " + ls.to() + "'s clock at arrival against " + ls.from()
+                + "'s clock at sending";
+        Plot clockImage = new Plot("clock-image", "Clock image",
+                "Each sampled send maps a reading of " + ls.from() + "'s clock to the reading of " + ls.to()
+                        + "'s clock when it arrives; the slope is 1/D. The dashed line marks equal readings.",
+                Charts.single(clockId, clockTitle, ls.from() + "'s clock at sending (" + cu.symbol() + ")",
+                        ls.to() + "'s clock at arrival (" + cu.symbol() + ")", clockLines, clockMarks,
+                        with(List.of(Charts.Key.line("arrival reading against sending reading", Charts.BLUE,
+                                Charts.Dash.SOLID), Charts.Key.line("equal readings", Charts.MUTED,
+                                Charts.Dash.DASHED)), horizonKey), Charts.WIDTH, 340));
+
+        LinkTerms terms = ls.terms();
+        if (terms == null) {
+            out.add(clockImage);
+            return out;
+        }
+        // received (and transmitted) frequency with the tuning range
+        double[] rx = budgetColumn(samples, Budget::rxFrequencyHz);
+        double[] tx = budgetColumn(samples, Budget::txFrequencyHz);
+        Scales.Unit fu = Scales.frequency(terms.carrierHz());
+        double[] band = terms.hasTuningRange() ? new double[] {fu.of(terms.tuningMinHz()), fu.of(terms.tuningMaxHz())}
+                : null;
+        List<Charts.Key> fKey = new ArrayList<>(List.of(
+                Charts.Key.line("received frequency (receiver's frame)", Charts.BLUE, Charts.Dash.SOLID),
+                Charts.Key.line(terms.precompensate() ? "transmitted frequency: carrier / D (pre-compensated)"
+                        : "transmitted frequency (sender's frame)", Charts.VERMILLION, Charts.Dash.DASHED)));
+        if (band != null) {
+            fKey.add(Charts.Key.band("receiver tuning range", Charts.YELLOW));
+        }
+        out.add(plot(link, "frequency", "Received frequency",
+                "The frequency the receiver sees, and what the sender transmits"
+                        + (band == null ? "; no tuning range is given for this receiver."
+                        : "; the shaded band is the receiver's tuning range."),
+                new Charts.YAxis("frequency (" + fu.symbol() + ")", false, false),
+                List.of(series("transmitted", Charts.VERMILLION, Charts.Dash.DASHED, x1, x2, scaled(tx, fu)),
+                        series("received", Charts.BLUE, Charts.Dash.SOLID, x1, x2, scaled(rx, fu))),
+                horizonMark, band, List.of(), with(fKey, horizonKey), x1Label, x2Label));
+
+        // margin
+        double[] margin = budgetColumn(samples, Budget::marginDb);
+        boolean photons = terms.detection() == LinkTerms.Detection.PHOTON_COUNTING;
+        out.add(plot(link, "margin", "Link margin",
+                (photons ? "Received photons per bit over the required number, in dB." : "Eb/N0 over the required"
+                        + " Eb/N0, in dB.") + " The link closes where the margin is at or above 0 dB.",
+                new Charts.YAxis("margin (dB)", false, false),
+                List.of(series("margin", Charts.BLUE, Charts.Dash.SOLID, x1, x2, margin)), horizonMark, null,
+                List.of(new Charts.Level(0, "0 dB", Charts.BLACK, Charts.Dash.DASHED)),
+                with(List.of(Charts.Key.line("margin", Charts.BLUE, Charts.Dash.SOLID),
+                        Charts.Key.line("0 dB: closes at and above", Charts.BLACK, Charts.Dash.DASHED)), horizonKey),
+                x1Label, x2Label));
+
+        // highest data rate that closes
+        double[] rate = budgetColumn(samples, Budget::maxDataRateBps);
+        Scales.Unit ru = Scales.dataRate(terms.dataRateBps());
+        out.add(plot(link, "data-rate", "Highest data rate that closes",
+                "The highest sender-frame data rate that would close with zero margin, against the planned rate.",
+                new Charts.YAxis("data rate (" + ru.symbol() + ")", true, false),
+                List.of(series("highest rate", Charts.BLUE, Charts.Dash.SOLID, x1, x2, scaled(rate, ru))),
+                horizonMark, null,
+                List.of(new Charts.Level(ru.of(terms.dataRateBps()), "planned", Charts.VERMILLION, Charts.Dash.DASHED)),
+                with(List.of(Charts.Key.line("highest rate that closes", Charts.BLUE, Charts.Dash.SOLID),
+                        Charts.Key.line("planned rate (" + Scales.number(ru.of(terms.dataRateBps())) + " "
+                                + ru.symbol() + ")", Charts.VERMILLION, Charts.Dash.DASHED)), horizonKey),
+                x1Label, x2Label));
+        out.add(clockImage);
+        return out;
+    }
+
+    /** Two lines (one per panel) from one y column. */
+    private record Pair(String label, Charts.Dash dash, java.awt.Color colour, double[] x1, double[] x2, double[] y) {
+    }
+
+    private static Pair series(String label, java.awt.Color colour, Charts.Dash dash, double[] x1, double[] x2,
+                               double[] y) {
+        return new Pair(label, dash, colour, x1, x2, y);
+    }
+
+    private static Plot plot(String link, String name, String heading, String caption, Charts.YAxis y,
+                             List<Pair> pairs, List<Charts.Mark> leftMarks, double[] band, List<Charts.Level> levels,
+                             List<Charts.Key> key, String x1Label, String x2Label) {
+        List<Charts.Line> left = new ArrayList<>();
+        List<Charts.Line> right = new ArrayList<>();
+        for (Pair p : pairs) {
+            left.add(new Charts.Line(p.label(), p.colour(), p.dash(), 2.2f, p.x1(), p.y()));
+            right.add(new Charts.Line(p.label(), p.colour(), p.dash(), 2.2f, p.x2(), p.y()));
+        }
+        String id = svgId(link, name);
+        String title = heading + " on " + link + ": left against mission time at sending, right against the"
+                + " receiver's clock at arrival";
+        Charts.Figure f = Charts.panels(id, title, y, List.of(new Charts.Panel(x1Label, left, leftMarks),
+                new Charts.Panel(x2Label, right, List.of())), band, levels, key);
+        return new Plot(name, heading, caption + " Left: against mission time at sending; right: against the"
+                + " receiver's clock at arrival.", f);
+    }
+
+    private static List<Charts.Key> with(List<Charts.Key> a, List<Charts.Key> b) {
+        List<Charts.Key> out = new ArrayList<>(a);
+        out.addAll(b);
+        return out;
+    }
+
+    private static double[] column(List<SampledSeries.Sample> samples, ToDoubleFunction<SampledSeries.Sample> f) {
+        double[] out = new double[samples.size()];
+        for (int i = 0; i < out.length; i++) {
+            out[i] = f.applyAsDouble(samples.get(i));
+        }
+        return out;
+    }
+
+    private static double[] budgetColumn(List<SampledSeries.Sample> samples, ToDoubleFunction<Budget> f) {
+        double[] out = new double[samples.size()];
+        for (int i = 0; i < out.length; i++) {
+            Budget b = samples.get(i).budget();
+            out[i] = b == null ? Double.NaN : f.applyAsDouble(b);
+        }
+        return out;
+    }
+
+    private static double[] scaled(double[] v, Scales.Unit u) {
+        double[] out = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            out[i] = u.of(v[i]);
+        }
+        return out;
+    }
+
+    private static double max(double[] v) {
+        double m = Double.NEGATIVE_INFINITY;
+        for (double x : v) {
+            if (Double.isFinite(x)) {
+                m = Math.max(m, x);
+            }
+        }
+        return m == Double.NEGATIVE_INFINITY ? 0 : m;
+    }
+
+    private static double min(double[] v) {
+        double m = Double.POSITIVE_INFINITY;
+        for (double x : v) {
+            if (Double.isFinite(x)) {
+                m = Math.min(m, x);
+            }
+        }
+        return m == Double.POSITIVE_INFINITY ? 0 : m;
+    }
+}

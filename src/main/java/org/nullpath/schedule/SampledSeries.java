@@ -1,0 +1,194 @@
+package org.nullpath.schedule;
+
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+
+import org.nullpath.lightcone.Horizon;
+import org.nullpath.lightcone.LightCone;
+import org.nullpath.lightcone.SignalPath;
+import org.nullpath.link.Budget;
+import org.nullpath.link.Doppler;
+import org.nullpath.link.DopplerRate;
+import org.nullpath.link.LinkBudget;
+import org.nullpath.link.LinkTerms;
+import org.nullpath.scenario.Scenario;
+import org.nullpath.worldline.Worldline;
+
+/**
+ * A bounded sample of a link's signals for plotting: at most {@value #MAX_SAMPLES} send clocks, evenly
+ * spaced over the link's planned send range, each solved exactly as a planned message is
+ * ({@link LinkSchedule#signal}, {@link Doppler#of}, {@link DopplerRate#of}, {@link LinkBudget#evaluate}).
+ * The planned messages themselves are never held: memory does not depend on how many there are.
+ *
+ * <p>The planned send range runs from the earliest to the latest send clock of the link's message
+ * plans (or, for a link that only carries exchange queries, of those queries). When the link has a
+ * horizon inside that range, only the part before it is sampled ({@link #towardsHorizon}), stopping
+ * 1/{@value #MAX_SAMPLES} of the way short of the horizon (where the light time grows without bound);
+ * the horizon itself is carried along.
+ */
+public final class SampledSeries {
+    /** Most send clocks sampled per link. */
+    public static final int MAX_SAMPLES = 400;
+
+    private SampledSeries() {
+    }
+
+    /**
+     * One sampled signal that arrives.
+     *
+     * @param sendClock    sender's clock at sending, s
+     * @param sendTime     mission time of sending, s
+     * @param receiveTime  mission time of arrival, s
+     * @param receiveClock receiver's clock at arrival, s
+     * @param lightTime    receiveTime - sendTime, solved for directly, s
+     * @param doppler      f_rx / f_tx
+     * @param frequencyOffset doppler - 1, computed without cancellation
+     * @param budget       frequency plan and link budget; null when the link has no terms
+     */
+    public record Sample(double sendClock, double sendTime, double receiveTime, double receiveClock,
+                         double lightTime, double doppler, double frequencyOffset, Budget budget) {
+    }
+
+    /**
+     * The sampled signals of one link.
+     *
+     * @param link             link name
+     * @param from             sending node
+     * @param to               receiving node
+     * @param terms            the link's radio or optical terms; null when it has none
+     * @param hasPlannedSends  false when no plan sends on this link (nothing is sampled)
+     * @param firstSendClock   earliest planned send clock, s (NaN without planned sends)
+     * @param lastSendClock    latest planned send clock, s (NaN without planned sends)
+     * @param horizon          the link's horizon (last send that still arrives), whether or not it falls in the range
+     * @param skipped          sampled send clocks whose signal could not be computed in double precision
+     * @param samples          delivered samples in send order, at most {@value #MAX_SAMPLES}
+     */
+    public record LinkSeries(String link, String from, String to, LinkTerms terms, boolean hasPlannedSends,
+                             double firstSendClock, double lastSendClock, HorizonRow horizon, int skipped,
+                             List<Sample> samples) {
+        /** True when sends late in the planned range never arrive (the horizon falls inside it). */
+        public boolean horizonCutsRange() {
+            return hasPlannedSends && horizon.hasHorizon() && horizon.lastSendClock() <= lastSendClock;
+        }
+    }
+
+    /** The sampled series of every link, in file order. */
+    public static List<LinkSeries> of(Scenario s) {
+        List<LinkSeries> out = new ArrayList<>();
+        for (Scenario.Link link : s.links().values()) {
+            out.add(of(s, link, MAX_SAMPLES));
+        }
+        return Collections.unmodifiableList(out);
+    }
+
+    /** The sampled series of one link with at most {@code maxSamples} (at least 2) send clocks. */
+    public static LinkSeries of(Scenario s, Scenario.Link link, int maxSamples) {
+        if (maxSamples < 2) {
+            throw new IllegalArgumentException("at least two samples are needed, got " + maxSamples);
+        }
+        Worldline sender = s.nodes().get(link.from()).worldline();
+        Worldline receiver = s.nodes().get(link.to()).worldline();
+        LinkTerms terms = link.terms().orElse(null);
+        Horizon h = LightCone.horizon(sender, receiver);
+        HorizonRow horizon = h.exists()
+                ? new HorizonRow(link.name(), true, h.lastSend().clock(), h.lastSend().timeSeconds())
+                : new HorizonRow(link.name(), false, Double.NaN, Double.NaN);
+        double[] range = plannedRange(s, link.name());
+        if (range == null) {
+            return new LinkSeries(link.name(), link.from(), link.to(), terms, false, Double.NaN, Double.NaN, horizon,
+                    0, List.of());
+        }
+        double lo = range[0];
+        double hi = range[1];
+        double[] clocks;
+        if (h.exists() && horizon.lastSendClock() <= hi) {
+            double end = horizon.lastSendClock();
+            clocks = lo < end ? towardsHorizon(lo, end, maxSamples) : new double[0];
+        } else if (hi == lo) {
+            clocks = new double[] {lo};
+        } else {
+            clocks = new double[maxSamples];
+            for (int i = 0; i < maxSamples; i++) {
+                clocks[i] = i == maxSamples - 1 ? hi : lo + (hi - lo) * i / (maxSamples - 1);
+            }
+        }
+        List<Sample> samples = new ArrayList<>(clocks.length);
+        int skipped = 0;
+        for (double clock : clocks) {
+            try {
+                SignalPath p = LinkSchedule.signal(sender, receiver, clock);
+                if (!p.delivered()) {
+                    continue;
+                }
+                Doppler.Factor d = Doppler.of(p);
+                Budget b = terms == null ? null
+                        : LinkBudget.evaluate(terms, p, d, DopplerRate.of(sender, receiver, p, d));
+                samples.add(new Sample(clock, p.send().timeSeconds(), p.receive().timeSeconds(), p.receive().clock(),
+                        p.lightTimeSeconds(), d.doppler(), d.offset(), b));
+            } catch (ArithmeticException e) {
+                // a state beyond what doubles can hold (the worldline says so): leave the point out, count it
+                skipped++;
+            }
+        }
+        return new LinkSeries(link.name(), link.from(), link.to(), terms, true, lo, hi, horizon, skipped,
+                Collections.unmodifiableList(samples));
+    }
+
+    /**
+     * {@code n} send clocks in [lo, end) for a range that ends at a horizon: three quarters evenly spaced
+     * up to a tenth of the range short of the horizon, the rest closing in on it with geometrically
+     * shrinking gaps down to (end - lo) / n. Approaching a horizon the arrival clock grows like the log of
+     * the gap, so geometric gaps keep the arrival-clock plots smooth where an even grid would jump.
+     */
+    static double[] towardsHorizon(double lo, double end, int n) {
+        int geometric = n / 4;
+        int even = n - geometric;
+        double range = end - lo;
+        double widest = 0.1 * range;
+        double narrowest = range / n;
+        double[] out = new double[n];
+        for (int i = 0; i < even; i++) {
+            out[i] = lo + (range - widest) * i / (even - 1);
+        }
+        for (int k = 1; k <= geometric; k++) {
+            out[even + k - 1] = end - widest * Math.pow(narrowest / widest, (double) k / geometric);
+        }
+        return out;
+    }
+
+    /**
+     * Earliest and latest planned send clock on {@code link}: its message plans, or else the exchange
+     * queries it carries; null when nothing is planned on it.
+     */
+    static double[] plannedRange(Scenario s, String link) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
+        for (Scenario.MessagePlan p : SendOrder.plansOf(s, link)) {
+            long n = p.count();
+            if (n == 0) {
+                continue;
+            }
+            if (p instanceof Scenario.At at) {
+                for (double c : at.clocks()) {
+                    lo = Math.min(lo, c);
+                    hi = Math.max(hi, c);
+                }
+            } else {
+                lo = Math.min(lo, p.sendClock(0));
+                hi = Math.max(hi, p.sendClock(n - 1));
+            }
+        }
+        if (lo <= hi) {
+            return new double[] {lo, hi};
+        }
+        for (Scenario.Exchange e : s.exchanges()) {
+            long n = e.count();
+            if (e.query().equals(link) && n > 0) {
+                lo = Math.min(lo, e.first());
+                hi = Math.max(hi, e.first() + (n - 1) * e.every());
+            }
+        }
+        return lo <= hi ? new double[] {lo, hi} : null;
+    }
+}
