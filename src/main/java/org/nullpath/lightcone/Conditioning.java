@@ -1,9 +1,7 @@
 package org.nullpath.lightcone;
 
-import org.hipparchus.util.FastMath;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
-import org.nullpath.worldline.State;
 
 /**
  * How sensitive a light time is to the send event's coordinates, which reach the solver rounded to
@@ -29,29 +27,11 @@ public final class Conditioning {
             return 1.0;
         }
         Vec3 k = p.path().unit();
-        double oneMinusS = oneMinusBetaDotK(p.send(), k);
-        double oneMinusR = oneMinusBetaDotK(p.receive(), k);
+        double oneMinusS = MotionFactor.oneMinusBetaDotK(p.send(), k);
+        double oneMinusR = MotionFactor.oneMinusBetaDotK(p.receive(), k);
         double q = oneMinusS / oneMinusR;
         double kappa = (Math.abs(p.send().timeSeconds()) * Math.abs(q - 1)
                 + p.send().position().norm() / (Constants.C * oneMinusR)) / p.lightTimeSeconds();
         return Math.max(1.0, kappa);
-    }
-
-    /** 1 - beta . k without cancellation at high rapidity. */
-    static double oneMinusBetaDotK(State s, Vec3 k) {
-        double eta = s.rapidity();
-        if (eta == 0) {
-            return 1.0;
-        }
-        Vec3 n = s.direction();
-        double mu = n.dot(k);
-        double sin2 = n.cross(k).normSquared();
-        double oneMinusAbsMu = sin2 / (1 + Math.abs(mu));
-        double ash = Math.abs(FastMath.sinh(eta));
-        double gamma = FastMath.cosh(eta);
-        if (eta * mu >= 0) {
-            return (FastMath.exp(-Math.abs(eta)) + ash * oneMinusAbsMu) / gamma;
-        }
-        return (gamma + ash * Math.abs(mu)) / gamma;
     }
 }

@@ -1,5 +1,6 @@
 package org.nullpath.link;
 
+import org.nullpath.lightcone.MotionFactor;
 import org.nullpath.lightcone.SignalPath;
 import org.nullpath.units.Constants;
 
@@ -37,7 +38,7 @@ public final class LinkBudget {
         if (p.path().isZero()) {
             return 0;
         }
-        Doppler.BodyFactor s = Doppler.bodyFactor(p.send(), p.path().unit());
+        MotionFactor s = MotionFactor.of(p.send(), p.path().unit());
         return s.value() * Constants.C * p.lightTimeSeconds();
     }
 

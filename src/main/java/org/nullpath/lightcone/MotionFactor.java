@@ -1,0 +1,49 @@
+package org.nullpath.lightcone;
+
+import org.hipparchus.util.FastMath;
+import org.nullpath.spacetime.Vec3;
+import org.nullpath.worldline.State;
+
+/**
+ * A body's factor gamma (1 - beta . k) for a photon travelling along the unit vector k, and that factor
+ * minus one, both without cancellation: for a body receding along k it is
+ * {@code exp(-|eta|) + |sinh eta| (1 - |mu|)}, otherwise {@code cosh eta + |sinh eta| |mu|}, with
+ * {@code 1 - |mu| = sin^2(theta) / (1 + |mu|)} from a cross product (mu = n . k). Directions within
+ * {@link LightCone#ON_LINE_ANGLE} of the body's line of motion count as on it. The Doppler factor is the
+ * receiver's over the sender's; the sender-frame distance is the sender's times c T.
+ *
+ * @param value    gamma (1 - beta . k)
+ * @param minusOne value - 1, from expm1 and (gamma beta)^2 / (gamma + 1)
+ */
+public record MotionFactor(double value, double minusOne) {
+
+    /** The factor of the body in state {@code s} for the photon direction {@code k} (a unit vector). */
+    public static MotionFactor of(State s, Vec3 k) {
+        double eta = s.rapidity();
+        if (eta == 0) {
+            return new MotionFactor(1.0, 0.0);
+        }
+        Vec3 n = s.direction();
+        double mu = n.dot(k);
+        double sin2 = n.cross(k).normSquared();
+        if (sin2 < LightCone.ON_LINE_ANGLE * LightCone.ON_LINE_ANGLE) {
+            sin2 = 0;
+            mu = Math.signum(mu);
+        }
+        double absMu = Math.abs(mu);
+        double oneMinusAbsMu = sin2 / (1 + absMu);
+        double ash = Math.abs(FastMath.sinh(eta));
+        if (eta * mu >= 0) {
+            double a = Math.abs(eta);
+            return new MotionFactor(FastMath.exp(-a) + ash * oneMinusAbsMu, FastMath.expm1(-a) + ash * oneMinusAbsMu);
+        }
+        double sh = FastMath.sinh(eta);
+        double gm1 = sh * sh / (FastMath.cosh(eta) + 1);
+        return new MotionFactor(FastMath.cosh(eta) + ash * absMu, gm1 + ash * absMu);
+    }
+
+    /** 1 - beta . k of the same body: the factor over gamma. */
+    public static double oneMinusBetaDotK(State s, Vec3 k) {
+        return of(s, k).value() / FastMath.cosh(s.rapidity());
+    }
+}
