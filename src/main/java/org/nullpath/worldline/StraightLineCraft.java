@@ -273,25 +273,20 @@ public final class StraightLineCraft implements Worldline {
     }
 
     private int segmentOfClock(double clock) {
-        int lo = 0;
-        int hi = segments.size() - 1;
-        while (lo < hi) {
-            int mid = (lo + hi + 1) >>> 1;
-            if (segments.get(mid).lo().clock() <= clock) {
-                lo = mid;
-            } else {
-                hi = mid - 1;
-            }
-        }
-        return lo;
+        return lastSegmentStartingBy(clock, LineState::clock);
     }
 
     private int segmentOfTime(double t) {
+        return lastSegmentStartingBy(t, LineState::timeSeconds);
+    }
+
+    /** The last segment whose start (by {@code key}) is at or before {@code x}; segment 0 runs from -infinity. */
+    private int lastSegmentStartingBy(double x, java.util.function.ToDoubleFunction<LineState> key) {
         int lo = 0;
         int hi = segments.size() - 1;
         while (lo < hi) {
             int mid = (lo + hi + 1) >>> 1;
-            if (segments.get(mid).lo().timeSeconds() <= t) {
+            if (key.applyAsDouble(segments.get(mid).lo()) <= x) {
                 lo = mid;
             } else {
                 hi = mid - 1;
