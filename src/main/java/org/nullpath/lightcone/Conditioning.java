@@ -27,8 +27,16 @@ public final class Conditioning {
             return 1.0;
         }
         Vec3 k = p.path().unit();
-        double oneMinusS = MotionFactor.oneMinusBetaDotK(p.send(), k);
-        double oneMinusR = MotionFactor.oneMinusBetaDotK(p.receive(), k);
+        return ofLightTime(p, MotionFactor.of(p.send(), k), MotionFactor.of(p.receive(), k));
+    }
+
+    /** The same, from the bodies' motion factors already formed for the signal's photon direction. */
+    public static double ofLightTime(SignalPath p, MotionFactor send, MotionFactor receive) {
+        if (!p.delivered() || p.lightTimeSeconds() == 0 || p.path().isZero()) {
+            return 1.0;
+        }
+        double oneMinusS = send.value() / p.send().gamma();
+        double oneMinusR = receive.value() / p.receive().gamma();
         double q = oneMinusS / oneMinusR;
         double kappa = (Math.abs(p.send().timeSeconds()) * Math.abs(q - 1)
                 + p.send().position().norm() / (Constants.C * oneMinusR)) / p.lightTimeSeconds();

@@ -30,12 +30,16 @@ public final class Doppler {
             throw new IllegalArgumentException("no Doppler factor for a signal that never arrives");
         }
         Vec3 k = photonDirection(p);
-        MotionFactor r = MotionFactor.of(p.receive(), k);
-        MotionFactor s = MotionFactor.of(p.send(), k);
-        return new Factor(r.value() / s.value(), (r.minusOne() - s.minusOne()) / s.value());
+        return of(MotionFactor.of(p.send(), k), MotionFactor.of(p.receive(), k));
     }
 
-    private static Vec3 photonDirection(SignalPath p) {
+    /** The Doppler factor from the sender's and the receiver's motion factors (for the same photon direction). */
+    public static Factor of(MotionFactor send, MotionFactor receive) {
+        return new Factor(receive.value() / send.value(), (receive.minusOne() - send.minusOne()) / send.value());
+    }
+
+    /** The photon's unit direction of a delivered signal (the receiver's direction of motion for a zero path). */
+    public static Vec3 photonDirection(SignalPath p) {
         if (p.path().isZero()) {
             // sender and receiver coincide: take the receiver's own direction of motion (D is then the
             // ratio of the bodies' factors along it)

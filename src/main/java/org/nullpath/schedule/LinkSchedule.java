@@ -4,6 +4,7 @@ import java.util.function.Consumer;
 
 import org.nullpath.lightcone.Conditioning;
 import org.nullpath.lightcone.LightCone;
+import org.nullpath.lightcone.MotionFactor;
 import org.nullpath.lightcone.SignalPath;
 import org.nullpath.link.Budget;
 import org.nullpath.link.Doppler;
@@ -11,6 +12,7 @@ import org.nullpath.link.DopplerRate;
 import org.nullpath.link.LinkBudget;
 import org.nullpath.link.LinkTerms;
 import org.nullpath.scenario.Scenario;
+import org.nullpath.spacetime.Vec3;
 import org.nullpath.worldline.State;
 import org.nullpath.worldline.Worldline;
 
@@ -82,7 +84,10 @@ public final class LinkSchedule {
             MessageRow row;
             if (p.delivered()) {
                 delivered++;
-                Doppler.Factor d = Doppler.of(p);
+                Vec3 k = Doppler.photonDirection(p);
+                MotionFactor fs = MotionFactor.of(p.send(), k);
+                MotionFactor fr = MotionFactor.of(p.receive(), k);
+                Doppler.Factor d = Doppler.of(fs, fr);
                 double rxClock = p.receive().clock();
                 Budget budget = terms == null ? null
                         : LinkBudget.evaluate(terms, p, d, DopplerRate.of(sender, receiver, p, d));
@@ -91,7 +96,7 @@ public final class LinkSchedule {
                 }
                 double interval = previous == null ? Double.NaN : arrivalInterval(sender, receiver, previous, p);
                 row = new MessageRow(index, clock, p.send().timeSeconds(), true, p.receive().timeSeconds(), rxClock,
-                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, budget, Conditioning.ofLightTime(p));
+                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, budget, Conditioning.ofLightTime(p, fs, fr));
                 if (row.lightTimeCondition() * Conditioning.EPSILON > ILL_CONDITIONED) {
                     illConditioned++;
                 }

@@ -391,7 +391,8 @@ public final class StraightLineCraft implements Worldline {
      * @param dt     mission-time difference
      * @param dClock craft-clock difference
      * @param dAlong distance difference along the heading
-     * @param dU     difference of U = c t - along, summed from the pieces' own offsets (no cancellation)
+     * @param dU     difference of U = c t - along, summed from the pieces' own offsets (no cancellation);
+     *               given by {@link #walkClock} only (NaN otherwise)
      * @param dV     difference of V = c t + along, likewise
      * @param end    the state reached, or null when the move can never be completed (beyond a horizon)
      */
@@ -459,12 +460,12 @@ public final class StraightLineCraft implements Worldline {
 
     /** Moves by mission time {@code dt} (any sign). */
     public LineWalk walkTime(LineState from, double dt) {
-        return walk(from, dt, TIME, true);
+        return walk(from, dt, TIME, true, false);
     }
 
     /** Moves by craft-clock time {@code dClock} (any sign). */
     public LineWalk walkClock(LineState from, double dClock) {
-        return walk(from, dClock, CLOCK, false);
+        return walk(from, dClock, CLOCK, false, true);
     }
 
     /**
@@ -472,15 +473,16 @@ public final class StraightLineCraft implements Worldline {
      * signal travelling along +heading meets the craft there. {@link LineWalk#never()} when it never does.
      */
     public LineWalk walkU(LineState from, double dU) {
-        return walk(from, dU, U, false);
+        return walk(from, dU, U, false, false);
     }
 
     /** Moves until {@code V = c t + along} has changed by {@code dV} (any sign); see {@link #walkU}. */
     public LineWalk walkV(LineState from, double dV) {
-        return walk(from, dV, V, false);
+        return walk(from, dV, V, false, false);
     }
 
-    private LineWalk walk(LineState from, double amount, Measure m, boolean exactTime) {
+    /** @param nulls whether to sum the U and V offsets too (else they are NaN): only the off-line cone needs them */
+    private LineWalk walk(LineState from, double amount, Measure m, boolean exactTime, boolean nulls) {
         if (amount == 0) {
             return new LineWalk(0, 0, 0, 0, 0, from);
         }
@@ -505,8 +507,10 @@ public final class StraightLineCraft implements Worldline {
                     dt += p.timeOffset(cur, du);
                     dClock += du;
                     dAlong += p.distanceOffset(cur, du);
-                    dU += p.uOffset(cur, du);
-                    dV += p.vOffset(cur, du);
+                    if (nulls) {
+                        dU += p.uOffset(cur, du);
+                        dV += p.vOffset(cur, du);
+                    }
                     rem -= cap;
                     i += forward ? 1 : -1;
                     Segment next = segments.get(i);
@@ -523,8 +527,9 @@ public final class StraightLineCraft implements Worldline {
             double dds = p.distanceOffset(cur, du);
             LineState end = checked(new LineState(cur.clock() + du, cur.timeSeconds() + ddt, cur.along() + dds,
                     p.rapidityAfter(cur, du), i, cur.local() + du));
-            return new LineWalk(dt + ddt, dClock + du, dAlong + dds, dU + p.uOffset(cur, du), dV + p.vOffset(cur, du),
-                    end);
+            return nulls
+                    ? new LineWalk(dt + ddt, dClock + du, dAlong + dds, dU + p.uOffset(cur, du), dV + p.vOffset(cur, du), end)
+                    : new LineWalk(dt + ddt, dClock + du, dAlong + dds, Double.NaN, Double.NaN, end);
         }
     }
 }
