@@ -34,8 +34,10 @@ final class CheckCommand implements Callable<Integer> {
             return Main.INPUT_ERROR;
         }
         long stations = s.nodes().values().stream().filter(n -> n.kind() == Scenario.Kind.STATION).count();
-        spec.commandLine().getOut().printf("%s: usable (%d stations, %d craft, %d links, %d messages planned)%n",
-                scenario, stations, s.nodes().size() - stations, s.links().size(), LinkSchedule.plannedMessages(s));
+        spec.commandLine().getOut().printf("%s: usable (%s, %d craft, %s, %s planned)%n", scenario,
+                TerminalSummary.count(stations, "station"), s.nodes().size() - stations,
+                TerminalSummary.count(s.links().size(), "link"),
+                TerminalSummary.count(LinkSchedule.plannedMessages(s), "message"));
         return 0;
     }
 }

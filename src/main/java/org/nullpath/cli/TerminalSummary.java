@@ -17,13 +17,19 @@ final class TerminalSummary {
     private TerminalSummary() {
     }
 
+    /** "1 station", "2 stations". */
+    static String count(long n, String noun) {
+        return n + " " + noun + (n == 1 ? "" : "s");
+    }
+
     static void print(PrintWriter out, Scenario s, PlanOutput.Result r, Path dir) {
         long stations = s.nodes().values().stream().filter(n -> n.kind() == Scenario.Kind.STATION).count();
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
         out.printf("%s%n", s.title());
-        out.printf("  %d stations, %d craft, %d links; %d messages, %d delivered, %d never arrive%n",
-                stations, s.nodes().size() - stations, s.links().size(), messages, messages - never, never);
+        out.printf("  %s, %d craft, %s; %s, %d delivered, %d never arrive%n", count(stations, "station"),
+                s.nodes().size() - stations, count(s.links().size(), "link"), count(messages, "message"),
+                messages - never, never);
         for (LinkTally t : r.links()) {
             Scenario.Link l = s.links().get(t.link());
             out.printf("  link %-12s %s -> %s: %d sent, %d arrive; light time %s to %s; Doppler %s to %s%n",
