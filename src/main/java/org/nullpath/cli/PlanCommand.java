@@ -9,6 +9,7 @@ import java.util.concurrent.Callable;
 import org.nullpath.report.OutputFolder;
 import org.nullpath.report.PlanOutput;
 import org.nullpath.scenario.Scenario;
+import org.nullpath.schedule.RangeException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -56,6 +57,10 @@ final class PlanCommand implements Callable<Integer> {
                 e.printStackTrace(err);
             }
             return Main.FAILURE;
+        } catch (RangeException e) {
+            err.println(scenario + ": " + e.key() + ": " + e.getMessage()
+                    + " (shorten the open-ended burn's use: plan sends, deadlines and scans before it gets that far)");
+            return Main.INPUT_ERROR;
         } catch (RuntimeException e) {
             err.println("nullpath: plan failed: " + e.getMessage());
             if (debug) {

@@ -43,9 +43,10 @@ final class TerminalSummary {
             }
         }
         for (CutoffRow c : r.cutoffs()) {
-            out.printf("  cut-off %-12s on %s: %s%n", c.name(), c.link(), c.reachable()
-                    ? "send by " + Readable.time(c.latestSendClock()) + " on the sender's clock"
-                    : "unreachable (the latest send would precede mission time 0)");
+            out.printf("  cut-off %-12s on %s: %s%n", c.name(), c.link(), !c.reachable() ? "unreachable"
+                    : "send by " + Readable.time(c.latestSendClock()) + " on the sender's clock"
+                    + (c.beforeStart() ? " (before the mission starts: already too late for a plan made at mission"
+                    + " time 0)" : ""));
         }
         for (HorizonRow h : r.horizons()) {
             if (h.hasHorizon()) {

@@ -131,8 +131,14 @@ public final class LightCone {
      */
     private static State firstNever(Worldline sender, Asymptote a, double t) {
         State s = sender.atTime(t);
-        for (int i = 0; i < 64 && a.nullCoordinate(s.timeSeconds(), s.position()) < a.limitMetres(); i++) {
-            t = Math.nextUp(t);
+        for (int i = 0; i < 64; i++) {
+            double deficit = a.limitMetres() - a.nullCoordinate(s.timeSeconds(), s.position());
+            if (!(deficit > 0)) {
+                break;
+            }
+            // c t - k . r grows at c - k . v along the sender: step by the deficit at that rate, at least an ulp
+            double rate = C - a.direction().dot(s.velocity());
+            t = Math.max(Math.nextUp(t), t + deficit / rate);
             s = sender.atTime(t);
         }
         return s;
@@ -260,15 +266,17 @@ public final class LightCone {
      * (c^2 - v^2) T^2 - 2 (d0.v) T - |d0|^2 = 0, taking the positive root in the form that does not cancel.
      */
     static double inertialLightTime(Vec3 d0, Vec3 v) {
-        double dd = d0.normSquared();
-        if (dd == 0) {
+        double distance = d0.norm();
+        if (distance == 0) {
             return 0;
         }
+        // scaled to the unit direction, so distances far beyond 1e146 m do not overflow the squares
+        Vec3 u = d0.times(1 / distance);
         double beta = v.norm() / C;
         double a = C * C * (1 - beta) * (1 + beta);
-        double bHalf = d0.dot(v);
-        double disc = Math.sqrt(bHalf * bHalf + a * dd);
-        return bHalf >= 0 ? (bHalf + disc) / a : dd / (disc - bHalf);
+        double bHalf = u.dot(v);
+        double disc = Math.sqrt(bHalf * bHalf + a);
+        return distance * (bHalf >= 0 ? (bHalf + disc) / a : 1 / (disc - bHalf));
     }
 
     /** Root of an increasing function with f(0) <= 0, bracketed by doubling from {@code guess}. */

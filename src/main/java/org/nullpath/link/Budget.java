@@ -2,7 +2,8 @@ package org.nullpath.link;
 
 /**
  * One message's frequency plan and link budget (contract.md, "Link budget additions"). Values that
- * do not apply are NaN (photon columns on a coherent link, C/N0 and Eb/N0 on a photon-counting one).
+ * do not apply are NaN (photon columns on a coherent link, C/N0 and Eb/N0 on a photon-counting one; the
+ * power columns when sender and receiver are at one place, where a far-field budget has no value).
  *
  * @param txFrequencyHz        transmitted frequency in the sender's frame
  * @param rxFrequencyHz        received frequency in the receiver's frame
@@ -23,8 +24,11 @@ public record Budget(double txFrequencyHz, double rxFrequencyHz, double dopplerR
                      double rxDataRateBps, double ebN0Db, double photonsPerBit, double marginDb,
                      double maxDataRateBps) {
 
-    /** True when a message would be received: margin >= 0, in the tuning range, within the rate limit. */
+    /**
+     * True when a message would be received: margin >= 0 (or no far-field margin at all, sender and
+     * receiver being at one place), in the tuning range, within the rate limit.
+     */
     public boolean closes() {
-        return marginDb >= 0 && inTuningRange && withinDopplerRate;
+        return (marginDb >= 0 || Double.isNaN(marginDb)) && inTuningRange && withinDopplerRate;
     }
 }

@@ -14,7 +14,10 @@ import org.nullpath.worldline.Worldline;
  * <pre>  dD/d(tau_r) = -D (mu_r a_r - mu_s a_s D) / c</pre>
  * exactly. Otherwise (off the line) it is a five-point central difference of D - 1 over the send
  * clock, times D, with a step of 1e-4 of the shorter of the light time and c / |a|; its truncation
- * error is of order (step / scale)^4 ~ 1e-16 relative and its rounding error about 1e-11 relative.
+ * error is of order (step / scale)^4 ~ 1e-16 relative and its rounding error about 1e-11 relative. Next to a
+ * horizon, where the later sends never arrive, a backward difference of second order is used instead
+ * (truncation about (step / scale)^2 ~ 1e-8). Across a leg boundary the rate jumps; the stencil then
+ * blends the two legs' values within 2 steps of it.
  */
 public final class DopplerRate {
     private DopplerRate() {
@@ -40,7 +43,13 @@ public final class DopplerRate {
         double fm1 = offsetAt(sender, receiver, tau - h);
         double fp1 = offsetAt(sender, receiver, tau + h);
         double fp2 = offsetAt(sender, receiver, tau + 2 * h);
-        double dDdTauS = (fm2 - 8 * fm1 + 8 * fp1 - fp2) / (12 * h);
+        double dDdTauS;
+        if (Double.isNaN(fp1) || Double.isNaN(fp2)) {
+            // the later sends lie beyond a horizon: a one-sided (backward) difference of second order
+            dDdTauS = (3 * d.offset() - 4 * fm1 + fm2) / (2 * h);
+        } else {
+            dDdTauS = (fm2 - 8 * fm1 + 8 * fp1 - fp2) / (12 * h);
+        }
         return dDdTauS * d.doppler();
     }
 

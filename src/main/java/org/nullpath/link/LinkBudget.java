@@ -50,6 +50,13 @@ public final class LinkBudget {
         boolean inRange = !t.hasTuningRange() || (fRx >= t.tuningMinHz() && fRx <= t.tuningMaxHz());
         boolean withinRate = !t.hasDopplerRateLimit() || Math.abs(rate) <= t.maxDopplerRateHzPerS();
         double rTx = senderFrameDistance(p);
+        if (!(rTx > 0)) {
+            // sender and receiver at one place (a craft leaving its station): the far-field budget has no
+            // value there; frequencies and flags still do, the power columns are left empty
+            double rxRate0 = d.doppler() * t.dataRateBps();
+            return new Budget(fTx, fRx, rate, inRange, withinRate, Double.NaN, Double.NaN, Double.NaN, rxRate0,
+                    Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+        }
         double lambdaTx = Constants.C / fTx;
         double pathDb = 20 * Math.log10(lambdaTx / (4 * Math.PI * rTx));
         double rxPowerDbw = db(t.txPowerWatts()) + db(t.txAntenna().gainAt(fTx)) + db(t.rxAntenna().gainAt(fRx))

@@ -5,15 +5,34 @@ public final class Cells {
     private Cells() {
     }
 
-    /** The shortest decimal text that parses back to {@code v}; empty for NaN. */
+    /**
+     * A decimal text that parses back to {@code v} exactly (Double.toString); empty for NaN (a value that
+     * does not exist). An infinite value is a bug upstream and is refused rather than written.
+     */
     public static String num(double v) {
         if (Double.isNaN(v)) {
             return "";
         }
-        if (v == Math.rint(v) && Math.abs(v) < 1e15) {
+        if (Double.isInfinite(v)) {
+            throw new IllegalStateException("an infinite value reached an output file");
+        }
+        if (v == Math.rint(v) && Math.abs(v) < 1e15 && !(v == 0 && 1 / v < 0)) {
             return Long.toString((long) v);
         }
         return Double.toString(v);
+    }
+
+    /**
+     * The calendar instant {@code seconds} after {@code epoch} (ISO-8601, to the nanosecond), or empty
+     * for NaN.
+     */
+    public static String utc(java.time.Instant epoch, double seconds) {
+        if (Double.isNaN(seconds)) {
+            return "";
+        }
+        double whole = Math.floor(seconds);
+        long nanos = Math.round((seconds - whole) * 1e9);
+        return epoch.plusSeconds((long) whole).plusNanos(nanos).toString();
     }
 
     public static String bool(boolean b) {

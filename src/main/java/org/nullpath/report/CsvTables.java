@@ -21,6 +21,7 @@ import org.nullpath.schedule.WindowRow;
 
 import static org.nullpath.report.Cells.bool;
 import static org.nullpath.report.Cells.num;
+import static org.nullpath.report.Cells.utc;
 
 /** The CSV files of contract.md, written with Apache Commons CSV, one header line, LF line ends. */
 public final class CsvTables {
@@ -52,16 +53,22 @@ public final class CsvTables {
         private final CSVPrinter printer;
         private final Object[] cells;
         private final LinkTerms terms;
+        private final java.time.Instant epoch;
 
-        public MessageWriter(Path file, LinkTerms terms) throws IOException {
+        public MessageWriter(Path file, LinkTerms terms, java.time.Instant epoch) throws IOException {
             BufferedWriter w = Files.newBufferedWriter(file, StandardCharsets.UTF_8);
             this.terms = terms;
+            this.epoch = epoch;
             printer = new CSVPrinter(w, FORMAT);
             List<String> header = new ArrayList<>(MESSAGE_COLUMNS);
             if (terms != null) {
                 header.addAll(terms.detection() == LinkTerms.Detection.COHERENT ? COHERENT_COLUMNS : PHOTON_COLUMNS);
             }
             header.add(CONDITION_COLUMN);
+            if (epoch != null) {
+                header.add("send_time_utc");
+                header.add("receive_time_utc");
+            }
             cells = new Object[header.size()];
             printer.printRecord(header);
         }
@@ -99,7 +106,12 @@ public final class CsvTables {
                     cells[20] = bool(b.withinDopplerRate());
                 }
             }
-            cells[cells.length - 1] = num(r.lightTimeCondition());
+            int last = epoch == null ? cells.length - 1 : cells.length - 3;
+            cells[last] = num(r.lightTimeCondition());
+            if (epoch != null) {
+                cells[last + 1] = utc(epoch, r.sendTime());
+                cells[last + 2] = utc(epoch, r.receiveTime());
+            }
             try {
                 printer.printRecord(cells);
             } catch (IOException e) {
@@ -113,21 +125,40 @@ public final class CsvTables {
         }
     }
 
-    public static void writeCutoffs(Path file, List<CutoffRow> rows) throws IOException {
+    public static void writeCutoffs(Path file, List<CutoffRow> rows, java.time.Instant epoch) throws IOException {
         try (CSVPrinter p = new CSVPrinter(Files.newBufferedWriter(file, StandardCharsets.UTF_8), FORMAT)) {
-            p.printRecord("name", "link", "arrive_by_clock_s", "latest_send_clock_s", "latest_send_time_s", "status");
+            List<String> header = new ArrayList<>(List.of("name", "link", "arrive_by_clock_s", "latest_send_clock_s",
+                    "latest_send_time_s", "status", "before_mission_start"));
+            if (epoch != null) {
+                header.add("latest_send_time_utc");
+            }
+            p.printRecord(header);
             for (CutoffRow r : rows) {
-                p.printRecord(r.name(), r.link(), num(r.arriveByClock()), num(r.latestSendClock()),
-                        num(r.latestSendTime()), r.reachable() ? "ok" : "unreachable");
+                List<String> cells = new ArrayList<>(List.of(r.name(), r.link(), num(r.arriveByClock()),
+                        num(r.latestSendClock()), num(r.latestSendTime()), r.reachable() ? "ok" : "unreachable",
+                        bool(r.beforeStart())));
+                if (epoch != null) {
+                    cells.add(utc(epoch, r.latestSendTime()));
+                }
+                p.printRecord(cells);
             }
         }
     }
 
-    public static void writeHorizons(Path file, List<HorizonRow> rows) throws IOException {
+    public static void writeHorizons(Path file, List<HorizonRow> rows, java.time.Instant epoch) throws IOException {
         try (CSVPrinter p = new CSVPrinter(Files.newBufferedWriter(file, StandardCharsets.UTF_8), FORMAT)) {
-            p.printRecord("link", "has_horizon", "last_send_clock_s", "last_send_time_s");
+            List<String> header = new ArrayList<>(List.of("link", "has_horizon", "last_send_clock_s", "last_send_time_s"));
+            if (epoch != null) {
+                header.add("last_send_time_utc");
+            }
+            p.printRecord(header);
             for (HorizonRow r : rows) {
-                p.printRecord(r.link(), bool(r.hasHorizon()), num(r.lastSendClock()), num(r.lastSendTime()));
+                List<String> cells = new ArrayList<>(List.of(r.link(), bool(r.hasHorizon()), num(r.lastSendClock()),
+                        num(r.lastSendTime())));
+                if (epoch != null) {
+                    cells.add(utc(epoch, r.lastSendTime()));
+                }
+                p.printRecord(cells);
             }
         }
     }

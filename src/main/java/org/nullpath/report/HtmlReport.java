@@ -231,7 +231,8 @@ public final class HtmlReport {
             for (CutoffRow c : r.cutoffs()) {
                 h.append("<tr>").append(cell(c.name())).append(cell(c.link())).append(time(c.arriveByClock()))
                         .append(time(c.latestSendClock())).append(time(c.latestSendTime()))
-                        .append(cell(c.reachable() ? "ok" : "unreachable: it would need a send before mission time 0"))
+                        .append(cell(!c.reachable() ? "unreachable" : c.beforeStart()
+                                ? "ok, but the latest send lies before the mission starts" : "ok"))
                         .append("</tr>\n");
             }
             h.append("</tbody>\n</table>\n");

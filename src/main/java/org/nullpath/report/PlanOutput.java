@@ -52,14 +52,14 @@ public final class PlanOutput {
         List<LinkTally> tallies = new ArrayList<>();
         for (Scenario.Link link : s.links().values()) {
             try (CsvTables.MessageWriter w = new CsvTables.MessageWriter(out.file(link.name() + ".csv"),
-                    link.terms().orElse(null))) {
+                    link.terms().orElse(null), s.epoch().orElse(null))) {
                 tallies.add(LinkSchedule.run(s, link, w::write));
             }
         }
         List<CutoffRow> cutoffs = Deadlines.cutoffs(s);
-        CsvTables.writeCutoffs(out.file("cutoffs.csv"), cutoffs);
+        CsvTables.writeCutoffs(out.file("cutoffs.csv"), cutoffs, s.epoch().orElse(null));
         List<HorizonRow> horizons = Deadlines.horizons(s);
-        CsvTables.writeHorizons(out.file("horizons.csv"), horizons);
+        CsvTables.writeHorizons(out.file("horizons.csv"), horizons, s.epoch().orElse(null));
         List<ExchangeTally> exchanges = new ArrayList<>();
         for (Scenario.Exchange e : s.exchanges()) {
             try (CsvTables.ExchangeWriter w = new CsvTables.ExchangeWriter(out.file("exchanges-" + e.name() + ".csv"))) {

@@ -118,6 +118,7 @@ final class SummaryJson {
             m.put("latest_send_clock_s", nan(c.latestSendClock()));
             m.put("latest_send_time_s", nan(c.latestSendTime()));
             m.put("status", c.reachable() ? "ok" : "unreachable");
+            m.put("before_mission_start", c.beforeStart());
             cutoffs.add(m);
         }
         root.put("cutoffs", cutoffs);
@@ -184,7 +185,8 @@ final class SummaryJson {
         return m;
     }
 
+    /** JSON has no NaN or infinity: values that do not exist (or are not finite) become null. */
     private static Double nan(double v) {
-        return Double.isNaN(v) ? null : v;
+        return Double.isFinite(v) ? v : null;
     }
 }

@@ -36,11 +36,19 @@ public final class BudgetTally {
         overRate += b.withinDopplerRate() ? 0 : 1;
     }
 
+    /** The smaller, skipping NaN on either side (values that do not exist). */
     private static double min(double a, double b) {
+        if (Double.isNaN(b)) {
+            return a;
+        }
         return Double.isNaN(a) ? b : Math.min(a, b);
     }
 
+    /** The larger, skipping NaN on either side. */
     private static double max(double a, double b) {
+        if (Double.isNaN(b)) {
+            return a;
+        }
         return Double.isNaN(a) ? b : Math.max(a, b);
     }
 

@@ -18,21 +18,28 @@ public final class Deadlines {
 
     /**
      * The latest send for each cut-off: the past light cone of the deadline event on the receiver meets
-     * the sender's worldline at the latest send. Sends are possible from mission time 0 on; a deadline
-     * whose latest send falls before that is unreachable.
+     * the sender's worldline at the latest send. Worldlines are defined for all times, so every deadline is
+     * reachable; a latest send before mission time 0 is flagged.
      */
     public static List<CutoffRow> cutoffs(Scenario s) {
         List<CutoffRow> rows = new ArrayList<>();
-        for (Scenario.Cutoff c : s.cutoffs()) {
+        for (int i = 0; i < s.cutoffs().size(); i++) {
+            Scenario.Cutoff c = s.cutoffs().get(i);
             Scenario.Link link = s.links().get(c.link());
             Worldline sender = s.nodes().get(link.from()).worldline();
             Worldline receiver = s.nodes().get(link.to()).worldline();
-            State deadline = receiver.atClock(c.arriveBy());
-            SignalPath p = LightCone.past(deadline, sender);
+            SignalPath p;
+            try {
+                p = LightCone.past(receiver.atClock(c.arriveBy()), sender);
+            } catch (ArithmeticException e) {
+                throw new RangeException("cutoffs[" + i + "].arrive-by", e.getMessage(), e);
+            }
             State send = p.send();
-            boolean reachable = send.timeSeconds() >= 0;
-            rows.add(new CutoffRow(c.name(), c.link(), c.arriveBy(), reachable ? send.clock() : Double.NaN,
-                    reachable ? send.timeSeconds() : Double.NaN, reachable));
+            // every worldline here is defined for all times (stations always, craft coasting before their
+            // first leg), so the past cone always meets the sender: the deadline is reachable, though the
+            // latest send may lie before the mission starts (flagged in its own column)
+            rows.add(new CutoffRow(c.name(), c.link(), c.arriveBy(), send.clock(), send.timeSeconds(), true,
+                    send.timeSeconds() < 0));
         }
         return rows;
     }
@@ -59,27 +66,37 @@ public final class Deadlines {
         long complete = 0;
         for (long k = 0; k < n; k++) {
             double sendClock = e.first() + k * e.every();
-            State qs = querier.atClock(sendClock);
-            SignalPath q = LightCone.future(qs, responder);
-            if (!q.delivered()) {
-                sink.accept(new ExchangeRow(k + 1, sendClock, Double.NaN, Double.NaN, Double.NaN, Double.NaN, false));
-                continue;
+            try {
+                complete += roundTrip(querier, responder, e, k, sendClock, sink) ? 1 : 0;
+            } catch (ArithmeticException x) {
+                throw new RangeException("exchanges." + e.name(), "round trip " + (k + 1) + " (query clock " + sendClock
+                        + " s): " + x.getMessage(), x);
             }
-            double replyClock = q.receive().clock() + e.turnaround();
-            SignalPath r = LightCone.future(responder.atClock(replyClock), querier);
-            if (!r.delivered()) {
-                sink.accept(new ExchangeRow(k + 1, sendClock, q.receive().clock(), replyClock, Double.NaN, Double.NaN,
-                        false));
-                continue;
-            }
-            // round trip on the querier's clock, as an offset from the query's send state
-            double span = q.lightTimeSeconds() + (r.send().timeSeconds() - q.receive().timeSeconds())
-                    + r.lightTimeSeconds();
-            double roundTrip = querier.advance(qs, span).dClockSeconds();
-            complete++;
-            sink.accept(new ExchangeRow(k + 1, sendClock, q.receive().clock(), replyClock, r.receive().clock(),
-                    roundTrip, true));
         }
         return complete;
+    }
+
+    private static boolean roundTrip(Worldline querier, Worldline responder, Scenario.Exchange e, long k,
+                                     double sendClock, Consumer<ExchangeRow> sink) {
+        State qs = querier.atClock(sendClock);
+        SignalPath q = LightCone.future(qs, responder);
+        if (!q.delivered()) {
+            sink.accept(new ExchangeRow(k + 1, sendClock, Double.NaN, Double.NaN, Double.NaN, Double.NaN, false));
+            return false;
+        }
+        double replyClock = q.receive().clock() + e.turnaround();
+        SignalPath r = LightCone.future(responder.atClock(replyClock), querier);
+        if (!r.delivered()) {
+            sink.accept(new ExchangeRow(k + 1, sendClock, q.receive().clock(), replyClock, Double.NaN, Double.NaN,
+                    false));
+            return false;
+        }
+        // round trip on the querier's clock, as an offset from the query's send state
+        double turnaroundSpan = responder.advanceClock(q.receive(), e.turnaround()).dtSeconds();
+        double span = q.lightTimeSeconds() + turnaroundSpan + r.lightTimeSeconds();
+        double roundTrip = querier.advance(qs, span).dClockSeconds();
+        sink.accept(new ExchangeRow(k + 1, sendClock, q.receive().clock(), replyClock, r.receive().clock(),
+                roundTrip, true));
+        return true;
     }
 }

@@ -80,7 +80,13 @@ public final class LinkSchedule {
         while (order.hasNext()) {
             double clock = order.next();
             index++;
-            SignalPath p = signal(sender, receiver, clock);
+            SignalPath p;
+            try {
+                p = signal(sender, receiver, clock);
+            } catch (ArithmeticException e) {
+                throw new RangeException("links." + link.name(), "message " + index + " (send clock " + clock
+                        + " s): " + e.getMessage(), e);
+            }
             MessageRow row;
             if (p.delivered()) {
                 delivered++;

@@ -50,6 +50,14 @@ public final class Windows {
 
     /** The windows of one scanned range, in order. */
     public static List<WindowRow> scan(Scenario s, Scenario.WindowScan w) {
+        try {
+            return scanRange(s, w);
+        } catch (ArithmeticException e) {
+            throw new RangeException("windows (link " + w.link() + ")", e.getMessage(), e);
+        }
+    }
+
+    private static List<WindowRow> scanRange(Scenario s, Scenario.WindowScan w) {
         Scenario.Link link = s.links().get(w.link());
         LinkTerms terms = link.terms().orElseThrow(() -> new IllegalArgumentException(
                 "window on link " + w.link() + " needs link terms"));
@@ -154,7 +162,7 @@ public final class Windows {
             }
             Doppler.Factor d = Doppler.of(p);
             Budget b = LinkBudget.evaluate(terms, p, d, DopplerRate.of(sender, receiver, p, d));
-            v[1] = b.marginDb();
+            v[1] = Double.isNaN(b.marginDb()) ? 1.0 : b.marginDb(); // at one place the link trivially closes
             v[2] = terms.hasTuningRange()
                     ? Math.min(b.rxFrequencyHz() - terms.tuningMinHz(), terms.tuningMaxHz() - b.rxFrequencyHz())
                     : 1.0;

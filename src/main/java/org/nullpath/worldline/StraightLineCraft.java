@@ -256,6 +256,20 @@ public final class StraightLineCraft implements Worldline {
         return heading;
     }
 
+    /**
+     * The last craft-clock reading doubles can hold: where an open-ended burn reaches rapidity
+     * {@link #MAX_RAPIDITY}; +infinity when the craft ends coasting.
+     */
+    public double maxClock() {
+        Segment last = segments.get(segments.size() - 1);
+        double a = last.piece().constantAcceleration();
+        if (a == 0 || Double.isNaN(a)) {
+            return Double.POSITIVE_INFINITY;
+        }
+        LineState lo = last.lo();
+        return lo.clock() + (Math.signum(a) * MAX_RAPIDITY - lo.rapidity()) * C / a;
+    }
+
     /** The legs as flown, with their start and end states. */
     public List<LegSpan> legs() {
         return legs;

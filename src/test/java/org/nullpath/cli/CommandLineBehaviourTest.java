@@ -79,6 +79,25 @@ class CommandLineBehaviourTest {
     }
 
     @Test
+    void anEpochAddsCalendarColumnsAndCutOffsFlagSendsBeforeTheMissionStarts() throws IOException {
+        String yaml = GOOD.replace("title: command line check", "title: command line check\nepoch: 2061-03-01T00:00:00Z")
+                .replace("  - {name: early, link: up, arrive-by: 0.5 yr}",
+                        "  - {name: early, link: up, arrive-by: 0.5 yr}\n  - {name: late, link: up, arrive-by: -1 d}");
+        Path out = tmp.resolve("out");
+        assertEquals(0, PlanRun.run("plan", write("s.yaml", yaml).toString(), "--out", out.toString()).exitCode());
+        List<org.apache.commons.csv.CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
+        // message 2 is sent at 10 d = 864 000 s after the epoch (ISO-8601 instants, java.time)
+        assertEquals("2061-03-11T00:00:00Z", up.get(1).get("send_time_utc"));
+        assertEquals("", up.get(up.size() - 1).get("receive_time_utc"), "a message that never arrives has no arrival");
+        List<org.apache.commons.csv.CSVRecord> cut = PlanRun.csv(out.resolve("cutoffs.csv"));
+        assertEquals("ok", cut.get(0).get("status"));
+        assertEquals("false", cut.get(0).get("before_mission_start"));
+        assertEquals("ok", cut.get(1).get("status"), "every worldline is defined for all times: the deadline is reachable");
+        assertEquals("true", cut.get(1).get("before_mission_start"));
+        assertTrue(Double.parseDouble(cut.get(1).get("latest_send_time_s")) < 0);
+    }
+
+    @Test
     void twoRunsGiveByteIdenticalFiles() throws IOException {
         Path s = write("s.yaml", GOOD);
         Path a = tmp.resolve("a");
