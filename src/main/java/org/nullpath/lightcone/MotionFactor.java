@@ -41,9 +41,4 @@ public record MotionFactor(double value, double minusOne) {
         double gm1 = sh * sh / (FastMath.cosh(eta) + 1);
         return new MotionFactor(FastMath.cosh(eta) + ash * absMu, gm1 + ash * absMu);
     }
-
-    /** 1 - beta . k of the same body: the factor over gamma. */
-    public static double oneMinusBetaDotK(State s, Vec3 k) {
-        return of(s, k).value() / FastMath.cosh(s.rapidity());
-    }
 }

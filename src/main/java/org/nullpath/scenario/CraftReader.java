@@ -23,8 +23,6 @@ final class CraftReader {
     static final List<String> KEYS = List.of("start-position", "heading", "start-time", "start-clock", "start-speed",
             "legs");
     static final List<String> LEG_TYPES = List.of("burn", "coast", "rocket", "sail", "profile");
-    /** Leg types of the contract that this version does not fly yet (none left). */
-    static final List<String> LATER_LEG_TYPES = List.of();
     static final List<String> ROCKET_KEYS = List.of("acceleration", "exhaust-speed", "mass-ratio", "thrust",
             "initial-mass", "burnout-mass");
     static final List<String> SAIL_KEYS = List.of("beam-from", "beam-power", "mass", "reflectivity", "beam-off");
@@ -151,12 +149,8 @@ final class CraftReader {
         boolean ok = true;
         for (Entry e : m.entries().values()) {
             String keyPath = Values.child(path, e.key());
-            if (LATER_LEG_TYPES.contains(e.key())) {
-                problems.atKey(e, keyPath, "leg type '" + e.key() + "' is not supported yet (this version flies burn"
-                        + " and coast legs)");
-                ok = false;
-            } else if (!LEG_TYPES.contains(e.key())) {
-                String hint = Spelling.closest(e.key(), allLegTypes());
+            if (!LEG_TYPES.contains(e.key())) {
+                String hint = Spelling.closest(e.key(), LEG_TYPES);
                 problems.atKey(e, keyPath, "unknown leg type '" + e.key() + "'"
                         + (hint != null ? " (did you mean '" + hint + "'?)" : " (a leg is burn, coast, rocket, sail or profile)"));
                 ok = false;
@@ -207,12 +201,6 @@ final class CraftReader {
         }
         site[0] = new LegSite(type.value(), typePath, f.get(endKey), f.path(endKey));
         return burn ? new LegSpec.Burn(a, end) : new LegSpec.Coast(end);
-    }
-
-    private static List<String> allLegTypes() {
-        List<String> all = new ArrayList<>(LEG_TYPES);
-        all.addAll(LATER_LEG_TYPES);
-        return all;
     }
 
     /** The leg end given by {@code key}; null on a problem. */
