@@ -13,7 +13,7 @@ import picocli.CommandLine.Command;
         description = {
             "Signal timing, Doppler, horizons and link budgets for craft that accelerate for long periods.",
             "Exit codes: 0 done, 2 the input is wrong, 1 anything else."})
-public final class Main implements Runnable {
+public final class Main implements java.util.concurrent.Callable<Integer> {
 
     /** Exit code for wrong input (scenario errors, bad options). */
     public static final int INPUT_ERROR = 2;
@@ -29,7 +29,8 @@ public final class Main implements Runnable {
         CommandLine cl = new CommandLine(new Main());
         cl.setParameterExceptionHandler((ex, a) -> {
             ex.getCommandLine().getErr().println("nullpath: " + ex.getMessage());
-            ex.getCommandLine().getErr().println("(see: nullpath " + ex.getCommandLine().getCommandName() + " --help)");
+            ex.getCommandLine().getErr().println("(see: " + ex.getCommandLine().getCommandSpec().qualifiedName()
+                    + " --help)");
             return INPUT_ERROR;
         });
         cl.setExecutionExceptionHandler((ex, c, p) -> {
@@ -39,9 +40,12 @@ public final class Main implements Runnable {
         return cl.execute(args);
     }
 
+    /** No command given: say what there is, on standard error, as a usage error. */
     @Override
-    public void run() {
-        new CommandLine(this).usage(System.out);
+    public Integer call() {
+        CommandLine cl = new CommandLine(this);
+        cl.usage(cl.getErr());
+        return INPUT_ERROR;
     }
 
     /** Reads the version Maven wrote into the jar's resources. */
