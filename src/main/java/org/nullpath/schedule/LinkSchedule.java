@@ -44,6 +44,28 @@ public final class LinkSchedule {
         return r < 0 ? Long.MAX_VALUE : r;
     }
 
+    /**
+     * One message fully evaluated: its light path, the bodies' motion factors for its photon direction,
+     * the Doppler factor and (with link terms) the budget; all but the path are null when it never arrives.
+     */
+    public record Evaluated(SignalPath path, MotionFactor sendFactor, MotionFactor receiveFactor,
+                            Doppler.Factor doppler, Budget budget) {
+    }
+
+    /** Evaluates the message sent at {@code sendClock}; {@code terms} may be null (no budget). */
+    public static Evaluated evaluate(Worldline sender, Worldline receiver, LinkTerms terms, double sendClock) {
+        SignalPath p = signal(sender, receiver, sendClock);
+        if (!p.delivered()) {
+            return new Evaluated(p, null, null, null, null);
+        }
+        Vec3 k = Doppler.photonDirection(p);
+        MotionFactor fs = MotionFactor.of(p.send(), k);
+        MotionFactor fr = MotionFactor.of(p.receive(), k);
+        Doppler.Factor d = Doppler.of(fs, fr);
+        Budget b = terms == null ? null : LinkBudget.evaluate(terms, p, d, DopplerRate.of(sender, receiver, p, d));
+        return new Evaluated(p, fs, fr, d, b);
+    }
+
     /** One signal on a link from a send clock: the path, or never. */
     public static SignalPath signal(Worldline sender, Worldline receiver, double sendClock) {
         State send = sender.atClock(sendClock);
@@ -80,29 +102,27 @@ public final class LinkSchedule {
         while (order.hasNext()) {
             double clock = order.next();
             index++;
-            SignalPath p;
+            Evaluated ev;
             try {
-                p = signal(sender, receiver, clock);
+                ev = evaluate(sender, receiver, terms, clock);
             } catch (ArithmeticException e) {
                 throw new RangeException("links." + link.name(), "message " + index + " (send clock " + clock
                         + " s): " + e.getMessage(), e);
             }
+            SignalPath p = ev.path();
             MessageRow row;
             if (p.delivered()) {
                 delivered++;
-                Vec3 k = Doppler.photonDirection(p);
-                MotionFactor fs = MotionFactor.of(p.send(), k);
-                MotionFactor fr = MotionFactor.of(p.receive(), k);
-                Doppler.Factor d = Doppler.of(fs, fr);
+                Doppler.Factor d = ev.doppler();
                 double rxClock = p.receive().clock();
-                Budget budget = terms == null ? null
-                        : LinkBudget.evaluate(terms, p, d, DopplerRate.of(sender, receiver, p, d));
+                Budget budget = ev.budget();
                 if (budget != null) {
                     budgets.add(budget);
                 }
                 double interval = previous == null ? Double.NaN : arrivalInterval(sender, receiver, previous, p);
                 row = new MessageRow(index, clock, p.send().timeSeconds(), true, p.receive().timeSeconds(), rxClock,
-                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, budget, Conditioning.ofLightTime(p, fs, fr));
+                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, budget,
+                        Conditioning.ofLightTime(p, ev.sendFactor(), ev.receiveFactor()));
                 if (row.lightTimeCondition() * Conditioning.EPSILON > ILL_CONDITIONED) {
                     illConditioned++;
                 }

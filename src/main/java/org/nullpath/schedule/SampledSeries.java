@@ -9,8 +9,6 @@ import org.nullpath.lightcone.LightCone;
 import org.nullpath.lightcone.SignalPath;
 import org.nullpath.link.Budget;
 import org.nullpath.link.Doppler;
-import org.nullpath.link.DopplerRate;
-import org.nullpath.link.LinkBudget;
 import org.nullpath.link.LinkTerms;
 import org.nullpath.scenario.Scenario;
 import org.nullpath.worldline.Worldline;
@@ -18,7 +16,7 @@ import org.nullpath.worldline.Worldline;
 /**
  * A bounded sample of a link's signals for plotting: at most {@value #MAX_SAMPLES} send clocks, evenly
  * spaced over the link's planned send range, each solved exactly as a planned message is
- * ({@link LinkSchedule#signal}, {@link Doppler#of}, {@link DopplerRate#of}, {@link LinkBudget#evaluate}).
+ * ({@link LinkSchedule#evaluate}: the same per-message evaluation as the schedule itself).
  * The planned messages themselves are never held: memory does not depend on how many there are.
  *
  * <p>The planned send range runs from the earliest to the latest send clock of the link's message
@@ -117,13 +115,13 @@ public final class SampledSeries {
         int skipped = 0;
         for (double clock : clocks) {
             try {
-                SignalPath p = LinkSchedule.signal(sender, receiver, clock);
+                LinkSchedule.Evaluated ev = LinkSchedule.evaluate(sender, receiver, terms, clock);
+                SignalPath p = ev.path();
                 if (!p.delivered()) {
                     continue;
                 }
-                Doppler.Factor d = Doppler.of(p);
-                Budget b = terms == null ? null
-                        : LinkBudget.evaluate(terms, p, d, DopplerRate.of(sender, receiver, p, d));
+                Doppler.Factor d = ev.doppler();
+                Budget b = ev.budget();
                 samples.add(new Sample(clock, p.send().timeSeconds(), p.receive().timeSeconds(), p.receive().clock(),
                         p.lightTimeSeconds(), d.doppler(), d.offset(), b));
             } catch (ArithmeticException e) {

@@ -9,11 +9,7 @@ import org.hipparchus.analysis.solvers.AllowedSolution;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.nullpath.lightcone.Horizon;
 import org.nullpath.lightcone.LightCone;
-import org.nullpath.lightcone.SignalPath;
 import org.nullpath.link.Budget;
-import org.nullpath.link.Doppler;
-import org.nullpath.link.DopplerRate;
-import org.nullpath.link.LinkBudget;
 import org.nullpath.link.LinkTerms;
 import org.nullpath.scenario.Scenario;
 import org.nullpath.worldline.Worldline;
@@ -155,13 +151,12 @@ public final class Windows {
                 Arrays.fill(v, 1, 4, -1.0);
                 return v;
             }
-            SignalPath p = LightCone.future(sender.atClock(clock), receiver);
-            if (!p.delivered()) {
+            LinkSchedule.Evaluated ev = LinkSchedule.evaluate(sender, receiver, terms, clock);
+            if (!ev.path().delivered()) {
                 Arrays.fill(v, -1.0);
                 return v;
             }
-            Doppler.Factor d = Doppler.of(p);
-            Budget b = LinkBudget.evaluate(terms, p, d, DopplerRate.of(sender, receiver, p, d));
+            Budget b = ev.budget();
             v[1] = Double.isNaN(b.marginDb()) ? 1.0 : b.marginDb(); // at one place the link trivially closes
             v[2] = terms.hasTuningRange()
                     ? Math.min(b.rxFrequencyHz() - terms.tuningMinHz(), terms.tuningMaxHz() - b.rxFrequencyHz())
