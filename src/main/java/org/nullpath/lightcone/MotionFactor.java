@@ -1,6 +1,5 @@
 package org.nullpath.lightcone;
 
-import org.hipparchus.util.FastMath;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.worldline.State;
 
@@ -32,13 +31,13 @@ public record MotionFactor(double value, double minusOne) {
         }
         double absMu = Math.abs(mu);
         double oneMinusAbsMu = sin2 / (1 + absMu);
-        double ash = Math.abs(FastMath.sinh(eta));
+        double ash = Math.abs(Math.sinh(eta));
         if (eta * mu >= 0) {
             double a = Math.abs(eta);
-            return new MotionFactor(FastMath.exp(-a) + ash * oneMinusAbsMu, FastMath.expm1(-a) + ash * oneMinusAbsMu);
+            return new MotionFactor(Math.exp(-a) + ash * oneMinusAbsMu, Math.expm1(-a) + ash * oneMinusAbsMu);
         }
-        double sh = FastMath.sinh(eta);
-        double gm1 = sh * sh / (FastMath.cosh(eta) + 1);
-        return new MotionFactor(FastMath.cosh(eta) + ash * absMu, gm1 + ash * absMu);
+        double sh = Math.sinh(eta);
+        double gm1 = sh * sh / (Math.cosh(eta) + 1);
+        return new MotionFactor(Math.cosh(eta) + ash * absMu, gm1 + ash * absMu);
     }
 }

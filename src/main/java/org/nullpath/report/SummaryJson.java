@@ -9,7 +9,6 @@ import java.util.Map;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
-import org.hipparchus.util.FastMath;
 import org.nullpath.scenario.Scenario;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
@@ -180,7 +179,7 @@ final class SummaryJson {
         m.put("clock_s", st.clock());
         m.put("time_s", st.timeSeconds());
         m.put("distance_m", st.along());
-        m.put("speed_c", FastMath.tanh(st.rapidity()));
+        m.put("speed_c", Math.tanh(st.rapidity()));
         m.put("rapidity", st.rapidity());
         return m;
     }

@@ -1,6 +1,5 @@
 package org.nullpath.spacetime;
 
-import org.hipparchus.util.FastMath;
 import org.nullpath.units.Constants;
 
 /**
@@ -23,19 +22,19 @@ public final class Hyperbolic {
     /** Mission-time offset after proper time {@code du} from rapidity {@code eta} at acceleration {@code a}. */
     public static double timeOffset(double eta, double a, double du) {
         if (a == 0 || du == 0) {
-            return FastMath.cosh(eta) * du;
+            return Math.cosh(eta) * du;
         }
         double h = a * du / (2 * C);
-        return du * sinhcLike(h) * FastMath.cosh(eta + h);
+        return du * sinhcLike(h) * Math.cosh(eta + h);
     }
 
     /** Distance offset along the line after proper time {@code du}. */
     public static double distanceOffset(double eta, double a, double du) {
         if (a == 0 || du == 0) {
-            return C * FastMath.sinh(eta) * du;
+            return C * Math.sinh(eta) * du;
         }
         double h = a * du / (2 * C);
-        return C * du * sinhcLike(h) * FastMath.sinh(eta + h);
+        return C * du * sinhcLike(h) * Math.sinh(eta + h);
     }
 
     /** sinh(h)/h, exact near zero. */
@@ -45,7 +44,7 @@ public final class Hyperbolic {
             double h2 = h * h;
             return 1 + h2 / 6 * (1 + h2 / 20);
         }
-        return FastMath.sinh(h) / h;
+        return Math.sinh(h) / h;
     }
 
     /**
@@ -54,10 +53,10 @@ public final class Hyperbolic {
      */
     public static double properTimeForTime(double eta, double a, double dt) {
         if (a == 0 || dt == 0) {
-            return dt / FastMath.cosh(eta);
+            return dt / Math.cosh(eta);
         }
         double x = a * dt / C;
-        double b = FastMath.sinh(eta);
+        double b = Math.sinh(eta);
         double dEta = deltaAsinh(b + x, b, x);
         return C * dEta / a;
     }
@@ -76,9 +75,25 @@ public final class Hyperbolic {
             }
             // (A-B)(A+B) / (A cb + B ca): for huge arguments divide through to avoid overflow
             double denominator = a * cb + b * ca;
-            return FastMath.asinh(aMinusB * (sum / denominator));
+            return asinh(aMinusB * (sum / denominator));
         }
-        return FastMath.asinh(a) - FastMath.asinh(b);
+        return asinh(a) - asinh(b);
+    }
+
+    /**
+     * asinh(x) = sign(x) log1p(|x| + x^2 / (1 + sqrt(1 + x^2))): exact to an ulp or two from tiny to huge
+     * arguments (log(2|x|) beyond 1e150, where x^2 would overflow).
+     */
+    public static double asinh(double x) {
+        double ax = Math.abs(x);
+        double r = ax > 1e150 ? Math.log(2) + Math.log(ax) : Math.log1p(ax + ax * ax / (1 + Math.sqrt(1 + ax * ax)));
+        return Math.copySign(r, x);
+    }
+
+    /** atanh(x) = log1p(2x / (1 - x)) / 2, |x| < 1, exact to an ulp or two near 0 and near 1. */
+    public static double atanh(double x) {
+        double ax = Math.abs(x);
+        return Math.copySign(0.5 * Math.log1p(2 * ax / (1 - ax)), x);
     }
 
     /** sqrt(1 + x^2), the cosh of asinh(x), without overflow (and faster than Math.hypot). */
@@ -89,7 +104,7 @@ public final class Hyperbolic {
 
     /** Proper time for a null offset of U (coast or burn); NaN beyond a horizon. */
     public static double properTimeForU(double eta, double a, double dU) {
-        double base = dU * FastMath.exp(eta) / C;
+        double base = dU * Math.exp(eta) / C;
         double y = -a * base / C;
         if (y <= -1) {
             return Double.NaN;
@@ -99,7 +114,7 @@ public final class Hyperbolic {
 
     /** Proper time for a null offset of V (coast or burn); NaN beyond a horizon. */
     public static double properTimeForV(double eta, double a, double dV) {
-        double base = dV * FastMath.exp(-eta) / C;
+        double base = dV * Math.exp(-eta) / C;
         double y = a * base / C;
         if (y <= -1) {
             return Double.NaN;
@@ -112,25 +127,25 @@ public final class Hyperbolic {
         if (Math.abs(y) < 1e-8) {
             return 1 - y / 2 + y * y / 3;
         }
-        return FastMath.log1p(y) / y;
+        return Math.log1p(y) / y;
     }
 
     /** Offset of {@code U = ct - s} after proper time {@code du}. */
     public static double uOffset(double eta, double a, double du) {
         if (a == 0 || du == 0) {
-            return C * du * FastMath.exp(-eta);
+            return C * du * Math.exp(-eta);
         }
         double dEta = a * du / C;
-        return C * du * FastMath.exp(-eta) * expm1OverX(-dEta);
+        return C * du * Math.exp(-eta) * expm1OverX(-dEta);
     }
 
     /** Offset of {@code V = ct + s} after proper time {@code du}. */
     public static double vOffset(double eta, double a, double du) {
         if (a == 0 || du == 0) {
-            return C * du * FastMath.exp(eta);
+            return C * du * Math.exp(eta);
         }
         double dEta = a * du / C;
-        return C * du * FastMath.exp(eta) * expm1OverX(dEta);
+        return C * du * Math.exp(eta) * expm1OverX(dEta);
     }
 
     /** expm1(x)/x, exact near zero; note the sign convention: returns expm1(x)/x. */
@@ -138,12 +153,12 @@ public final class Hyperbolic {
         if (Math.abs(x) < 1e-8) {
             return 1 + x / 2 + x * x / 6;
         }
-        return FastMath.expm1(x) / x;
+        return Math.expm1(x) / x;
     }
 
     /** Rapidity of a speed given as a fraction of c, |beta| < 1. */
     public static double rapidityOfBeta(double beta) {
-        return FastMath.atanh(beta);
+        return atanh(beta);
     }
 
     /**
@@ -152,18 +167,18 @@ public final class Hyperbolic {
      * nears 1, where atanh amplifies rounding, and the plain difference is exact to rounding.
      */
     public static double deltaRapidity(double beta1, double beta0) {
-        double e1 = FastMath.atanh(beta1);
-        double e0 = FastMath.atanh(beta0);
+        double e1 = atanh(beta1);
+        double e0 = atanh(beta0);
         double direct = e1 - e0;
         if (Math.abs(direct) >= 0.5 * Math.max(Math.abs(e1), Math.abs(e0))) {
             return direct;
         }
-        return FastMath.atanh((beta1 - beta0) / (1 - beta1 * beta0));
+        return atanh((beta1 - beta0) / (1 - beta1 * beta0));
     }
 
     /** gamma - 1 = (gamma beta)^2 / (gamma + 1), exact for small rapidities. */
     public static double gammaMinusOne(double eta) {
-        double sh = FastMath.sinh(eta);
-        return sh * sh / (FastMath.cosh(eta) + 1);
+        double sh = Math.sinh(eta);
+        return sh * sh / (Math.cosh(eta) + 1);
     }
 }

@@ -13,7 +13,6 @@ import org.hipparchus.ode.events.AdaptableInterval;
 import org.hipparchus.ode.events.ODEEventDetector;
 import org.hipparchus.ode.events.ODEEventHandler;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
-import org.hipparchus.util.FastMath;
 import org.nullpath.units.Constants;
 
 /**
@@ -74,9 +73,9 @@ final class IntegratedPiece implements Piece {
             @Override
             public double[] computeDerivatives(double u, double[] y) {
                 double eta = y[ETA];
-                // sinh from FastMath, not (e^eta - e^-eta)/2, which cancels to noise at small rapidity
-                return new double[] {law.at(u, eta) / C, FastMath.cosh(eta), C * FastMath.sinh(eta),
-                                     C * FastMath.exp(-eta), C * FastMath.exp(eta)};
+                // Math.sinh, not (e^eta - e^-eta)/2, which cancels to noise at small rapidity
+                return new double[] {law.at(u, eta) / C, Math.cosh(eta), C * Math.sinh(eta),
+                                     C * Math.exp(-eta), C * Math.exp(eta)};
             }
         };
     }

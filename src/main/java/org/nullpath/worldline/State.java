@@ -1,6 +1,5 @@
 package org.nullpath.worldline;
 
-import org.hipparchus.util.FastMath;
 import org.nullpath.spacetime.Event;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
@@ -22,11 +21,11 @@ public record State(double clock, double timeSeconds, Vec3 position, Vec3 direct
 
     /** Speed as a fraction of c, signed along {@code direction}. */
     public double beta() {
-        return FastMath.tanh(rapidity);
+        return Math.tanh(rapidity);
     }
 
     public double gamma() {
-        return FastMath.cosh(rapidity);
+        return Math.cosh(rapidity);
     }
 
     /** Velocity in m/s. */

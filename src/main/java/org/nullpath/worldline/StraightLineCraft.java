@@ -5,7 +5,6 @@ import java.util.Collections;
 import java.util.List;
 import java.util.Optional;
 
-import org.hipparchus.util.FastMath;
 import org.nullpath.spacetime.Hyperbolic;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
@@ -152,14 +151,14 @@ public final class StraightLineCraft implements Worldline {
         if (!(along < lo.along())) {
             throw new WorldlineException(i, "the beam station must be behind the craft on its flight line at the start of the leg");
         }
-        double etaStation = FastMath.atanh(n.dot(st.velocity()) / C);
+        double etaStation = Hyperbolic.atanh(n.dot(st.velocity()) / C);
         double k = (1 + sail.reflectivity()) * sail.beamPowerWatts() / (sail.massKg() * C);
         State off = st.atClock(sail.beamOffClock());
         double targetU = C * (off.timeSeconds() - lo.timeSeconds()) - (n.dot(off.position().minus(origin)) - lo.along());
         if (!(targetU > 0)) {
             throw new WorldlineException(i, "the beam is switched off before its light reaches the sail at the start of the leg");
         }
-        return IntegratedPiece.untilU(lo, (u, eta) -> k * FastMath.exp(-2 * (eta - etaStation)), targetU, targetU / C);
+        return IntegratedPiece.untilU(lo, (u, eta) -> k * Math.exp(-2 * (eta - etaStation)), targetU, targetU / C);
     }
 
     /** Craft-clock duration of a finite leg starting at {@code cur}. */
@@ -191,7 +190,7 @@ public final class StraightLineCraft implements Worldline {
         }
         double target = speed / C;
         double dEta = Math.abs(eta) < 0.5
-                ? Hyperbolic.deltaRapidity(target, FastMath.tanh(eta))
+                ? Hyperbolic.deltaRapidity(target, Math.tanh(eta))
                 : Hyperbolic.rapidityOfBeta(target) - eta;
         if (dEta == 0) {
             return 0;
@@ -199,7 +198,7 @@ public final class StraightLineCraft implements Worldline {
         if (a == 0 || Math.signum(dEta) != Math.signum(a)) {
             throw new WorldlineException(i, "until-speed " + speed / C + " c is never reached: the leg's acceleration "
                     + (a == 0 ? "is zero" : "points away from it") + " (speed at the leg start "
-                    + FastMath.tanh(eta) + " c)");
+                    + Math.tanh(eta) + " c)");
         }
         return C * dEta / a;
     }
@@ -213,7 +212,7 @@ public final class StraightLineCraft implements Worldline {
             return 0;
         }
         if (a == 0) {
-            double v = C * FastMath.sinh(eta);
+            double v = C * Math.sinh(eta);
             if (v == 0 || Math.signum(v) != Math.signum(d)) {
                 throw new WorldlineException(i, "until-distance is never reached: the craft coasts "
                         + (v == 0 ? "at rest" : "the other way"));
@@ -221,8 +220,8 @@ public final class StraightLineCraft implements Worldline {
             return d / v;
         }
         double x = a * d / Constants.C2;
-        double ch = FastMath.cosh(eta);
-        double sh = FastMath.sinh(eta);
+        double ch = Math.cosh(eta);
+        double sh = Math.sinh(eta);
         double q = sh * sh + x * (2 * ch + x); // sinh^2(eta1)
         if (!(q >= 0)) {
             throw new WorldlineException(i, "until-distance is never reached: the burn turns the craft round before it gets there");
@@ -235,7 +234,7 @@ public final class StraightLineCraft implements Worldline {
                 double diff = x * (2 * ch + x) / (target + sh);
                 dEta = Hyperbolic.deltaAsinh(target, sh, diff);
             } else {
-                dEta = FastMath.asinh(target) - eta;
+                dEta = Hyperbolic.asinh(target) - eta;
             }
             double du = C * dEta / a;
             if (du > 0 && du < best) {
@@ -392,10 +391,10 @@ public final class StraightLineCraft implements Worldline {
         }
         LineState s = last.lo();
         if (a > 0) {
-            double lineLimit = C * s.timeSeconds() - s.along() + Constants.C2 / a * FastMath.exp(-s.rapidity());
+            double lineLimit = C * s.timeSeconds() - s.along() + Constants.C2 / a * Math.exp(-s.rapidity());
             return Optional.of(new Asymptote(heading, lineLimit - heading.dot(origin)));
         }
-        double lineLimit = C * s.timeSeconds() + s.along() + Constants.C2 / -a * FastMath.exp(s.rapidity());
+        double lineLimit = C * s.timeSeconds() + s.along() + Constants.C2 / -a * Math.exp(s.rapidity());
         return Optional.of(new Asymptote(heading.times(-1), lineLimit + heading.dot(origin)));
     }
 
