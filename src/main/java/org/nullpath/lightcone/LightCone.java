@@ -29,11 +29,15 @@ import org.nullpath.worldline.Worldline;
  *   <li>an inertial partner: the quadratic {@code |d0 + v T| = c T} in a cancellation-free form;</li>
  *   <li>a straight-line craft with the other event on its flight line: closed forms in the null
  *   coordinates {@code c t -+ s}, walked leg by leg ({@link StraightLineCraft#walkU});</li>
- *   <li>anything else: a bracketed Hipparchus Brent solver on F(T), to a relative accuracy of
- *   {@value #RELATIVE_ACCURACY} in T.</li>
+ *   <li>a straight-line craft with the other event off its flight line: A B = rho^2 in null-coordinate
+ *   offsets, solved in the craft's proper time by a bracketed Hipparchus Brent solver (see
+ *   {@code futureOffLine});</li>
+ *   <li>any other {@link Worldline} implementation (none ships today): a bracketed Brent solver on F(T),
+ *   to a relative accuracy of {@value #RELATIVE_ACCURACY} in T.</li>
  * </ul>
- * Accuracy: closed forms to a few ulps; the bracketed solve to the stated tolerance. Both meet the
- * product's 1e-12 relative target wherever the light time is well conditioned.
+ * Accuracy: within a few times {@link Conditioning#ofLightTime} x 1.1e-16 relative, which meets the
+ * product's 1e-12 target wherever the light time is well conditioned (tests against 50- to 100-digit
+ * references).
  */
 public final class LightCone {
     /** Relative tolerance on the light time for the bracketed solve. */
