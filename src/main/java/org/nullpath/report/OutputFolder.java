@@ -14,7 +14,9 @@ import java.util.stream.Stream;
 /**
  * Writes a plan's files into a staging folder beside the target folder and moves them into place only
  * when everything has been written, so that after any failure the target is exactly as it was and
- * nothing is left beside it.
+ * nothing is left beside it. Files an earlier plan wrote into the same folder (listed in its
+ * summary.json) that this plan does not write are removed when it is moved into place; other files in
+ * the folder are left alone.
  */
 public final class OutputFolder implements AutoCloseable {
     private final Path target;
@@ -41,6 +43,43 @@ public final class OutputFolder implements AutoCloseable {
         return new OutputFolder(abs, staging);
     }
 
+    /** The names of the files staged so far, sorted. */
+    public List<String> stagedNames() throws IOException {
+        List<String> names = new ArrayList<>();
+        try (DirectoryStream<Path> ds = Files.newDirectoryStream(staging)) {
+            ds.forEach(p -> names.add(p.getFileName().toString()));
+        }
+        names.sort(Comparator.naturalOrder());
+        return names;
+    }
+
+    /**
+     * The files an earlier plan listed in its summary.json in {@code dir} (plain names only; nothing when
+     * there is no readable summary), so that files this plan no longer writes can be removed.
+     */
+    private static List<String> earlierPlanFiles(Path dir) {
+        Path summary = dir.resolve("summary.json");
+        List<String> names = new ArrayList<>();
+        if (!Files.isRegularFile(summary)) {
+            return names;
+        }
+        try {
+            com.fasterxml.jackson.databind.JsonNode files = new com.fasterxml.jackson.databind.ObjectMapper()
+                    .readTree(summary.toFile()).get(SummaryJson.FILES);
+            if (files != null && files.isArray()) {
+                for (com.fasterxml.jackson.databind.JsonNode f : files) {
+                    String n = f.asText();
+                    if (!n.isEmpty() && !n.contains("/") && !n.contains("\\") && !n.startsWith(".")) {
+                        names.add(n);
+                    }
+                }
+            }
+        } catch (IOException e) {
+            // not a summary we wrote: remove nothing
+        }
+        return names;
+    }
+
     /** The path to write a file named {@code name} to (inside the staging folder). */
     public Path file(String name) {
         return staging.resolve(name);
@@ -63,6 +102,12 @@ public final class OutputFolder implements AutoCloseable {
             ds.forEach(files::add);
         }
         files.sort(Comparator.naturalOrder());
+        List<String> staged = stagedNames();
+        for (String old : earlierPlanFiles(target)) {
+            if (!staged.contains(old)) {
+                Files.deleteIfExists(target.resolve(old)); // written by an earlier plan, not by this one
+            }
+        }
         for (Path f : files) {
             Path dest = target.resolve(f.getFileName().toString());
             try {

@@ -75,7 +75,6 @@ public final class PlanOutput {
             CsvTables.writeWindows(out.file("windows.csv"), windows);
         }
         Result result = new Result(tallies, exchanges, cutoffs, horizons, windows);
-        SummaryJson.write(out.file("summary.json"), s, result);
         if (report) {
             try {
                 HtmlReport.write(out.file("report.html"), s, result);
@@ -87,6 +86,9 @@ public final class PlanOutput {
                         + e.getClass().getSimpleName() + "); install a font package such as fonts-dejavu-core");
             }
         }
+        // last, so that it can list every file of this plan (a later plan into the same folder removes the
+        // ones it no longer writes)
+        SummaryJson.write(out.file("summary.json"), s, result, out.stagedNames());
         return result;
     }
 }

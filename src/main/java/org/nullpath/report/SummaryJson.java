@@ -25,7 +25,10 @@ final class SummaryJson {
     private SummaryJson() {
     }
 
-    static void write(Path file, Scenario s, PlanOutput.Result r) throws IOException {
+    /** The key under which summary.json lists the files of its plan. */
+    static final String FILES = "files";
+
+    static void write(Path file, Scenario s, PlanOutput.Result r, List<String> otherFiles) throws IOException {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("title", s.title());
         root.put("scenario", s.file().getFileName() == null ? s.file().toString() : s.file().getFileName().toString());
@@ -140,6 +143,10 @@ final class SummaryJson {
             windows.add(m);
         }
         root.put("windows", windows);
+        List<String> files = new ArrayList<>(otherFiles);
+        files.add(file.getFileName().toString());
+        files.sort(null);
+        root.put(FILES, files);
         new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), root);
     }
 

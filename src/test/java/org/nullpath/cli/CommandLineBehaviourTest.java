@@ -98,6 +98,26 @@ class CommandLineBehaviourTest {
     }
 
     @Test
+    void aLaterPlanIntoTheSameFolderRemovesTheFilesItNoLongerWritesButKeepsOthers() throws IOException {
+        Path out = tmp.resolve("shared");
+        assertEquals(0, PlanRun.run("plan", write("s.yaml", GOOD).toString(), "--out", out.toString()).exitCode());
+        assertTrue(Files.isRegularFile(out.resolve("down.csv")));
+        Files.writeString(out.resolve("notes.txt"), "mine");
+        String fewer = GOOD.replace("  down: {from: probe, to: home}\n", "")
+                .replace("  - {link: down, at: [1 d, 1 yr, 5 yr]}\n", "")
+                .replace("  - {name: ping, query: up, reply: down, turnaround: 1 h, first: 0 d, last: 1 yr, every: 30 d}\n", "")
+                .replace("exchanges:\n", "");
+        PlanRun.Outcome o = PlanRun.run("plan", write("t.yaml", fewer).toString(), "--out", out.toString());
+        assertEquals(0, o.exitCode(), o.err());
+        assertFalse(Files.exists(out.resolve("down.csv")), "the earlier plan's link file is gone");
+        assertFalse(Files.exists(out.resolve("exchanges-ping.csv")), "and its round trips");
+        assertTrue(Files.isRegularFile(out.resolve("up.csv")));
+        assertEquals("mine", Files.readString(out.resolve("notes.txt")), "files nullpath did not write stay");
+        String json = Files.readString(out.resolve("summary.json"));
+        assertTrue(json.contains("\"files\" : [ \"cutoffs.csv\""), json);
+    }
+
+    @Test
     void twoRunsGiveByteIdenticalFiles() throws IOException {
         Path s = write("s.yaml", GOOD);
         Path a = tmp.resolve("a");
