@@ -37,6 +37,7 @@ import org.nullpath.units.Constants;
 import org.nullpath.units.Dimension;
 import org.nullpath.units.Spelling;
 import org.nullpath.worldline.InertialWorldline;
+import org.nullpath.worldline.StraightLineCraft;
 
 /**
  * Reads a scenario file (contract.md, "Scenario file" and "Link budget additions") into a validated
@@ -445,7 +446,11 @@ public final class ScenarioLoader {
             }
             if (f.has("at")) {
                 List<Double> at = values.quantities(f.get("at"), f.path("at"), Dimension.TIME, "send times");
-                return link == null || at == null ? null : new Scenario.At(link.name(), List.copyOf(at));
+                if (link == null || at == null || !within(f, "at", link.from(),
+                        at.stream().mapToDouble(Double::doubleValue).max().orElse(0), "the last send")) {
+                    return null;
+                }
+                return new Scenario.At(link.name(), List.copyOf(at));
             }
             if (!series) {
                 f.problemHere("a message plan needs 'at: [times]', or 'first', 'last' and 'every'");
@@ -457,7 +462,24 @@ public final class ScenarioLoader {
             if (link == null || Double.isNaN(first) || Double.isNaN(last) || Double.isNaN(every)) {
                 return null;
             }
-            return new Scenario.Series(link.name(), first, last, every);
+            Scenario.Series plan = new Scenario.Series(link.name(), first, last, every);
+            long n = plan.count();
+            return n == 0 || within(f, "last", link.from(), plan.sendClock(n - 1), "the last send") ? plan : null;
+        }
+
+        /**
+         * False, with a problem at {@code key}, when {@code clock} on {@code node}'s clock lies beyond what
+         * double precision can hold for it (a craft whose open-ended burn passes rapidity 700 before then).
+         */
+        private boolean within(Fields f, String key, String node, double clock, String what) {
+            Scenario.Node n = node == null ? null : nodes.get(node);
+            if (n == null || !(n.worldline() instanceof StraightLineCraft craft) || !(clock > craft.maxClock())) {
+                return true;
+            }
+            f.problemAt(key, what + " (" + Values.format(clock) + " s on " + node + "'s clock) lies beyond the last"
+                    + " clock reading double precision can hold for it: its open-ended burn passes rapidity "
+                    + Values.format(StraightLineCraft.MAX_RAPIDITY) + " at " + Values.format(craft.maxClock()) + " s");
+            return false;
         }
 
         private static double every(Fields f) {
@@ -484,7 +506,8 @@ public final class ScenarioLoader {
             }
             LinkInfo link = linkRef(f, "link");
             double arriveBy = f.quantity("arrive-by", Dimension.TIME);
-            if (name == null || link == null || Double.isNaN(arriveBy)) {
+            if (name == null || link == null || Double.isNaN(arriveBy)
+                    || !within(f, "arrive-by", link.to(), arriveBy, "the deadline")) {
                 return null;
             }
             return new Scenario.Cutoff(name, link.name(), arriveBy);
@@ -540,6 +563,10 @@ public final class ScenarioLoader {
                     || Double.isNaN(every)) {
                 return null;
             }
+            long n = Scenario.seriesCount(first, last, every);
+            if (n > 0 && !within(f, "last", query.from(), first + (n - 1) * every, "the last query")) {
+                return null;
+            }
             return new Scenario.Exchange(name, query.name(), reply.name(), turnaround, first, last, every);
         }
 
@@ -561,7 +588,8 @@ public final class ScenarioLoader {
                         + Values.format(from) + " s)");
                 return null;
             }
-            if (link == null || Double.isNaN(from) || Double.isNaN(to)) {
+            if (link == null || Double.isNaN(from) || Double.isNaN(to)
+                    || !within(f, "to", link.from(), to, "the end of the scan")) {
                 return null;
             }
             return new Scenario.WindowScan(link.name(), from, to);
