@@ -114,6 +114,11 @@ public record Scenario(Path file, String title, Optional<Instant> epoch, Map<Str
         public long count() {
             return seriesCount(first, last, every);
         }
+
+        /** The k-th query's send clock on the querier's clock, 0 <= k < count. */
+        public double sendClock(long k) {
+            return first + k * every;
+        }
     }
 
     /** A send-clock range scanned for link windows. */

@@ -563,11 +563,10 @@ public final class ScenarioLoader {
                     || Double.isNaN(every)) {
                 return null;
             }
-            long n = Scenario.seriesCount(first, last, every);
-            if (n > 0 && !within(f, "last", query.from(), first + (n - 1) * every, "the last query")) {
-                return null;
-            }
-            return new Scenario.Exchange(name, query.name(), reply.name(), turnaround, first, last, every);
+            Scenario.Exchange exchange = new Scenario.Exchange(name, query.name(), reply.name(), turnaround, first, last,
+                    every);
+            long n = exchange.count();
+            return n == 0 || within(f, "last", query.from(), exchange.sendClock(n - 1), "the last query") ? exchange : null;
         }
 
         private Scenario.WindowScan window(Node item, String p) {

@@ -48,12 +48,17 @@ public final class Deadlines {
     public static List<HorizonRow> horizons(Scenario s) {
         List<HorizonRow> rows = new ArrayList<>();
         for (Scenario.Link link : s.links().values()) {
-            Horizon h = LightCone.horizon(s.nodes().get(link.from()).worldline(), s.nodes().get(link.to()).worldline());
-            rows.add(h.exists()
-                    ? new HorizonRow(link.name(), true, h.lastSend().clock(), h.lastSend().timeSeconds())
-                    : new HorizonRow(link.name(), false, Double.NaN, Double.NaN));
+            rows.add(horizonRow(link.name(), s.nodes().get(link.from()).worldline(), s.nodes().get(link.to()).worldline()));
         }
         return rows;
+    }
+
+    /** The horizon row of one link. */
+    static HorizonRow horizonRow(String link, Worldline sender, Worldline receiver) {
+        Horizon h = LightCone.horizon(sender, receiver);
+        return h.exists()
+                ? new HorizonRow(link, true, h.lastSend().clock(), h.lastSend().timeSeconds())
+                : new HorizonRow(link, false, Double.NaN, Double.NaN);
     }
 
     /** Runs one exchange plan, giving each round trip to {@code sink}; returns how many completed. */
@@ -65,7 +70,7 @@ public final class Deadlines {
         long n = e.count();
         long complete = 0;
         for (long k = 0; k < n; k++) {
-            double sendClock = e.first() + k * e.every();
+            double sendClock = e.sendClock(k);
             try {
                 complete += roundTrip(querier, responder, e, k, sendClock, sink) ? 1 : 0;
             } catch (ArithmeticException x) {

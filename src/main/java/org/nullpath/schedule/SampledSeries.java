@@ -4,8 +4,6 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 
-import org.nullpath.lightcone.Horizon;
-import org.nullpath.lightcone.LightCone;
 import org.nullpath.lightcone.SignalPath;
 import org.nullpath.link.Budget;
 import org.nullpath.link.Doppler;
@@ -88,10 +86,7 @@ public final class SampledSeries {
         Worldline sender = s.nodes().get(link.from()).worldline();
         Worldline receiver = s.nodes().get(link.to()).worldline();
         LinkTerms terms = link.terms().orElse(null);
-        Horizon h = LightCone.horizon(sender, receiver);
-        HorizonRow horizon = h.exists()
-                ? new HorizonRow(link.name(), true, h.lastSend().clock(), h.lastSend().timeSeconds())
-                : new HorizonRow(link.name(), false, Double.NaN, Double.NaN);
+        HorizonRow horizon = Deadlines.horizonRow(link.name(), sender, receiver);
         double[] range = plannedRange(s, link.name());
         if (range == null) {
             return new LinkSeries(link.name(), link.from(), link.to(), terms, false, Double.NaN, Double.NaN, horizon,
@@ -100,7 +95,7 @@ public final class SampledSeries {
         double lo = range[0];
         double hi = range[1];
         double[] clocks;
-        if (h.exists() && horizon.lastSendClock() <= hi) {
+        if (horizon.hasHorizon() && horizon.lastSendClock() <= hi) {
             double end = horizon.lastSendClock();
             clocks = lo < end ? towardsHorizon(lo, end, maxSamples) : new double[0];
         } else if (hi == lo) {
@@ -184,7 +179,7 @@ public final class SampledSeries {
             long n = e.count();
             if (e.query().equals(link) && n > 0) {
                 lo = Math.min(lo, e.first());
-                hi = Math.max(hi, e.first() + (n - 1) * e.every());
+                hi = Math.max(hi, e.sendClock(n - 1));
             }
         }
         return lo <= hi ? new double[] {lo, hi} : null;
