@@ -33,7 +33,7 @@ final class CheckCommand implements Callable<Integer> {
         if (s == null) {
             return Main.INPUT_ERROR;
         }
-        long stations = s.nodes().values().stream().filter(n -> n.kind() == Scenario.Kind.STATION).count();
+        long stations = TerminalSummary.stations(s);
         spec.commandLine().getOut().printf("%s: usable (%s, %d craft, %s, %s planned)%n", scenario,
                 TerminalSummary.count(stations, "station"), s.nodes().size() - stations,
                 TerminalSummary.count(s.links().size(), "link"),

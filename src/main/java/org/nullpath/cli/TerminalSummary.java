@@ -17,13 +17,18 @@ final class TerminalSummary {
     private TerminalSummary() {
     }
 
+    /** How many of the scenario's nodes are stations. */
+    static long stations(Scenario s) {
+        return s.nodes().values().stream().filter(n -> n.kind() == Scenario.Kind.STATION).count();
+    }
+
     /** "1 station", "2 stations". */
     static String count(long n, String noun) {
         return n + " " + noun + (n == 1 ? "" : "s");
     }
 
     static void print(PrintWriter out, Scenario s, PlanOutput.Result r, Path dir) {
-        long stations = s.nodes().values().stream().filter(n -> n.kind() == Scenario.Kind.STATION).count();
+        long stations = stations(s);
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
         out.printf("%s%n", s.title());
