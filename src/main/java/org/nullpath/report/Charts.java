@@ -215,20 +215,25 @@ final class Charts {
                 sub.addRangeMarker(m, Layer.FOREGROUND);
             }
             for (Mark mk : p.marks()) {
-                ValueMarker m = new ValueMarker(mk.x(), mk.colour(), stroke(mk.dash(), 1.4f));
-                m.setLabel(mk.label());
-                m.setLabelFont(NOTE_FONT);
-                m.setLabelPaint(mk.colour().darker());
-                m.setLabelBackgroundColor(new Color(255, 255, 255, 0));
-                m.setLabelAnchor(RectangleAnchor.TOP_LEFT);
-                m.setLabelTextAnchor(TextAnchor.TOP_RIGHT);
-                m.setLabelOffset(new RectangleInsets(4, 4, 4, 4));
-                sub.addDomainMarker(m, Layer.FOREGROUND);
+                sub.addDomainMarker(domainMarker(mk), Layer.FOREGROUND);
             }
             plot.add(sub, 1);
         }
         style(plot);
         return new Figure(id, render(chart(plot), id, title, WIDTH, HEIGHT), key);
+    }
+
+    /** A labelled vertical marker (a leg boundary, the horizon) on the horizontal axis. */
+    private static ValueMarker domainMarker(Mark mk) {
+        ValueMarker m = new ValueMarker(mk.x(), mk.colour(), stroke(mk.dash(), 1.4f));
+        m.setLabel(mk.label());
+        m.setLabelFont(NOTE_FONT);
+        m.setLabelPaint(mk.colour().darker());
+        m.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+        m.setLabelAnchor(RectangleAnchor.TOP_LEFT);
+        m.setLabelTextAnchor(TextAnchor.TOP_RIGHT);
+        m.setLabelOffset(new RectangleInsets(4, 4, 4, 4));
+        return m;
     }
 
     /** A single-panel chart with a linear vertical axis (the clock image). */
@@ -248,15 +253,7 @@ final class Charts {
                 linearAxis(yLabel, ys, 0.04, true, 6), renderer(lines));
         style(plot);
         for (Mark mk : marks) {
-            ValueMarker m = new ValueMarker(mk.x(), mk.colour(), stroke(mk.dash(), 1.4f));
-            m.setLabel(mk.label());
-            m.setLabelFont(NOTE_FONT);
-            m.setLabelPaint(mk.colour().darker());
-            m.setLabelBackgroundColor(new Color(255, 255, 255, 0));
-            m.setLabelAnchor(RectangleAnchor.TOP_LEFT);
-            m.setLabelTextAnchor(TextAnchor.TOP_RIGHT);
-            m.setLabelOffset(new RectangleInsets(4, 4, 4, 4));
-            plot.addDomainMarker(m, Layer.FOREGROUND);
+            plot.addDomainMarker(domainMarker(mk), Layer.FOREGROUND);
         }
         return new Figure(id, render(chart(plot), id, title, width, height), key);
     }
