@@ -16,6 +16,15 @@ import org.nullpath.worldline.State;
  */
 public record MotionFactor(double value, double minusOne) {
 
+    /** True when unit vectors {@code n} and {@code k} are parallel or antiparallel to within the on-line angle. */
+    public static boolean alongLine(Vec3 n, Vec3 k) {
+        return onLine(n.cross(k).normSquared());
+    }
+
+    private static boolean onLine(double sin2) {
+        return sin2 < LightCone.ON_LINE_ANGLE * LightCone.ON_LINE_ANGLE;
+    }
+
     /** The factor of the body in state {@code s} for the photon direction {@code k} (a unit vector). */
     public static MotionFactor of(State s, Vec3 k) {
         double eta = s.rapidity();
@@ -25,7 +34,7 @@ public record MotionFactor(double value, double minusOne) {
         Vec3 n = s.direction();
         double mu = n.dot(k);
         double sin2 = n.cross(k).normSquared();
-        if (sin2 < LightCone.ON_LINE_ANGLE * LightCone.ON_LINE_ANGLE) {
+        if (onLine(sin2)) {
             sin2 = 0;
             mu = Math.signum(mu);
         }

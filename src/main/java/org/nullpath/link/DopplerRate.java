@@ -1,6 +1,7 @@
 package org.nullpath.link;
 
 import org.nullpath.lightcone.LightCone;
+import org.nullpath.lightcone.MotionFactor;
 import org.nullpath.lightcone.SignalPath;
 import org.nullpath.units.Constants;
 import org.nullpath.worldline.State;
@@ -73,8 +74,7 @@ public final class DopplerRate {
         if (p.path().isZero()) {
             return 1;
         }
-        double sin2 = s.direction().cross(p.path().unit()).normSquared();
-        if (sin2 < LightCone.ON_LINE_ANGLE * LightCone.ON_LINE_ANGLE) {
+        if (MotionFactor.alongLine(s.direction(), p.path().unit())) {
             return Math.signum(s.direction().dot(p.path()));
         }
         return Double.NaN;
