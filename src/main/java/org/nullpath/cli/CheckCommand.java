@@ -4,8 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 
-import org.nullpath.scenario.Scenario;
-import org.nullpath.schedule.LinkSchedule;
+import org.nullpath.mission.Mission;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -29,15 +28,14 @@ final class CheckCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
-        Scenario s = Inputs.load(scenario, maxMessages, err);
+        Mission s = Inputs.load(scenario, maxMessages, err);
         if (s == null) {
             return Main.INPUT_ERROR;
         }
-        long stations = TerminalSummary.stations(s);
         spec.commandLine().getOut().printf("%s: usable (%s, %d craft, %s, %s planned)%n", scenario,
-                TerminalSummary.count(stations, "station"), s.nodes().size() - stations,
+                TerminalSummary.count(s.stations().size(), "station"), s.craft().size(),
                 TerminalSummary.count(s.links().size(), "link"),
-                TerminalSummary.count(LinkSchedule.plannedMessages(s), "message"));
+                TerminalSummary.count(s.plannedMessages(), "message"));
         return 0;
     }
 }

@@ -4,10 +4,9 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 
 import org.nullpath.scenario.Problem;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Mission;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
-import org.nullpath.schedule.LinkSchedule;
 
 /** Loading and checking a scenario for the commands, with errors printed one per line. */
 final class Inputs {
@@ -18,8 +17,8 @@ final class Inputs {
     static final long DEFAULT_MAX_MESSAGES = 50_000_000L;
 
     /** Loads and validates; on problems prints them and returns null. */
-    static Scenario load(Path file, long maxMessages, PrintWriter err) {
-        Scenario s;
+    static Mission load(Path file, long maxMessages, PrintWriter err) {
+        Mission s;
         try {
             s = ScenarioLoader.load(file);
         } catch (ScenarioException e) {
@@ -28,7 +27,7 @@ final class Inputs {
             }
             return null;
         }
-        long planned = LinkSchedule.plannedMessages(s);
+        long planned = s.plannedMessages();
         if (planned > maxMessages) {
             err.println(new Problem(file.toString(), 0, 0, "messages", planned + " messages planned, more than the cap of "
                     + maxMessages + " per plan (raise it with --max-messages)").render());

@@ -8,7 +8,7 @@ import java.util.concurrent.Callable;
 
 import org.nullpath.report.OutputFolder;
 import org.nullpath.report.PlanOutput;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Mission;
 import org.nullpath.schedule.RangeException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
@@ -43,7 +43,7 @@ final class PlanCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
-        Scenario s = Inputs.load(scenario, maxMessages, err);
+        Mission s = Inputs.load(scenario, maxMessages, err);
         if (s == null) {
             return Main.INPUT_ERROR;
         }

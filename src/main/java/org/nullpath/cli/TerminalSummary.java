@@ -5,7 +5,8 @@ import java.nio.file.Path;
 
 import org.nullpath.report.PlanOutput;
 import org.nullpath.report.Readable;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Link;
+import org.nullpath.mission.Mission;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.HorizonRow;
@@ -17,28 +18,23 @@ final class TerminalSummary {
     private TerminalSummary() {
     }
 
-    /** How many of the scenario's nodes are stations. */
-    static long stations(Scenario s) {
-        return s.nodes().values().stream().filter(n -> n.kind() == Scenario.Kind.STATION).count();
-    }
-
     /** "1 station", "2 stations". */
     static String count(long n, String noun) {
         return n + " " + noun + (n == 1 ? "" : "s");
     }
 
-    static void print(PrintWriter out, Scenario s, PlanOutput.Result r, Path dir) {
-        long stations = stations(s);
+    static void print(PrintWriter out, Mission s, PlanOutput.Result r, Path dir) {
+        long stations = s.stations().size();
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
         out.printf("%s%n", s.title());
         out.printf("  %s, %d craft, %s; %s, %d delivered, %d never arrive%n", count(stations, "station"),
-                s.nodes().size() - stations, count(s.links().size(), "link"), count(messages, "message"),
+                s.craft().size(), count(s.links().size(), "link"), count(messages, "message"),
                 messages - never, never);
         for (LinkTally t : r.links()) {
-            Scenario.Link l = s.links().get(t.link());
+            Link l = s.links().get(t.link());
             out.printf("  link %-12s %s -> %s: %d sent, %d arrive; light time %s to %s; Doppler %s to %s%n",
-                    t.link(), l.from(), l.to(), t.messages(), t.delivered(), Readable.time(t.minLightTime()),
+                    t.link(), l.from().name(), l.to().name(), t.messages(), t.delivered(), Readable.time(t.minLightTime()),
                     Readable.time(t.maxLightTime()), Readable.number(t.minDoppler()), Readable.number(t.maxDoppler()));
         }
         for (LinkTally t : r.links()) {

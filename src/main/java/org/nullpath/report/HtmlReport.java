@@ -9,7 +9,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Link;
+import org.nullpath.mission.Mission;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.DiagramTraces;
@@ -36,12 +37,12 @@ public final class HtmlReport {
     }
 
     /** Writes the report of a finished plan to {@code file}. */
-    public static void write(Path file, Scenario s, PlanOutput.Result result) throws IOException {
+    public static void write(Path file, Mission s, PlanOutput.Result result) throws IOException {
         Files.writeString(file, render(s, result), StandardCharsets.UTF_8);
     }
 
     /** The whole page. */
-    static String render(Scenario s, PlanOutput.Result r) {
+    static String render(Mission s, PlanOutput.Result r) {
         List<SampledSeries.LinkSeries> series = SampledSeries.of(s);
         DiagramTraces.Diagram diagram = SpacetimeChart.layout(s, series);
         StringBuilder h = new StringBuilder(1 << 20);
@@ -62,15 +63,15 @@ public final class HtmlReport {
         return h.toString();
     }
 
-    private static void masthead(StringBuilder h, Scenario s, PlanOutput.Result r) {
-        long stations = s.nodes().values().stream().filter(n -> n.kind() == Scenario.Kind.STATION).count();
+    private static void masthead(StringBuilder h, Mission s, PlanOutput.Result r) {
+        long stations = s.stations().size();
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
-        String file = s.file().getFileName() == null ? s.file().toString() : s.file().getFileName().toString();
+        String file = s.source().fileName();
         h.append("<header class=\"masthead\">\n<p class=\"kicker\">nullpath \u00b7 plan report</p>\n<h1 id=\"title\">")
                 .append(Html.escape(s.title())).append("</h1>\n<p class=\"meta\">scenario <code>")
                 .append(Html.escape(file)).append("</code> \u00b7 ").append(stations).append(" station")
-                .append(stations == 1 ? "" : "s").append(", ").append(s.nodes().size() - stations).append(" craft, ")
+                .append(stations == 1 ? "" : "s").append(", ").append(s.craft().size()).append(" craft, ")
                 .append(s.links().size()).append(" link").append(s.links().size() == 1 ? "" : "s").append(" \u00b7 ")
                 .append(messages).append(" planned messages, ").append(messages - never).append(" delivered, ")
                 .append(never).append(" never arrive");
@@ -78,10 +79,10 @@ public final class HtmlReport {
         h.append("</p>\n</header>\n");
     }
 
-    private static void contents(StringBuilder h, Scenario s) {
+    private static void contents(StringBuilder h, Mission s) {
         h.append("<nav class=\"contents\" aria-label=\"contents\">\n<ol>\n")
                 .append("<li><a href=\"#spacetime\">Spacetime diagram</a></li>\n<li><a href=\"#links\">Links</a><ol>\n");
-        for (Scenario.Link l : s.links().values()) {
+        for (Link l : s.links().values()) {
             h.append("<li><a href=\"#link-").append(Html.id(l.name())).append("\">").append(Html.escape(l.name()))
                     .append("</a></li>\n");
         }
@@ -89,12 +90,12 @@ public final class HtmlReport {
                 .append("<li><a href=\"#scenario\">The scenario as read</a></li>\n</ol>\n</nav>\n");
     }
 
-    private static void diagramSection(StringBuilder h, Scenario s, DiagramTraces.Diagram d) {
+    private static void diagramSection(StringBuilder h, Mission s, DiagramTraces.Diagram d) {
         List<String> links = new ArrayList<>();
         Map<String, String> ends = new LinkedHashMap<>();
-        for (Scenario.Link l : s.links().values()) {
+        for (Link l : s.links().values()) {
             links.add(l.name());
-            ends.put(l.name(), l.from() + " \u2192 " + l.to());
+            ends.put(l.name(), l.from().name() + " \u2192 " + l.to().name());
         }
         String title = "Spacetime diagram of " + s.title() + ": mission time against distance along the flight line";
         Charts.Figure f = SpacetimeChart.of(d, links, ends, "svg-spacetime", title);
@@ -112,7 +113,7 @@ public final class HtmlReport {
         h.append("</figcaption>\n</figure>\n</section>\n");
     }
 
-    private static void linkSections(StringBuilder h, Scenario s, PlanOutput.Result r,
+    private static void linkSections(StringBuilder h, Mission s, PlanOutput.Result r,
                                      List<SampledSeries.LinkSeries> series) {
         h.append("<section id=\"links\">\n<h2>Links</h2>\n");
         if (series.isEmpty()) {
@@ -282,20 +283,10 @@ public final class HtmlReport {
         h.append("</section>\n");
     }
 
-    private static void scenarioSection(StringBuilder h, Scenario s) {
+    private static void scenarioSection(StringBuilder h, Mission s) {
         h.append("<section id=\"scenario\">\n<h2>The scenario as read</h2>\n");
-        String text;
-        try {
-            text = Files.readString(s.file(), StandardCharsets.UTF_8);
-        } catch (IOException | RuntimeException e) {
-            text = null;
-        }
-        if (text == null) {
-            h.append("<p class=\"empty\">The scenario file could not be read again for this page.</p>\n");
-        } else {
-            h.append("<p>The file exactly as planned, with its units.</p>\n<pre class=\"scenario\">")
-                    .append(Html.escape(text)).append("</pre>\n");
-        }
+        h.append("<p>The file exactly as planned, with its units.</p>\n<pre class=\"scenario\">")
+                .append(Html.escape(s.source().text())).append("</pre>\n");
         h.append("</section>\n");
     }
 }

@@ -4,7 +4,10 @@ import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
 
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Exchange;
+import org.nullpath.mission.Link;
+import org.nullpath.mission.Mission;
+import org.nullpath.mission.WindowScan;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.Deadlines;
 import org.nullpath.schedule.HorizonRow;
@@ -40,7 +43,7 @@ public final class PlanOutput {
     }
 
     /** Computes and writes everything, report.html included; the caller commits or discards the folder. */
-    public static Result write(Scenario s, OutputFolder out) throws IOException {
+    public static Result write(Mission s, OutputFolder out) throws IOException {
         return write(s, out, true);
     }
 
@@ -48,9 +51,9 @@ public final class PlanOutput {
      * Computes and writes everything; report.html only when {@code report} is true. The caller commits or
      * discards the folder.
      */
-    public static Result write(Scenario s, OutputFolder out, boolean report) throws IOException {
+    public static Result write(Mission s, OutputFolder out, boolean report) throws IOException {
         List<LinkTally> tallies = new ArrayList<>();
-        for (Scenario.Link link : s.links().values()) {
+        for (Link link : s.links().values()) {
             try (CsvTables.MessageWriter w = new CsvTables.MessageWriter(out.file(link.name() + ".csv"),
                     link.terms().orElse(null), s.epoch().orElse(null))) {
                 tallies.add(LinkSchedule.run(s, link, w::write));
@@ -61,15 +64,15 @@ public final class PlanOutput {
         List<HorizonRow> horizons = Deadlines.horizons(s);
         CsvTables.writeHorizons(out.file("horizons.csv"), horizons, s.epoch().orElse(null));
         List<ExchangeTally> exchanges = new ArrayList<>();
-        for (Scenario.Exchange e : s.exchanges()) {
+        for (Exchange e : s.exchanges()) {
             try (CsvTables.ExchangeWriter w = new CsvTables.ExchangeWriter(out.file("exchanges-" + e.name() + ".csv"))) {
-                long complete = Deadlines.exchange(s, e, w::write);
+                long complete = Deadlines.exchange(e, w::write);
                 exchanges.add(new ExchangeTally(e.name(), e.count(), complete));
             }
         }
         List<WindowRow> windows = new ArrayList<>();
-        for (Scenario.WindowScan w : s.windows()) {
-            windows.addAll(Windows.scan(s, w));
+        for (WindowScan w : s.windows()) {
+            windows.addAll(Windows.scan(w));
         }
         if (!s.windows().isEmpty()) {
             CsvTables.writeWindows(out.file("windows.csv"), windows);

@@ -20,7 +20,7 @@ import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.ui.TextAnchor;
 import org.jfree.data.xy.XYSeries;
 import org.jfree.data.xy.XYSeriesCollection;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Mission;
 import org.nullpath.schedule.DiagramTraces;
 import org.nullpath.schedule.SampledSeries;
 import org.nullpath.units.Constants;
@@ -50,7 +50,7 @@ final class SpacetimeChart {
      * The diagram's ranges and the drawing's width: between {@link #MIN_WIDTH} and {@link #WIDTH}, as near
      * the content's own proportions as that allows, so that little of the drawing is left empty.
      */
-    static DiagramTraces.Diagram layout(Scenario s, List<SampledSeries.LinkSeries> series) {
+    static DiagramTraces.Diagram layout(Mission s, List<SampledSeries.LinkSeries> series) {
         Rectangle2D a = dataArea(WIDTH);
         double overhead = WIDTH - a.getWidth();
         double height = a.getHeight();

@@ -9,7 +9,10 @@ import java.util.Map;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Craft;
+import org.nullpath.mission.Link;
+import org.nullpath.mission.Mission;
+import org.nullpath.mission.Station;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.HorizonRow;
@@ -28,19 +31,18 @@ final class SummaryJson {
     /** The key under which summary.json lists the files of its plan. */
     static final String FILES = "files";
 
-    static void write(Path file, Scenario s, PlanOutput.Result r, List<String> otherFiles) throws IOException {
+    static void write(Path file, Mission s, PlanOutput.Result r, List<String> otherFiles) throws IOException {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("title", s.title());
-        root.put("scenario", s.file().getFileName() == null ? s.file().toString() : s.file().getFileName().toString());
+        root.put("scenario", s.source().fileName());
         root.put("epoch", s.epoch().map(Object::toString).orElse(null));
         List<Object> craft = new ArrayList<>();
         List<Object> stations = new ArrayList<>();
-        for (Scenario.Node n : s.nodes().values()) {
-            if (n.kind() == Scenario.Kind.STATION) {
-                stations.add(n.name());
-                continue;
-            }
-            StraightLineCraft c = (StraightLineCraft) n.worldline();
+        for (Station st : s.stations()) {
+            stations.add(st.name());
+        }
+        for (Craft n : s.craft()) {
+            StraightLineCraft c = n.worldline();
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("name", n.name());
             List<Object> legs = new ArrayList<>();
@@ -69,11 +71,11 @@ final class SummaryJson {
         root.put("craft", craft);
         List<Object> links = new ArrayList<>();
         for (LinkTally t : r.links()) {
-            Scenario.Link l = s.links().get(t.link());
+            Link l = s.links().get(t.link());
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("name", t.link());
-            m.put("from", l.from());
-            m.put("to", l.to());
+            m.put("from", l.from().name());
+            m.put("to", l.to().name());
             m.put("messages", t.messages());
             m.put("delivered", t.delivered());
             m.put("never", t.never());

@@ -4,6 +4,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
+import org.nullpath.mission.Craft;
+import org.nullpath.mission.Station;
 import org.nullpath.scenario.YamlTree.Entry;
 import org.nullpath.scenario.YamlTree.ListNode;
 import org.nullpath.scenario.YamlTree.MapNode;
@@ -43,7 +45,7 @@ final class CraftReader {
     }
 
     /** The craft, or null when it has problems (all of them added). */
-    static Scenario.Node read(String name, Node node, String path, Values values, Map<String, Scenario.Node> stations,
+    static Craft read(String name, Node node, String path, Values values, Map<String, Station> stations,
                               java.nio.file.Path scenarioFile) {
         Problems problems = values.problems();
         Fields f = Fields.of(node, path, values, "a craft", KEYS);
@@ -80,7 +82,7 @@ final class CraftReader {
         }
         try {
             StraightLineCraft craft = StraightLineCraft.of(start, heading, startTime, startClock, startSpeed, legs);
-            return new Scenario.Node(name, Scenario.Kind.CRAFT, craft, List.copyOf(legs));
+            return new Craft(name, craft, legs);
         } catch (WorldlineException e) {
             int i = e.legIndex();
             if (i >= 0 && i < sites.size()) {
@@ -98,7 +100,7 @@ final class CraftReader {
 
     /** Reads the legs into {@code legs}; false when any has a problem. */
     /** What profiled legs need from the rest of the scenario. */
-    private record Context(Map<String, Scenario.Node> stations, java.nio.file.Path scenarioFile) {
+    private record Context(Map<String, Station> stations, java.nio.file.Path scenarioFile) {
     }
 
     private static boolean legs(Fields f, Values values, List<LegSpec> legs, List<LegSite> sites, Context context) {

@@ -14,6 +14,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
 import org.nullpath.scenario.YamlTree.Node;
+import org.nullpath.mission.Station;
 import org.nullpath.units.Constants;
 import org.nullpath.units.Dimension;
 import org.nullpath.units.Spelling;
@@ -106,7 +107,7 @@ final class ProfiledLegReader {
     }
 
     static LegSpec sail(Node n, String path, Values values, CraftReader.LegSite[] site,
-                        Map<String, Scenario.Node> nodes) {
+                        Map<String, Station> stations) {
         Fields f = Fields.of(n, path, values, "a sail leg", CraftReader.SAIL_KEYS);
         if (!f.ok()) {
             return null;
@@ -114,15 +115,14 @@ final class ProfiledLegReader {
         String from = f.text("beam-from", "the name of the station that beams");
         InertialWorldline station = null;
         if (from != null) {
-            Scenario.Node node = nodes.get(from);
-            if (node == null || node.kind() != Scenario.Kind.STATION) {
-                List<String> names = new ArrayList<>();
-                nodes.values().stream().filter(x -> x.kind() == Scenario.Kind.STATION).forEach(x -> names.add(x.name()));
+            Station node = stations.get(from);
+            if (node == null) {
+                List<String> names = new ArrayList<>(stations.keySet());
                 String hint = Spelling.closest(from, names);
                 f.problemAt("beam-from", "'" + from + "' is not a station of this scenario"
                         + (hint != null ? " (did you mean '" + hint + "'?)" : ""));
             } else {
-                station = (InertialWorldline) node.worldline();
+                station = node.worldline();
             }
         }
         double power = f.quantity("beam-power", Dimension.POWER);

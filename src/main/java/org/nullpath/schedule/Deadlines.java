@@ -7,7 +7,10 @@ import java.util.function.Consumer;
 import org.nullpath.lightcone.Horizon;
 import org.nullpath.lightcone.LightCone;
 import org.nullpath.lightcone.SignalPath;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Cutoff;
+import org.nullpath.mission.Exchange;
+import org.nullpath.mission.Link;
+import org.nullpath.mission.Mission;
 import org.nullpath.worldline.State;
 import org.nullpath.worldline.Worldline;
 
@@ -21,13 +24,12 @@ public final class Deadlines {
      * the sender's worldline at the latest send. Worldlines are defined for all times, so every deadline is
      * reachable; a latest send before mission time 0 is flagged.
      */
-    public static List<CutoffRow> cutoffs(Scenario s) {
+    public static List<CutoffRow> cutoffs(Mission mission) {
         List<CutoffRow> rows = new ArrayList<>();
-        for (int i = 0; i < s.cutoffs().size(); i++) {
-            Scenario.Cutoff c = s.cutoffs().get(i);
-            Scenario.Link link = s.links().get(c.link());
-            Worldline sender = s.nodes().get(link.from()).worldline();
-            Worldline receiver = s.nodes().get(link.to()).worldline();
+        for (int i = 0; i < mission.cutoffs().size(); i++) {
+            Cutoff c = mission.cutoffs().get(i);
+            Worldline sender = c.link().sender();
+            Worldline receiver = c.link().receiver();
             SignalPath p;
             try {
                 p = LightCone.past(receiver.atClock(c.arriveBy()), sender);
@@ -38,17 +40,17 @@ public final class Deadlines {
             // every worldline here is defined for all times (stations always, craft coasting before their
             // first leg), so the past cone always meets the sender: the deadline is reachable, though the
             // latest send may lie before the mission starts (flagged in its own column)
-            rows.add(new CutoffRow(c.name(), c.link(), c.arriveBy(), send.clock(), send.timeSeconds(), true,
+            rows.add(new CutoffRow(c.name(), c.link().name(), c.arriveBy(), send.clock(), send.timeSeconds(), true,
                     send.timeSeconds() < 0));
         }
         return rows;
     }
 
     /** One horizon row per link, in file order. */
-    public static List<HorizonRow> horizons(Scenario s) {
+    public static List<HorizonRow> horizons(Mission mission) {
         List<HorizonRow> rows = new ArrayList<>();
-        for (Scenario.Link link : s.links().values()) {
-            rows.add(horizonRow(link.name(), s.nodes().get(link.from()).worldline(), s.nodes().get(link.to()).worldline()));
+        for (Link link : mission.links().values()) {
+            rows.add(horizonRow(link.name(), link.sender(), link.receiver()));
         }
         return rows;
     }
@@ -62,11 +64,9 @@ public final class Deadlines {
     }
 
     /** Runs one exchange plan, giving each round trip to {@code sink}; returns how many completed. */
-    public static long exchange(Scenario s, Scenario.Exchange e, Consumer<ExchangeRow> sink) {
-        Scenario.Link query = s.links().get(e.query());
-        Scenario.Link reply = s.links().get(e.reply());
-        Worldline querier = s.nodes().get(query.from()).worldline();
-        Worldline responder = s.nodes().get(query.to()).worldline();
+    public static long exchange(Exchange e, Consumer<ExchangeRow> sink) {
+        Worldline querier = e.query().sender();
+        Worldline responder = e.query().receiver();
         long n = e.count();
         long complete = 0;
         for (long k = 0; k < n; k++) {
@@ -81,7 +81,7 @@ public final class Deadlines {
         return complete;
     }
 
-    private static boolean roundTrip(Worldline querier, Worldline responder, Scenario.Exchange e, long k,
+    private static boolean roundTrip(Worldline querier, Worldline responder, Exchange e, long k,
                                      double sendClock, Consumer<ExchangeRow> sink) {
         State qs = querier.atClock(sendClock);
         SignalPath q = LightCone.future(qs, responder);

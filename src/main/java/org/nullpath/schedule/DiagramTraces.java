@@ -7,7 +7,9 @@ import java.util.Locale;
 import java.util.Optional;
 
 import org.nullpath.lightcone.SignalPath;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Craft;
+import org.nullpath.mission.Mission;
+import org.nullpath.mission.Node;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
 import org.nullpath.worldline.Asymptote;
@@ -127,10 +129,10 @@ public final class DiagramTraces {
      * Builds the diagram for a drawing area of the given width over height.
      *
      * @param s               the scenario
-     * @param series          the links' sampled series ({@link SampledSeries#of(Scenario)})
+     * @param series          the links' sampled series ({@link SampledSeries#of(Mission)})
      * @param widthOverHeight the drawing area's width over its height (both in the same length unit)
      */
-    public static Diagram of(Scenario s, List<SampledSeries.LinkSeries> series, double widthOverHeight) {
+    public static Diagram of(Mission s, List<SampledSeries.LinkSeries> series, double widthOverHeight) {
         return of(s, series, widthOverHeight, widthOverHeight);
     }
 
@@ -139,7 +141,7 @@ public final class DiagramTraces {
      * the one nearest the content's own proportions (its distance span over its c t span) is taken, and
      * the other range widened to match. {@link Diagram#widthOverHeight()} says which was taken.
      */
-    public static Diagram of(Scenario s, List<SampledSeries.LinkSeries> series, double minWidthOverHeight,
+    public static Diagram of(Mission s, List<SampledSeries.LinkSeries> series, double minWidthOverHeight,
                              double maxWidthOverHeight) {
         if (!(minWidthOverHeight > 0) || !(maxWidthOverHeight >= minWidthOverHeight)
                 || !Double.isFinite(maxWidthOverHeight)) {
@@ -148,12 +150,10 @@ public final class DiagramTraces {
         }
         String axisCraft = null;
         Vec3 axis = new Vec3(1, 0, 0);
-        for (Scenario.Node n : s.nodes().values()) {
-            if (n.kind() == Scenario.Kind.CRAFT) {
-                axisCraft = n.name();
-                axis = n.worldline().atTime(0).direction().unit();
-                break;
-            }
+        if (!s.craft().isEmpty()) {
+            Craft c = s.craft().get(0);
+            axisCraft = c.name();
+            axis = c.worldline().atTime(0).direction().unit();
         }
 
         // rays and the extent of planned activity
@@ -167,8 +167,8 @@ public final class DiagramTraces {
             if (!ls.hasPlannedSends()) {
                 continue;
             }
-            Worldline sender = s.nodes().get(ls.from()).worldline();
-            Worldline receiver = s.nodes().get(ls.to()).worldline();
+            Worldline sender = ls.route().sender();
+            Worldline receiver = ls.route().receiver();
             first = Math.min(first, sender.atClock(ls.firstSendClock()).timeSeconds());
             base = Math.max(base, sender.atClock(ls.lastSendClock()).timeSeconds());
             Optional<Asymptote> asymptote = receiver.asymptote();
@@ -196,17 +196,16 @@ public final class DiagramTraces {
             }
         }
         List<LegMark> marks = new ArrayList<>();
-        for (Scenario.Node n : s.nodes().values()) {
-            if (n.worldline() instanceof StraightLineCraft craft) {
-                List<LegSpan> legs = craft.legs();
-                for (LegSpan span : legs) {
-                    marks.add(mark(n.name(), span.index() + 1, kindOf(span.spec()),
-                            span.spec().accelerationMetresPerSecond2(), craft, span.start().timeSeconds(), axis));
-                }
-                if (!legs.isEmpty() && !legs.get(legs.size() - 1).openEnded()) {
-                    LegSpan last = legs.get(legs.size() - 1);
-                    marks.add(mark(n.name(), last.index() + 2, "coast", 0.0, craft, last.end().timeSeconds(), axis));
-                }
+        for (Craft n : s.craft()) {
+            StraightLineCraft craft = n.worldline();
+            List<LegSpan> legs = craft.legs();
+            for (LegSpan span : legs) {
+                marks.add(mark(n.name(), span.index() + 1, kindOf(span.spec()),
+                        span.spec().accelerationMetresPerSecond2(), craft, span.start().timeSeconds(), axis));
+            }
+            if (!legs.isEmpty() && !legs.get(legs.size() - 1).openEnded()) {
+                LegSpan last = legs.get(legs.size() - 1);
+                marks.add(mark(n.name(), last.index() + 2, "coast", 0.0, craft, last.end().timeSeconds(), axis));
             }
         }
         for (LegMark m : marks) {
@@ -281,7 +280,7 @@ public final class DiagramTraces {
             if (!ls.horizon().hasHorizon()) {
                 continue;
             }
-            Optional<Asymptote> a = s.nodes().get(ls.to()).worldline().asymptote();
+            Optional<Asymptote> a = ls.route().receiver().asymptote();
             if (a.isPresent()) {
                 lines.add(new NullLine(ls.link(), ls.to(), a.get().direction().dot(axis), a.get().limitMetres()));
             }
@@ -307,9 +306,9 @@ public final class DiagramTraces {
         return spec.getClass().getSimpleName().toLowerCase(Locale.ROOT);
     }
 
-    private static List<Trace> traces(Scenario s, Vec3 axis, double first, double last, List<LegMark> marks) {
+    private static List<Trace> traces(Mission s, Vec3 axis, double first, double last, List<LegMark> marks) {
         List<Trace> out = new ArrayList<>();
-        for (Scenario.Node n : s.nodes().values()) {
+        for (Node n : s.nodes().values()) {
             List<Double> times = new ArrayList<>();
             for (int i = 0; i <= TRACE_POINTS - 1; i++) {
                 times.add(first + (last - first) * i / (TRACE_POINTS - 1));
@@ -324,7 +323,7 @@ public final class DiagramTraces {
             for (int i = 0; i < t.length; i++) {
                 along[i] = axis.dot(n.worldline().atTime(t[i]).position());
             }
-            out.add(new Trace(n.name(), n.kind() == Scenario.Kind.CRAFT, t, along));
+            out.add(new Trace(n.name(), n.isCraft(), t, along));
         }
         return out;
     }

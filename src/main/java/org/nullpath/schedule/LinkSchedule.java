@@ -11,7 +11,8 @@ import org.nullpath.link.Doppler;
 import org.nullpath.link.DopplerRate;
 import org.nullpath.link.LinkBudget;
 import org.nullpath.link.LinkTerms;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Link;
+import org.nullpath.mission.Mission;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.worldline.State;
 import org.nullpath.worldline.Worldline;
@@ -26,23 +27,6 @@ public final class LinkSchedule {
 
     /** Light times whose condition number times the unit roundoff exceeds this are counted as ill-conditioned. */
     public static final double ILL_CONDITIONED = 1e-12;
-
-    /** Total messages the scenario plans (message plans plus two per exchange round trip). */
-    public static long plannedMessages(Scenario s) {
-        long n = 0;
-        for (Scenario.MessagePlan p : s.messages()) {
-            n = saturatingAdd(n, p.count());
-        }
-        for (Scenario.Exchange e : s.exchanges()) {
-            n = saturatingAdd(n, saturatingAdd(e.count(), e.count()));
-        }
-        return n;
-    }
-
-    private static long saturatingAdd(long a, long b) {
-        long r = a + b;
-        return r < 0 ? Long.MAX_VALUE : r;
-    }
 
     /**
      * One message fully evaluated: its light path, the bodies' motion factors for its photon direction,
@@ -84,12 +68,12 @@ public final class LinkSchedule {
     }
 
     /** Runs the schedule of {@code link}, giving each row to {@code sink}; returns the tally. */
-    public static LinkTally run(Scenario s, Scenario.Link link, Consumer<MessageRow> sink) {
-        Worldline sender = s.nodes().get(link.from()).worldline();
-        Worldline receiver = s.nodes().get(link.to()).worldline();
+    public static LinkTally run(Mission mission, Link link, Consumer<MessageRow> sink) {
+        Worldline sender = link.sender();
+        Worldline receiver = link.receiver();
         LinkTerms terms = link.terms().orElse(null);
         BudgetTally budgets = terms == null ? null : new BudgetTally(terms.carrierHz());
-        SendOrder order = new SendOrder(SendOrder.plansOf(s, link.name()));
+        SendOrder order = new SendOrder(mission.plansOn(link));
         long index = 0;
         long delivered = 0;
         long illConditioned = 0;

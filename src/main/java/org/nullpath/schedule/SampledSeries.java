@@ -8,7 +8,10 @@ import org.nullpath.lightcone.SignalPath;
 import org.nullpath.link.Budget;
 import org.nullpath.link.Doppler;
 import org.nullpath.link.LinkTerms;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Exchange;
+import org.nullpath.mission.Link;
+import org.nullpath.mission.MessagePlan;
+import org.nullpath.mission.Mission;
 import org.nullpath.worldline.Worldline;
 
 /**
@@ -60,9 +63,28 @@ public final class SampledSeries {
      * @param skipped          sampled send clocks whose signal could not be computed in double precision
      * @param samples          delivered samples in send order, at most {@value #MAX_SAMPLES}
      */
-    public record LinkSeries(String link, String from, String to, LinkTerms terms, boolean hasPlannedSends,
-                             double firstSendClock, double lastSendClock, HorizonRow horizon, int skipped,
-                             List<Sample> samples) {
+    public record LinkSeries(Link route, boolean hasPlannedSends, double firstSendClock, double lastSendClock,
+                             HorizonRow horizon, int skipped, List<Sample> samples) {
+        /** The link's name. */
+        public String link() {
+            return route.name();
+        }
+
+        /** The sender's name. */
+        public String from() {
+            return route.from().name();
+        }
+
+        /** The receiver's name. */
+        public String to() {
+            return route.to().name();
+        }
+
+        /** The link's terms, null when it has none. */
+        public LinkTerms terms() {
+            return route.terms().orElse(null);
+        }
+
         /** True when sends late in the planned range never arrive (the horizon falls inside it). */
         public boolean horizonCutsRange() {
             return hasPlannedSends && horizon.hasHorizon() && horizon.lastSendClock() <= lastSendClock;
@@ -70,27 +92,26 @@ public final class SampledSeries {
     }
 
     /** The sampled series of every link, in file order. */
-    public static List<LinkSeries> of(Scenario s) {
+    public static List<LinkSeries> of(Mission mission) {
         List<LinkSeries> out = new ArrayList<>();
-        for (Scenario.Link link : s.links().values()) {
-            out.add(of(s, link, MAX_SAMPLES));
+        for (Link link : mission.links().values()) {
+            out.add(of(mission, link, MAX_SAMPLES));
         }
         return Collections.unmodifiableList(out);
     }
 
     /** The sampled series of one link with at most {@code maxSamples} (at least 2) send clocks. */
-    public static LinkSeries of(Scenario s, Scenario.Link link, int maxSamples) {
+    public static LinkSeries of(Mission mission, Link link, int maxSamples) {
         if (maxSamples < 2) {
             throw new IllegalArgumentException("at least two samples are needed, got " + maxSamples);
         }
-        Worldline sender = s.nodes().get(link.from()).worldline();
-        Worldline receiver = s.nodes().get(link.to()).worldline();
+        Worldline sender = link.sender();
+        Worldline receiver = link.receiver();
         LinkTerms terms = link.terms().orElse(null);
         HorizonRow horizon = Deadlines.horizonRow(link.name(), sender, receiver);
-        double[] range = plannedRange(s, link.name());
+        double[] range = plannedRange(mission, link);
         if (range == null) {
-            return new LinkSeries(link.name(), link.from(), link.to(), terms, false, Double.NaN, Double.NaN, horizon,
-                    0, List.of());
+            return new LinkSeries(link, false, Double.NaN, Double.NaN, horizon, 0, List.of());
         }
         double lo = range[0];
         double hi = range[1];
@@ -124,8 +145,7 @@ public final class SampledSeries {
                 skipped++;
             }
         }
-        return new LinkSeries(link.name(), link.from(), link.to(), terms, true, lo, hi, horizon, skipped,
-                Collections.unmodifiableList(samples));
+        return new LinkSeries(link, true, lo, hi, horizon, skipped, Collections.unmodifiableList(samples));
     }
 
     /**
@@ -154,30 +174,24 @@ public final class SampledSeries {
      * Earliest and latest planned send clock on {@code link}: its message plans, or else the exchange
      * queries it carries; null when nothing is planned on it.
      */
-    static double[] plannedRange(Scenario s, String link) {
+    static double[] plannedRange(Mission mission, Link link) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
-        for (Scenario.MessagePlan p : SendOrder.plansOf(s, link)) {
+        for (MessagePlan p : mission.plansOn(link)) {
             long n = p.count();
             if (n == 0) {
                 continue;
             }
-            if (p instanceof Scenario.At at) {
-                for (double c : at.clocks()) {
-                    lo = Math.min(lo, c);
-                    hi = Math.max(hi, c);
-                }
-            } else {
-                lo = Math.min(lo, p.sendClock(0));
-                hi = Math.max(hi, p.sendClock(n - 1));
-            }
+            // each plan yields its send clocks in ascending order
+            lo = Math.min(lo, p.sendClock(0));
+            hi = Math.max(hi, p.sendClock(n - 1));
         }
         if (lo <= hi) {
             return new double[] {lo, hi};
         }
-        for (Scenario.Exchange e : s.exchanges()) {
+        for (Exchange e : mission.exchanges()) {
             long n = e.count();
-            if (e.query().equals(link) && n > 0) {
+            if (e.query().name().equals(link.name()) && n > 0) {
                 lo = Math.min(lo, e.first());
                 hi = Math.max(hi, e.sendClock(n - 1));
             }

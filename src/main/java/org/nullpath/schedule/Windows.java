@@ -11,7 +11,8 @@ import org.nullpath.lightcone.Horizon;
 import org.nullpath.lightcone.LightCone;
 import org.nullpath.link.Budget;
 import org.nullpath.link.LinkTerms;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Link;
+import org.nullpath.mission.WindowScan;
 import org.nullpath.worldline.Worldline;
 
 /**
@@ -45,20 +46,20 @@ public final class Windows {
     }
 
     /** The windows of one scanned range, in order. */
-    public static List<WindowRow> scan(Scenario s, Scenario.WindowScan w) {
+    public static List<WindowRow> scan(WindowScan w) {
         try {
-            return scanRange(s, w);
+            return scanRange(w);
         } catch (ArithmeticException e) {
-            throw new RangeException("windows (link " + w.link() + ")", e.getMessage(), e);
+            throw new RangeException("windows (link " + w.link().name() + ")", e.getMessage(), e);
         }
     }
 
-    private static List<WindowRow> scanRange(Scenario s, Scenario.WindowScan w) {
-        Scenario.Link link = s.links().get(w.link());
+    private static List<WindowRow> scanRange(WindowScan w) {
+        Link link = w.link();
         LinkTerms terms = link.terms().orElseThrow(() -> new IllegalArgumentException(
-                "window on link " + w.link() + " needs link terms"));
-        Worldline sender = s.nodes().get(link.from()).worldline();
-        Worldline receiver = s.nodes().get(link.to()).worldline();
+                "window on link " + link.name() + " needs link terms"));
+        Worldline sender = link.sender();
+        Worldline receiver = link.receiver();
         Horizon horizon = LightCone.horizon(sender, receiver);
         double lastClock = horizon.exists() ? horizon.lastSend().clock() : Double.POSITIVE_INFINITY;
         Conditions c = new Conditions(terms, sender, receiver, lastClock);
@@ -106,9 +107,9 @@ public final class Windows {
                 if (horizon.exists() && Math.abs(lastClock - e[0]) <= HORIZON_SNAP * Math.abs(lastClock)) {
                     // the margin collapses (as D -> 0 and R -> infinity) only within the edge tolerance of
                     // the horizon itself: to that tolerance the horizon closed the window
-                    rows.add(new WindowRow(w.link(), opened, lastClock, NAMES[0]));
+                    rows.add(new WindowRow(link.name(), opened, lastClock, NAMES[0]));
                 } else {
-                    rows.add(new WindowRow(w.link(), opened, e[0], NAMES[k]));
+                    rows.add(new WindowRow(link.name(), opened, e[0], NAMES[k]));
                 }
             } else if (!open && now) {
                 opened = e[0];
@@ -116,7 +117,7 @@ public final class Windows {
             open = now;
         }
         if (open) {
-            rows.add(new WindowRow(w.link(), opened, to, "end"));
+            rows.add(new WindowRow(link.name(), opened, to, "end"));
         }
         return rows;
     }

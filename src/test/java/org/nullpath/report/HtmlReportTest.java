@@ -22,7 +22,8 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.nullpath.cli.Main;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Link;
+import org.nullpath.mission.Mission;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
 import org.nullpath.schedule.DiagramTraces;
@@ -84,7 +85,7 @@ class HtmlReportTest {
     @ValueSource(strings = {"probe-link-budget.yaml", "open-burn-horizon.yaml"})
     void theReportIsOneSelfContainedPageWithEveryExpectedPart(String name) throws IOException, ScenarioException {
         String html = report(name, "out");
-        Scenario s = ScenarioLoader.load(Path.of("link-scenarios", name));
+        Mission s = ScenarioLoader.load(Path.of("link-scenarios", name));
 
         assertTrue(html.startsWith("<!DOCTYPE html>"), "an HTML5 document");
         assertTrue(html.contains("<title>" + Html.escape(s.title()) + " \u2014 nullpath plan report</title>"));
@@ -99,7 +100,7 @@ class HtmlReportTest {
 
         // every figure: the spacetime diagram and each link's charts, each holding its own inline SVG
         List<String> expected = new ArrayList<>(List.of("spacetime"));
-        for (Scenario.Link l : s.links().values()) {
+        for (Link l : s.links().values()) {
             List<String> names = new ArrayList<>(List.of("light-time", "doppler", "clock-image"));
             if (l.terms().isPresent()) {
                 names.addAll(List.of("frequency", "margin", "data-rate"));
@@ -180,7 +181,7 @@ class HtmlReportTest {
     void theOpenBurnHorizonLineIsTheRindlerAsymptote() throws IOException, ScenarioException {
         // Rindler, Relativity: Special, General, and Cosmological (2nd ed., 2006), hyperbolic motion: from rest
         // at the origin at constant proper acceleration a, the craft approaches c t - x = c^2 / a
-        Scenario s = ScenarioLoader.load(Path.of("link-scenarios", "open-burn-horizon.yaml"));
+        Mission s = ScenarioLoader.load(Path.of("link-scenarios", "open-burn-horizon.yaml"));
         DiagramTraces.Diagram d = SpacetimeChart.layout(s, SampledSeries.of(s));
         assertEquals(1, d.horizons().size());
         DiagramTraces.NullLine line = d.horizons().get(0);
@@ -195,7 +196,7 @@ class HtmlReportTest {
     void lightAlongTheFlightLineRunsAt45DegreesOnTheDiagram(String name) throws IOException, ScenarioException {
         // a null ray along the line has ds = c dt (definition of the light cone): the diagram is at 45 degrees
         // when one unit of c t and one of s take the same length, i.e. c (t1 - t0) / (s1 - s0) = H / W
-        Scenario s = ScenarioLoader.load(Path.of("link-scenarios", name));
+        Mission s = ScenarioLoader.load(Path.of("link-scenarios", name));
         DiagramTraces.Diagram d = SpacetimeChart.layout(s, SampledSeries.of(s));
         Rectangle2D area = SpacetimeChart.dataArea(SpacetimeChart.width(d));
         double ctOverS = C * (d.lastTime() - d.firstTime()) / (d.lastAlong() - d.firstAlong());
@@ -210,7 +211,7 @@ class HtmlReportTest {
         // (Rindler 2006, hyperbolic motion). Light sent from the origin at t_e = e T meets it where
         // c (t - t_e) = x(t), which solves to a light time T e^2 / (2 (1 - e)): derived here by hand from
         // (u - e + 1)^2 = 1 + u^2 with u = t / T. No send at or after e = 1 arrives (the horizon).
-        Scenario s = ScenarioLoader.load(Path.of("link-scenarios", "open-burn-horizon.yaml"));
+        Mission s = ScenarioLoader.load(Path.of("link-scenarios", "open-burn-horizon.yaml"));
         SampledSeries.LinkSeries up = SampledSeries.of(s).get(0);
         assertEquals("uplink", up.link());
         double t = C / G0;
@@ -233,7 +234,7 @@ class HtmlReportTest {
         // A source receding along the line of sight at rapidity eta is received at rest with D = e^-eta
         // (Einstein 1905, D = sqrt((1 - beta) / (1 + beta))); in hyperbolic motion eta = a tau / c with tau the
         // craft's clock (Rindler 2006). Sent from the craft at clock tau to the station at the origin.
-        Scenario s = ScenarioLoader.load(Path.of("link-scenarios", "open-burn-horizon.yaml"));
+        Mission s = ScenarioLoader.load(Path.of("link-scenarios", "open-burn-horizon.yaml"));
         SampledSeries.LinkSeries down = SampledSeries.of(s).get(1);
         assertEquals("downlink", down.link());
         assertFalse(down.horizon().hasHorizon(), "a station at rest has no horizon: every downlink arrives");
@@ -264,7 +265,7 @@ class HtmlReportTest {
                 messages:
                   - {link: down, first: 0 s, last: 999999 s, every: 1 s}
                 """);
-        Scenario s = ScenarioLoader.load(file);
+        Mission s = ScenarioLoader.load(file);
         assertEquals(1_000_000L, s.messages().get(0).count());
         SampledSeries.LinkSeries down = SampledSeries.of(s).get(0);
         assertEquals(SampledSeries.MAX_SAMPLES, down.samples().size());

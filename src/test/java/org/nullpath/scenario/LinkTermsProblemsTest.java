@@ -1,5 +1,6 @@
 package org.nullpath.scenario;
 
+import org.nullpath.mission.Mission;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.nullpath.scenario.ProblemAssertions.assertProblem;
 import static org.nullpath.scenario.ProblemAssertions.onlyProblemOf;
@@ -33,7 +34,7 @@ class LinkTermsProblemsTest {
 
     @Test
     void aCompleteCoherentLinkLoads() throws Exception {
-        Scenario s = ScenarioLoader.load(coherent("    carrier: 8.4 GHz\n"), "ok.yaml");
+        Mission s = ScenarioLoader.load(coherent("    carrier: 8.4 GHz\n"), "ok.yaml");
         assertEquals(8.4e9, s.links().get("out").terms().orElseThrow().carrierHz());
     }
 

@@ -1,5 +1,6 @@
 package org.nullpath.scenario;
 
+import org.nullpath.mission.Mission;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -136,7 +137,7 @@ class ProfiledLegProblemsTest {
         Path scenario = tmp.resolve("s.yaml");
         Files.writeString(scenario, CRAFT + "      - profile: {file: ramp.csv}\n");
         Files.writeString(tmp.resolve("ramp.csv"), "clock_s,acceleration_m_s2\n0,0\n100,2\n200,0\n");
-        Scenario s = ScenarioLoader.load(scenario);
-        assertEquals(1, s.nodes().get("lark").legs().size());
+        Mission s = ScenarioLoader.load(scenario);
+        assertEquals(1, s.craft("lark").orElseThrow().legs().size());
     }
 }

@@ -1,5 +1,11 @@
 package org.nullpath.scenario;
 
+import org.nullpath.mission.Cutoff;
+import org.nullpath.mission.Exchange;
+import org.nullpath.mission.Link;
+import org.nullpath.mission.MessagePlan;
+import org.nullpath.mission.Mission;
+import org.nullpath.mission.WindowScan;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertInstanceOf;
@@ -120,34 +126,34 @@ class ScenarioLoaderTest {
 
     @Test
     void fullScenarioLoadsWithTitleEpochAndNodesInFileOrderStationsFirst() throws Exception {
-        Scenario s = ScenarioLoader.load(FULL, "lark.yaml");
+        Mission s = ScenarioLoader.load(FULL, "lark.yaml");
         assertEquals("Lark outbound trial", s.title());
         assertEquals(Instant.parse("2061-03-01T00:00:00Z"), s.epoch().orElseThrow());
-        assertEquals(Path.of("lark.yaml"), s.file());
+        assertEquals(Path.of("lark.yaml"), s.source().file());
         // The craft section comes first in the file, but stations are listed first.
         assertEquals(List.of("home", "relay", "lark"), List.copyOf(s.nodes().keySet()));
-        assertEquals(Scenario.Kind.STATION, s.nodes().get("home").kind());
-        assertEquals(Scenario.Kind.CRAFT, s.nodes().get("lark").kind());
+        assertFalse(s.nodes().get("home").isCraft());
+        assertTrue(s.nodes().get("lark").isCraft());
         assertEquals(List.of("up", "down", "beam"), List.copyOf(s.links().keySet()));
     }
 
     @Test
     void stationQuantitiesAreConvertedToSi() throws Exception {
-        Scenario s = ScenarioLoader.load(FULL, "lark.yaml");
+        Mission s = ScenarioLoader.load(FULL, "lark.yaml");
         InertialWorldline relay = assertInstanceOf(InertialWorldline.class, s.nodes().get("relay").worldline());
         assertEquals(4.2 * LY, relay.positionAtZero().y()); // IAU light year
         assertEquals(0.0, relay.positionAtZero().x());
         assertEquals(149_896_229.0, relay.velocity().y()); // 0.5 c, SI 2019 value of c
         assertEquals(3600.0, relay.clockOffset());
-        assertTrue(s.nodes().get("relay").legs().isEmpty());
+        assertFalse(s.nodes().get("relay").isCraft());
         InertialWorldline home = assertInstanceOf(InertialWorldline.class, s.nodes().get("home").worldline());
         assertTrue(home.atRest());
     }
 
     @Test
     void craftLegsAreConvertedToSiLegSpecs() throws Exception {
-        Scenario s = ScenarioLoader.load(FULL, "lark.yaml");
-        List<LegSpec> legs = s.nodes().get("lark").legs();
+        Mission s = ScenarioLoader.load(FULL, "lark.yaml");
+        List<LegSpec> legs = s.craft("lark").orElseThrow().legs();
         assertEquals(List.of(
                 new LegSpec.Burn(1 * G0, new LegSpec.ClockDuration(1 * YR)),
                 new LegSpec.Coast(new LegSpec.ClockDuration(2 * YR)),
@@ -165,10 +171,10 @@ class ScenarioLoaderTest {
 
     @Test
     void radioLinkTermsAreConvertedToSi() throws Exception {
-        Scenario s = ScenarioLoader.load(FULL, "lark.yaml");
-        Scenario.Link up = s.links().get("up");
-        assertEquals("home", up.from());
-        assertEquals("lark", up.to());
+        Mission s = ScenarioLoader.load(FULL, "lark.yaml");
+        Link up = s.links().get("up");
+        assertEquals("home", up.from().name());
+        assertEquals("lark", up.to().name());
         LinkTerms t = up.terms().orElseThrow();
         assertEquals(7.2e9, t.carrierHz());
         assertFalse(t.precompensate());
@@ -190,7 +196,7 @@ class ScenarioLoaderTest {
 
     @Test
     void opticalLinkTermsTakeTheCarrierFromTheWavelengthAndDefaultTheirLosses() throws Exception {
-        Scenario s = ScenarioLoader.load(FULL, "lark.yaml");
+        Mission s = ScenarioLoader.load(FULL, "lark.yaml");
         LinkTerms t = s.links().get("beam").terms().orElseThrow();
         // f = c / lambda, c from the SI Brochure (2019): 299 792 458 / 1.064e-6 m.
         assertEquals(C / (1064 * 1e-9), t.carrierHz());
@@ -214,21 +220,21 @@ class ScenarioLoaderTest {
 
     @Test
     void messagePlansCutoffsExchangesAndWindowsAreConvertedToSi() throws Exception {
-        Scenario s = ScenarioLoader.load(FULL, "lark.yaml");
+        Mission s = ScenarioLoader.load(FULL, "lark.yaml");
         assertEquals(List.of(
-                new Scenario.Series("up", 0.0, 2 * YR, 10 * 86_400.0),
-                new Scenario.At("down", List.of(1 * 86_400.0, 1 * YR, 5 * YR))), s.messages());
+                new MessagePlan.Series(s.links().get("up"), 0.0, 2 * YR, 10 * 86_400.0),
+                new MessagePlan.At(s.links().get("down"), List.of(1 * 86_400.0, 1 * YR, 5 * YR))), s.messages());
         // 0, 10 d, ..., while <= 730.5 d: 74 sends.
         assertEquals(74, s.messages().get(0).count());
-        assertEquals(List.of(new Scenario.Cutoff("before-flip", "up", 0.9 * YR)), s.cutoffs());
-        assertEquals(List.of(new Scenario.Exchange("ping", "up", "down", 3600.0, 0.0, 1 * YR, 30 * 86_400.0)),
+        assertEquals(List.of(new Cutoff("before-flip", s.links().get("up"), 0.9 * YR)), s.cutoffs());
+        assertEquals(List.of(new Exchange("ping", s.links().get("up"), s.links().get("down"), 3600.0, 0.0, 1 * YR, 30 * 86_400.0)),
                 s.exchanges());
-        assertEquals(List.of(new Scenario.WindowScan("up", 0.0, 1 * YR)), s.windows());
+        assertEquals(List.of(new WindowScan(s.links().get("up"), 0.0, 1 * YR)), s.windows());
     }
 
     @Test
     void defaultsApplyWhenKeysAreLeftOut() throws Exception {
-        Scenario s = ScenarioLoader.load("""
+        Mission s = ScenarioLoader.load("""
                 stations:
                   base: {}
                 craft:
@@ -245,14 +251,14 @@ class ScenarioLoaderTest {
         assertEquals(0.0, wren.origin().norm());
         assertEquals(0.0, wren.atTime(0).clock());
         assertEquals(0.0, wren.atTime(0).beta());
-        assertTrue(s.nodes().get("wren").legs().isEmpty());
+        assertTrue(s.craft("wren").orElseThrow().legs().isEmpty());
         assertTrue(s.links().isEmpty());
         assertTrue(s.messages().isEmpty());
     }
 
     @Test
     void aStationGivenWithNoValueTakesEveryDefault() throws Exception {
-        Scenario s = ScenarioLoader.load("stations:\n  home:\n", "bare.yaml");
+        Mission s = ScenarioLoader.load("stations:\n  home:\n", "bare.yaml");
         InertialWorldline home = assertInstanceOf(InertialWorldline.class, s.nodes().get("home").worldline());
         assertTrue(home.atRest());
         assertEquals(0.0, home.positionAtZero().norm());
@@ -260,7 +266,7 @@ class ScenarioLoaderTest {
 
     @Test
     void otherLegEndsAreAccepted() throws Exception {
-        Scenario s = ScenarioLoader.load("""
+        Mission s = ScenarioLoader.load("""
                 craft:
                   wren:
                     heading: [1, 0, 0]
@@ -275,12 +281,12 @@ class ScenarioLoaderTest {
                 new LegSpec.Coast(new LegSpec.MissionDuration(3 * YR)),
                 new LegSpec.Coast(new LegSpec.UntilDistance(1 * LY)),
                 new LegSpec.Burn(0.5, new LegSpec.UntilDistance(2 * 149_597_870_700.0)), // au: IAU 2012 B2
-                new LegSpec.Burn(-2 * G0, new LegSpec.MissionDuration(86_400.0))), s.nodes().get("wren").legs());
+                new LegSpec.Burn(-2 * G0, new LegSpec.MissionDuration(86_400.0))), s.craft("wren").orElseThrow().legs());
     }
 
     @Test
     void lastBeforeFirstIsAPlanOfZeroMessages() throws Exception {
-        Scenario s = ScenarioLoader.load("""
+        Mission s = ScenarioLoader.load("""
                 stations:
                   home: {}
                   away: {position: [1 au, 0 au, 0 au]}
@@ -296,7 +302,7 @@ class ScenarioLoaderTest {
 
     @Test
     void aliasesMayShareLinkTerms() throws Exception {
-        Scenario s = ScenarioLoader.load("""
+        Mission s = ScenarioLoader.load("""
                 stations:
                   home: {}
                   away: {position: [1 au, 0 au, 0 au]}
@@ -326,8 +332,8 @@ class ScenarioLoaderTest {
     void loadingFromAPathNamesTheFileAsGivenAndDefaultsTheTitleToItsName(@TempDir Path dir) throws Exception {
         Path file = dir.resolve("trial.yaml");
         Files.writeString(file, "stations:\n  home: {}\n", StandardCharsets.UTF_8);
-        Scenario s = ScenarioLoader.load(file);
-        assertEquals(file, s.file());
+        Mission s = ScenarioLoader.load(file);
+        assertEquals(file, s.source().file());
         assertEquals("trial.yaml", s.title());
     }
 

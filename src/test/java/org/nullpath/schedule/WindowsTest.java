@@ -4,7 +4,7 @@ import java.util.List;
 
 import org.apache.commons.math3.analysis.solvers.BrentSolver;
 import org.junit.jupiter.api.Test;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.mission.Mission;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
 
@@ -53,8 +53,8 @@ class WindowsTest {
     }
 
     private static List<WindowRow> windows(String yaml) throws ScenarioException {
-        Scenario s = ScenarioLoader.load(yaml, "windows.yaml");
-        return Windows.scan(s, s.windows().get(0));
+        Mission s = ScenarioLoader.load(yaml, "windows.yaml");
+        return Windows.scan(s.windows().get(0));
     }
 
     private static void assertRelative(double expected, double actual, double tol) {
