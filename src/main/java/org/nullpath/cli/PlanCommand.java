@@ -8,6 +8,7 @@ import java.util.concurrent.Callable;
 
 import org.nullpath.report.OutputFolder;
 import org.nullpath.report.PlanOutput;
+import org.nullpath.report.PlanResult;
 import org.nullpath.mission.Mission;
 import org.nullpath.schedule.RangeException;
 import picocli.CommandLine.Command;
@@ -47,9 +48,9 @@ final class PlanCommand implements Callable<Integer> {
         if (s == null) {
             return Main.INPUT_ERROR;
         }
-        PlanOutput.Result result;
+        PlanResult result;
         try (OutputFolder folder = OutputFolder.begin(out)) {
-            result = PlanOutput.write(s, folder, !noReport);
+            result = PlanOutput.write(s, folder, !noReport, err);
             folder.commit();
         } catch (IOException | UncheckedIOException e) {
             err.println("nullpath: cannot write " + out + ": " + e.getMessage());

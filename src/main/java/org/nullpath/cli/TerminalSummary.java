@@ -4,9 +4,11 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 
 import org.nullpath.report.PlanOutput;
+import org.nullpath.report.PlanResult;
 import org.nullpath.report.Readable;
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
+import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.HorizonRow;
@@ -23,7 +25,7 @@ final class TerminalSummary {
         return n + " " + noun + (n == 1 ? "" : "s");
     }
 
-    static void print(PrintWriter out, Mission s, PlanOutput.Result r, Path dir) {
+    static void print(PrintWriter out, Mission s, PlanResult r, Path dir) {
         long stations = s.stations().size();
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
@@ -55,16 +57,16 @@ final class TerminalSummary {
                         Readable.time(h.lastSendClock()));
             }
         }
-        for (PlanOutput.ExchangeTally e : r.exchanges()) {
+        for (ExchangeTally e : r.exchanges()) {
             out.printf("  exchange %-10s %d of %d round trips complete%n", e.name(), e.complete(), e.roundTrips());
         }
         double worst = Double.NaN;
         String worstLink = null;
         for (LinkTally t : r.links()) {
-            BudgetTally.Figures b = t.budget();
-            if (b == null) {
+            if (t.budget().isEmpty()) {
                 continue;
             }
+            BudgetTally.Figures b = t.budget().get();
             out.printf("  budget %-12s margin %s to %s dB; %d of %d delivered close; received %s to %s Hz;"
                             + " Doppler rate up to %s Hz/s; rate that closes for all: %s bit/s%n",
                     t.link(), Readable.number(b.worstMarginDb()), Readable.number(b.bestMarginDb()), b.closing(),

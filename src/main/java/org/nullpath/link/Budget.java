@@ -1,34 +1,139 @@
 package org.nullpath.link;
 
+import java.util.Objects;
+import java.util.Optional;
+
 /**
- * One message's frequency plan and link budget (contract.md, "Link budget additions"). Values that
- * do not apply are NaN (photon columns on a coherent link, C/N0 and Eb/N0 on a photon-counting one; the
- * power columns when sender and receiver are at one place, where a far-field budget has no value).
+ * One message's frequency plan and link budget (docs/link-budget.md): the part every link has (frequencies,
+ * limits, received data rate) and the reception, radio ({@link Reception.Coherent}) or optical
+ * ({@link Reception.PhotonCounting}). A number that does not exist is NaN: the power figures when sender and
+ * receiver are at one place, where a far-field budget has no value.
  *
- * @param txFrequencyHz        transmitted frequency in the sender's frame
- * @param rxFrequencyHz        received frequency in the receiver's frame
- * @param dopplerRateHzPerS    d(rx frequency) / d(receiver clock)
- * @param inTuningRange        received frequency inside the receiver's tuning range (true when none)
- * @param withinDopplerRate    |Doppler rate| within the receiver's limit (true when none)
- * @param rxPowerDbw           received power
- * @param cn0DbHz              carrier to noise density (coherent)
- * @param rxPhotonRatePerS     received photons per second (photon counting)
- * @param rxDataRateBps        received data rate, D times the sender's rate
- * @param ebN0Db               energy per bit over noise density (coherent)
- * @param photonsPerBit        received photons per bit (photon counting)
- * @param marginDb             Eb/N0 (or photons per bit) over the requirement, dB
- * @param maxDataRateBps       highest sender-frame data rate that closes with zero margin
+ * @param frequency     transmitted and received frequency, Doppler rate and the receiver's limits
+ * @param rxDataRateBps received data rate, D times the sender's rate
+ * @param reception     received power, the detection's own figures, margin and the highest rate that closes
  */
-public record Budget(double txFrequencyHz, double rxFrequencyHz, double dopplerRateHzPerS, boolean inTuningRange,
-                     boolean withinDopplerRate, double rxPowerDbw, double cn0DbHz, double rxPhotonRatePerS,
-                     double rxDataRateBps, double ebN0Db, double photonsPerBit, double marginDb,
-                     double maxDataRateBps) {
+public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception reception) {
+    public Budget {
+        Objects.requireNonNull(frequency, "frequency");
+        Objects.requireNonNull(reception, "reception");
+    }
+
+    /**
+     * The frequency plan of one message.
+     *
+     * @param txFrequencyHz     transmitted frequency in the sender's frame
+     * @param rxFrequencyHz     received frequency in the receiver's frame
+     * @param dopplerRateHzPerS d(rx frequency) / d(receiver clock)
+     * @param inTuningRange     received frequency inside the receiver's tuning range (true when none)
+     * @param withinDopplerRate |Doppler rate| within the receiver's limit (true when none)
+     */
+    public record FrequencyPlan(double txFrequencyHz, double rxFrequencyHz, double dopplerRateHzPerS,
+                                boolean inTuningRange, boolean withinDopplerRate) {
+    }
+
+    /** What the receiver gets: power, the detection's own figures, margin and the highest rate that closes. */
+    public sealed interface Reception permits Reception.Coherent, Reception.PhotonCounting {
+        /** Received power, dBW. */
+        double rxPowerDbw();
+
+        /** Eb/N0 (or photons per bit) over the requirement, dB. */
+        double marginDb();
+
+        /** Highest sender-frame data rate that closes with zero margin, bit/s. */
+        double maxDataRateBps();
+
+        /**
+         * Coherent (radio) reception.
+         *
+         * @param rxPowerDbw     received power
+         * @param cn0DbHz        carrier to noise density
+         * @param ebN0Db         energy per bit over noise density
+         * @param marginDb       Eb/N0 over the requirement
+         * @param maxDataRateBps highest sender-frame data rate that closes with zero margin
+         */
+        record Coherent(double rxPowerDbw, double cn0DbHz, double ebN0Db, double marginDb, double maxDataRateBps)
+                implements Reception {
+        }
+
+        /**
+         * Photon-counting (optical direct detection) reception.
+         *
+         * @param rxPowerDbw       received power
+         * @param rxPhotonRatePerS received photons per second
+         * @param photonsPerBit    received photons per bit
+         * @param marginDb         photons per bit over the requirement, dB
+         * @param maxDataRateBps   highest sender-frame data rate that closes with zero margin
+         */
+        record PhotonCounting(double rxPowerDbw, double rxPhotonRatePerS, double photonsPerBit, double marginDb,
+                              double maxDataRateBps) implements Reception {
+        }
+    }
+
+    /** The reception as {@code kind}, when it is of that kind. */
+    public <T extends Reception> Optional<T> reception(Class<T> kind) {
+        return kind.isInstance(reception) ? Optional.of(kind.cast(reception)) : Optional.empty();
+    }
+
+    public double txFrequencyHz() {
+        return frequency.txFrequencyHz();
+    }
+
+    public double rxFrequencyHz() {
+        return frequency.rxFrequencyHz();
+    }
+
+    public double dopplerRateHzPerS() {
+        return frequency.dopplerRateHzPerS();
+    }
+
+    public boolean inTuningRange() {
+        return frequency.inTuningRange();
+    }
+
+    public boolean withinDopplerRate() {
+        return frequency.withinDopplerRate();
+    }
+
+    public double rxPowerDbw() {
+        return reception.rxPowerDbw();
+    }
+
+    public double marginDb() {
+        return reception.marginDb();
+    }
+
+    public double maxDataRateBps() {
+        return reception.maxDataRateBps();
+    }
+
+    /** C/N0, dB-Hz; NaN unless the reception is coherent. */
+    public double cn0DbHz() {
+        return reception(Reception.Coherent.class).map(Reception.Coherent::cn0DbHz).orElse(Double.NaN);
+    }
+
+    /** Eb/N0, dB; NaN unless the reception is coherent. */
+    public double ebN0Db() {
+        return reception(Reception.Coherent.class).map(Reception.Coherent::ebN0Db).orElse(Double.NaN);
+    }
+
+    /** Received photons per second; NaN unless the reception is photon counting. */
+    public double rxPhotonRatePerS() {
+        return reception(Reception.PhotonCounting.class).map(Reception.PhotonCounting::rxPhotonRatePerS)
+                .orElse(Double.NaN);
+    }
+
+    /** Received photons per bit; NaN unless the reception is photon counting. */
+    public double photonsPerBit() {
+        return reception(Reception.PhotonCounting.class).map(Reception.PhotonCounting::photonsPerBit)
+                .orElse(Double.NaN);
+    }
 
     /**
      * True when a message would be received: margin >= 0 (or no far-field margin at all, sender and
      * receiver being at one place), in the tuning range, within the rate limit.
      */
     public boolean closes() {
-        return (marginDb >= 0 || Double.isNaN(marginDb)) && inTuningRange && withinDopplerRate;
+        return (marginDb() >= 0 || Double.isNaN(marginDb())) && inTuningRange() && withinDopplerRate();
     }
 }

@@ -50,31 +50,31 @@ public final class LinkBudget {
         boolean inRange = !t.hasTuningRange() || (fRx >= t.tuningMinHz() && fRx <= t.tuningMaxHz());
         boolean withinRate = !t.hasDopplerRateLimit() || Math.abs(rate) <= t.maxDopplerRateHzPerS();
         double rTx = senderFrameDistance(p);
+        Budget.FrequencyPlan plan = new Budget.FrequencyPlan(fTx, fRx, rate, inRange, withinRate);
+        double rxRate = d.doppler() * t.dataRateBps();
+        boolean coherent = t.detection() == LinkTerms.Detection.COHERENT;
         if (!(rTx > 0)) {
             // sender and receiver at one place (a craft leaving its station): the far-field budget has no
-            // value there; frequencies and flags still do, the power columns are left empty
-            double rxRate0 = d.doppler() * t.dataRateBps();
-            return new Budget(fTx, fRx, rate, inRange, withinRate, Double.NaN, Double.NaN, Double.NaN, rxRate0,
-                    Double.NaN, Double.NaN, Double.NaN, Double.NaN);
+            // value there; frequencies and flags still do, the power figures do not exist
+            double n = Double.NaN;
+            return new Budget(plan, rxRate, coherent ? new Budget.Reception.Coherent(n, n, n, n, n)
+                    : new Budget.Reception.PhotonCounting(n, n, n, n, n));
         }
         double lambdaTx = Constants.C / fTx;
         double pathDb = 20 * Math.log10(lambdaTx / (4 * Math.PI * rTx));
         double rxPowerDbw = db(t.txPowerWatts()) + db(t.txAntenna().gainAt(fTx)) + db(t.rxAntenna().gainAt(fRx))
                 + pathDb - t.txLossDb() - t.rxLossDb();
-        double rxRate = d.doppler() * t.dataRateBps();
-        if (t.detection() == LinkTerms.Detection.COHERENT) {
+        if (coherent) {
             double cn0 = rxPowerDbw - BOLTZMANN_DB - db(t.noiseTemperatureKelvin());
             double ebn0 = cn0 - db(rxRate);
             double margin = ebn0 - t.requiredEbN0Db();
             double maxRate = Math.pow(10, (cn0 - t.requiredEbN0Db()) / 10) / d.doppler();
-            return new Budget(fTx, fRx, rate, inRange, withinRate, rxPowerDbw, cn0, Double.NaN, rxRate, ebn0,
-                    Double.NaN, margin, maxRate);
+            return new Budget(plan, rxRate, new Budget.Reception.Coherent(rxPowerDbw, cn0, ebn0, margin, maxRate));
         }
         double photonRate = Math.pow(10, rxPowerDbw / 10) / (Constants.PLANCK * fRx);
         double ppb = photonRate / rxRate;
         double margin = db(ppb) - db(t.requiredPhotonsPerBit());
         double maxRate = photonRate / (d.doppler() * t.requiredPhotonsPerBit());
-        return new Budget(fTx, fRx, rate, inRange, withinRate, rxPowerDbw, Double.NaN, photonRate, rxRate, Double.NaN,
-                ppb, margin, maxRate);
+        return new Budget(plan, rxRate, new Budget.Reception.PhotonCounting(rxPowerDbw, photonRate, ppb, margin, maxRate));
     }
 }

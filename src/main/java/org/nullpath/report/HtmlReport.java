@@ -11,6 +11,7 @@ import java.util.Map;
 
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
+import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.DiagramTraces;
@@ -37,12 +38,12 @@ public final class HtmlReport {
     }
 
     /** Writes the report of a finished plan to {@code file}. */
-    public static void write(Path file, Mission s, PlanOutput.Result result) throws IOException {
+    public static void write(Path file, Mission s, PlanResult result) throws IOException {
         Files.writeString(file, render(s, result), StandardCharsets.UTF_8);
     }
 
     /** The whole page. */
-    static String render(Mission s, PlanOutput.Result r) {
+    static String render(Mission s, PlanResult r) {
         List<SampledSeries.LinkSeries> series = SampledSeries.of(s);
         DiagramTraces.Diagram diagram = SpacetimeChart.layout(s, series);
         StringBuilder h = new StringBuilder(1 << 20);
@@ -63,7 +64,7 @@ public final class HtmlReport {
         return h.toString();
     }
 
-    private static void masthead(StringBuilder h, Mission s, PlanOutput.Result r) {
+    private static void masthead(StringBuilder h, Mission s, PlanResult r) {
         long stations = s.stations().size();
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
@@ -113,7 +114,7 @@ public final class HtmlReport {
         h.append("</figcaption>\n</figure>\n</section>\n");
     }
 
-    private static void linkSections(StringBuilder h, Mission s, PlanOutput.Result r,
+    private static void linkSections(StringBuilder h, Mission s, PlanResult r,
                                      List<SampledSeries.LinkSeries> series) {
         h.append("<section id=\"links\">\n<h2>Links</h2>\n");
         if (series.isEmpty()) {
@@ -149,8 +150,8 @@ public final class HtmlReport {
         row(h, "horizon", ls.horizon().hasHorizon()
                 ? "nothing sent after " + Readable.time(ls.horizon().lastSendClock()) + " on " + ls.from()
                 + "'s clock ever arrives" : "none: every send arrives");
-        BudgetTally.Figures b = t.budget();
-        if (b != null && t.delivered() > 0) {
+        if (t.budget().isPresent() && t.delivered() > 0) {
+            BudgetTally.Figures b = t.budget().get();
             row(h, "margin", shown(b.worstMarginDb()) + " to " + shown(b.bestMarginDb()) + " dB; "
                     + b.closing() + " of " + t.delivered() + " delivered messages close");
             Scales.Unit f = Scales.frequency(ls.terms().carrierHz());
@@ -218,7 +219,7 @@ public final class HtmlReport {
         return "<td>" + Html.escape(text) + "</td>";
     }
 
-    private static void tables(StringBuilder h, PlanOutput.Result r) {
+    private static void tables(StringBuilder h, PlanResult r) {
         h.append("<section id=\"tables\">\n<h2>Cut-offs, horizons, windows and round trips</h2>\n");
 
         h.append("<h3 id=\"table-cutoffs\">Cut-offs</h3>\n");
@@ -273,7 +274,7 @@ public final class HtmlReport {
                     .append("<code>exchanges-NAME.csv</code>.</p>\n<table class=\"grid\">\n<thead><tr>")
                     .append("<th>exchange</th><th>planned</th><th>complete</th><th>never complete</th></tr></thead>\n")
                     .append("<tbody>\n");
-            for (PlanOutput.ExchangeTally e : r.exchanges()) {
+            for (ExchangeTally e : r.exchanges()) {
                 h.append("<tr>").append(cell(e.name())).append(cell(Long.toString(e.roundTrips())))
                         .append(cell(Long.toString(e.complete()))).append(cell(Long.toString(e.roundTrips() - e.complete())))
                         .append("</tr>\n");

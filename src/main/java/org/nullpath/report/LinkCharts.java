@@ -239,8 +239,7 @@ final class LinkCharts {
     private static double[] budgetColumn(List<SampledSeries.Sample> samples, ToDoubleFunction<Budget> f) {
         double[] out = new double[samples.size()];
         for (int i = 0; i < out.length; i++) {
-            Budget b = samples.get(i).budget();
-            out[i] = b == null ? Double.NaN : f.applyAsDouble(b);
+            out[i] = samples.get(i).budget().map(f::applyAsDouble).orElse(Double.NaN);
         }
         return out;
     }

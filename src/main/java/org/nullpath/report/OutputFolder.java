@@ -19,6 +19,9 @@ import java.util.stream.Stream;
  * the folder are left alone.
  */
 public final class OutputFolder implements AutoCloseable {
+    /** The key under which summary.json lists the files of its plan. */
+    static final String FILES_KEY = "files";
+
     private final Path target;
     private final Path staging;
     private boolean committed;
@@ -58,14 +61,14 @@ public final class OutputFolder implements AutoCloseable {
      * there is no readable summary), so that files this plan no longer writes can be removed.
      */
     private static List<String> earlierPlanFiles(Path dir) {
-        Path summary = dir.resolve("summary.json");
+        Path summary = dir.resolve(org.nullpath.mission.OutputNames.SUMMARY);
         List<String> names = new ArrayList<>();
         if (!Files.isRegularFile(summary)) {
             return names;
         }
         try {
             com.fasterxml.jackson.databind.JsonNode files = new com.fasterxml.jackson.databind.ObjectMapper()
-                    .readTree(summary.toFile()).get(SummaryJson.FILES);
+                    .readTree(summary.toFile()).get(FILES_KEY);
             if (files != null && files.isArray()) {
                 for (com.fasterxml.jackson.databind.JsonNode f : files) {
                     String n = f.asText();

@@ -13,6 +13,7 @@ import org.nullpath.mission.Craft;
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
 import org.nullpath.mission.Station;
+import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.HorizonRow;
@@ -28,10 +29,7 @@ final class SummaryJson {
     private SummaryJson() {
     }
 
-    /** The key under which summary.json lists the files of its plan. */
-    static final String FILES = "files";
-
-    static void write(Path file, Mission s, PlanOutput.Result r, List<String> otherFiles) throws IOException {
+    static void write(Path file, Mission s, PlanResult r, List<String> otherFiles) throws IOException {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("title", s.title());
         root.put("scenario", s.source().fileName());
@@ -84,8 +82,8 @@ final class SummaryJson {
             m.put("min_light_time_s", nan(t.minLightTime()));
             m.put("max_light_time_s", nan(t.maxLightTime()));
             m.put("ill_conditioned_light_times", t.illConditioned());
-            BudgetTally.Figures b = t.budget();
-            if (b != null) {
+            if (t.budget().isPresent()) {
+                BudgetTally.Figures b = t.budget().get();
                 Map<String, Object> bm = new LinkedHashMap<>();
                 bm.put("worst_margin_db", nan(b.worstMarginDb()));
                 bm.put("best_margin_db", nan(b.bestMarginDb()));
@@ -127,7 +125,7 @@ final class SummaryJson {
         }
         root.put("cutoffs", cutoffs);
         List<Object> exchanges = new ArrayList<>();
-        for (PlanOutput.ExchangeTally e : r.exchanges()) {
+        for (ExchangeTally e : r.exchanges()) {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("name", e.name());
             m.put("round_trips", e.roundTrips());
@@ -148,7 +146,7 @@ final class SummaryJson {
         List<String> files = new ArrayList<>(otherFiles);
         files.add(file.getFileName().toString());
         files.sort(null);
-        root.put(FILES, files);
+        root.put(OutputFolder.FILES_KEY, files);
         new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), root);
     }
 

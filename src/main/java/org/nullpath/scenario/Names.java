@@ -3,6 +3,9 @@ package org.nullpath.scenario;
 import java.util.Locale;
 import java.util.Set;
 import java.util.regex.Pattern;
+import java.util.stream.Collectors;
+
+import org.nullpath.mission.OutputNames;
 
 /**
  * Rules for the names a scenario gives to stations, craft, links and exchanges. Link and exchange names
@@ -21,7 +24,8 @@ final class Names {
             "lpt1", "lpt2", "lpt3", "lpt4", "lpt5", "lpt6", "lpt7", "lpt8", "lpt9");
 
     /** Base names of the CSV files nullpath itself writes beside the per-link CSV files. */
-    private static final Set<String> OUTPUT_NAMES = Set.of("cutoffs", "horizons", "windows");
+    private static final Set<String> OUTPUT_NAMES = OutputNames.FIXED.stream().filter(n -> n.endsWith(".csv"))
+            .map(n -> n.substring(0, n.length() - ".csv".length())).collect(Collectors.toUnmodifiableSet());
 
     private Names() {
     }
@@ -55,8 +59,9 @@ final class Names {
         if (OUTPUT_NAMES.contains(base)) {
             return "link name '" + linkName + "' is taken by nullpath's own output file " + base + ".csv";
         }
-        if (base.startsWith("exchanges-")) {
-            return "link names starting with 'exchanges-' are taken by the exchange output files";
+        if (base.startsWith(OutputNames.EXCHANGE_PREFIX)) {
+            return "link names starting with '" + OutputNames.EXCHANGE_PREFIX + "' are taken by the exchange output"
+                    + " files";
         }
         return null;
     }

@@ -2,6 +2,9 @@ package org.nullpath.schedule;
 
 import org.nullpath.link.Budget;
 
+import static org.nullpath.schedule.Extremes.max;
+import static org.nullpath.schedule.Extremes.min;
+
 /**
  * What a link's budget came to over its delivered messages (mutable while the schedule runs; read the
  * finished values through {@link #snapshot()}).
@@ -34,22 +37,6 @@ public final class BudgetTally {
         closing += b.closes() ? 1 : 0;
         outOfTuning += b.inTuningRange() ? 0 : 1;
         overRate += b.withinDopplerRate() ? 0 : 1;
-    }
-
-    /** The smaller, skipping NaN on either side (values that do not exist). */
-    private static double min(double a, double b) {
-        if (Double.isNaN(b)) {
-            return a;
-        }
-        return Double.isNaN(a) ? b : Math.min(a, b);
-    }
-
-    /** The larger, skipping NaN on either side. */
-    private static double max(double a, double b) {
-        if (Double.isNaN(b)) {
-            return a;
-        }
-        return Double.isNaN(a) ? b : Math.max(a, b);
     }
 
     /**

@@ -63,8 +63,8 @@ public final class Deadlines {
                 : new HorizonRow(link, false, Double.NaN, Double.NaN);
     }
 
-    /** Runs one exchange plan, giving each round trip to {@code sink}; returns how many completed. */
-    public static long exchange(Exchange e, Consumer<ExchangeRow> sink) {
+    /** Runs one exchange plan, giving each round trip to {@code sink}; returns its tally. */
+    public static ExchangeTally exchange(Exchange e, Consumer<ExchangeRow> sink) {
         Worldline querier = e.query().sender();
         Worldline responder = e.query().receiver();
         long n = e.count();
@@ -78,7 +78,7 @@ public final class Deadlines {
                         + " s): " + x.getMessage(), x);
             }
         }
-        return complete;
+        return new ExchangeTally(e.name(), n, complete);
     }
 
     private static boolean roundTrip(Worldline querier, Worldline responder, Exchange e, long k,

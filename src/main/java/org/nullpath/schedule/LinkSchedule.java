@@ -1,5 +1,6 @@
 package org.nullpath.schedule;
 
+import java.util.Optional;
 import java.util.function.Consumer;
 
 import org.nullpath.lightcone.Conditioning;
@@ -10,12 +11,14 @@ import org.nullpath.link.Budget;
 import org.nullpath.link.Doppler;
 import org.nullpath.link.DopplerRate;
 import org.nullpath.link.LinkBudget;
-import org.nullpath.link.LinkTerms;
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.worldline.State;
 import org.nullpath.worldline.Worldline;
+
+import static org.nullpath.schedule.Extremes.max;
+import static org.nullpath.schedule.Extremes.min;
 
 /**
  * Computes every planned message of one link, in send order, handing each row to a sink as soon as it
@@ -29,25 +32,40 @@ public final class LinkSchedule {
     public static final double ILL_CONDITIONED = 1e-12;
 
     /**
-     * One message fully evaluated: its light path, the bodies' motion factors for its photon direction,
-     * the Doppler factor and (with link terms) the budget; all but the path are null when it never arrives.
+     * One message fully evaluated: its light path and, when it arrives, what the arrival carries.
+     *
+     * @param path    the signal's path (its send event always; its receive event when it arrives)
+     * @param arrival the bodies' motion factors, the Doppler factor and the budget; empty when it never arrives
      */
-    public record Evaluated(SignalPath path, MotionFactor sendFactor, MotionFactor receiveFactor,
-                            Doppler.Factor doppler, Budget budget) {
+    public record Evaluated(SignalPath path, Optional<Arrival> arrival) {
     }
 
-    /** Evaluates the message sent at {@code sendClock}; {@code terms} may be null (no budget). */
-    public static Evaluated evaluate(Worldline sender, Worldline receiver, LinkTerms terms, double sendClock) {
+    /**
+     * What an arriving message carries.
+     *
+     * @param sendFactor    the sender's motion factor gamma (1 - beta . k) for the photon direction
+     * @param receiveFactor the receiver's motion factor
+     * @param doppler       the Doppler factor
+     * @param budget        the frequency plan and link budget, when the link has terms
+     */
+    public record Arrival(MotionFactor sendFactor, MotionFactor receiveFactor, Doppler.Factor doppler,
+                          Optional<Budget> budget) {
+    }
+
+    /** Evaluates the message sent on {@code link} at sender clock {@code sendClock}. */
+    public static Evaluated evaluate(Link link, double sendClock) {
+        Worldline sender = link.sender();
+        Worldline receiver = link.receiver();
         SignalPath p = signal(sender, receiver, sendClock);
         if (!p.delivered()) {
-            return new Evaluated(p, null, null, null, null);
+            return new Evaluated(p, Optional.empty());
         }
         Vec3 k = Doppler.photonDirection(p);
         MotionFactor fs = MotionFactor.of(p.send(), k);
         MotionFactor fr = MotionFactor.of(p.receive(), k);
         Doppler.Factor d = Doppler.of(fs, fr);
-        Budget b = terms == null ? null : LinkBudget.evaluate(terms, p, d, DopplerRate.of(sender, receiver, p, d));
-        return new Evaluated(p, fs, fr, d, b);
+        Optional<Budget> b = link.terms().map(t -> LinkBudget.evaluate(t, p, d, DopplerRate.of(sender, receiver, p, d)));
+        return new Evaluated(p, Optional.of(new Arrival(fs, fr, d, b)));
     }
 
     /** One signal on a link from a send clock: the path, or never. */
@@ -71,8 +89,7 @@ public final class LinkSchedule {
     public static LinkTally run(Mission mission, Link link, Consumer<MessageRow> sink) {
         Worldline sender = link.sender();
         Worldline receiver = link.receiver();
-        LinkTerms terms = link.terms().orElse(null);
-        BudgetTally budgets = terms == null ? null : new BudgetTally(terms.carrierHz());
+        Optional<BudgetTally> budgets = link.terms().map(t -> new BudgetTally(t.carrierHz()));
         SendOrder order = new SendOrder(mission.plansOn(link));
         long index = 0;
         long delivered = 0;
@@ -88,42 +105,39 @@ public final class LinkSchedule {
             index++;
             Evaluated ev;
             try {
-                ev = evaluate(sender, receiver, terms, clock);
+                ev = evaluate(link, clock);
             } catch (ArithmeticException e) {
                 throw new RangeException("links." + link.name(), "message " + index + " (send clock " + clock
                         + " s): " + e.getMessage(), e);
             }
             SignalPath p = ev.path();
-            MessageRow row;
-            if (p.delivered()) {
+            Optional<MessageRow.Delivery> delivery = Optional.empty();
+            if (ev.arrival().isPresent()) {
+                Arrival a = ev.arrival().get();
                 delivered++;
-                Doppler.Factor d = ev.doppler();
+                Doppler.Factor d = a.doppler();
                 double rxClock = p.receive().clock();
-                Budget budget = ev.budget();
-                if (budget != null) {
-                    budgets.add(budget);
-                }
+                Optional<Budget> budget = a.budget();
+                budget.ifPresent(b -> budgets.orElseThrow().add(b));
                 double interval = previous == null ? Double.NaN : arrivalInterval(sender, receiver, previous, p);
-                row = new MessageRow(index, clock, p.send().timeSeconds(), true, p.receive().timeSeconds(), rxClock,
-                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, budget,
-                        Conditioning.ofLightTime(p, ev.sendFactor(), ev.receiveFactor()));
-                if (row.lightTimeCondition() * Conditioning.EPSILON > ILL_CONDITIONED) {
+                double condition = Conditioning.ofLightTime(p, a.sendFactor(), a.receiveFactor());
+                delivery = Optional.of(new MessageRow.Delivery(p.receive().timeSeconds(), rxClock, p.lightTimeSeconds(),
+                        d.doppler(), d.offset(), interval, condition, budget));
+                if (condition * Conditioning.EPSILON > ILL_CONDITIONED) {
                     illConditioned++;
                 }
                 previous = p;
                 lastArrivalClock = rxClock;
-                minD = Double.isNaN(minD) ? d.doppler() : Math.min(minD, d.doppler());
-                maxD = Double.isNaN(maxD) ? d.doppler() : Math.max(maxD, d.doppler());
-                minT = Double.isNaN(minT) ? p.lightTimeSeconds() : Math.min(minT, p.lightTimeSeconds());
-                maxT = Double.isNaN(maxT) ? p.lightTimeSeconds() : Math.max(maxT, p.lightTimeSeconds());
+                minD = min(minD, d.doppler());
+                maxD = max(maxD, d.doppler());
+                minT = min(minT, p.lightTimeSeconds());
+                maxT = max(maxT, p.lightTimeSeconds());
             } else {
-                row = new MessageRow(index, clock, p.send().timeSeconds(), false, Double.NaN, Double.NaN, Double.NaN,
-                        Double.NaN, Double.NaN, Double.NaN, null, Double.NaN);
                 previous = null;
             }
-            sink.accept(row);
+            sink.accept(new MessageRow(index, clock, p.send().timeSeconds(), delivery));
         }
         return new LinkTally(link.name(), index, delivered, index - delivered, minD, maxD, minT, maxT,
-                lastArrivalClock, budgets == null ? null : budgets.snapshot(), illConditioned);
+                lastArrivalClock, budgets.map(BudgetTally::snapshot), illConditioned);
     }
 }

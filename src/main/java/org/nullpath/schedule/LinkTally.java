@@ -1,5 +1,7 @@
 package org.nullpath.schedule;
 
+import java.util.Optional;
+
 /**
  * What a link's schedule came to, for summaries.
  *
@@ -12,11 +14,11 @@ package org.nullpath.schedule;
  * @param minLightTime   shortest light time, s (NaN when none)
  * @param maxLightTime   longest light time, s (NaN when none)
  * @param lastArrivalClock receiver clock of the last arrival, s (NaN when none)
- * @param budget         link-budget figures, null when the link has no terms
+ * @param budget         link-budget figures, when the link has terms
  * @param illConditioned delivered messages whose light time is known to worse than 1e-12 relative because
  *                       the problem itself is ill-conditioned (condition number times 1.1e-16)
  */
 public record LinkTally(String link, long messages, long delivered, long never, double minDoppler,
                         double maxDoppler, double minLightTime, double maxLightTime, double lastArrivalClock,
-                        BudgetTally.Figures budget, long illConditioned) {
+                        Optional<BudgetTally.Figures> budget, long illConditioned) {
 }

@@ -1,24 +1,46 @@
 package org.nullpath.schedule;
 
+import java.util.Objects;
+import java.util.Optional;
+
 import org.nullpath.link.Budget;
 
 /**
- * One planned message and its fate (contract.md, {@code <link>.csv}). Values that do not exist are NaN.
+ * One planned message and its fate (a row of {@code <link>.csv}, docs/output-files.md).
  *
- * @param message          1, 2, ... within the link, in send order
- * @param sendClock        sender's clock at sending, s
- * @param sendTime         mission time of the send event, s
- * @param delivered        false when the message never arrives (beyond a horizon)
- * @param receiveTime      mission time of arrival, s
- * @param receiveClock     receiver's clock at arrival, s
- * @param lightTime        receiveTime - sendTime, solved for directly, s
- * @param doppler          f_rx / f_tx
- * @param frequencyOffset  doppler - 1, without cancellation
- * @param receiveInterval  receiver-clock time since the previous message of this link arrived, s
- * @param budget           frequency plan and link budget, null when the link has no terms or the message never arrives
- * @param lightTimeCondition relative condition number of the light time (see lightcone.Conditioning); NaN when never
+ * @param message   1, 2, ... within the link, in send order
+ * @param sendClock sender's clock at sending, s
+ * @param sendTime  mission time of the send event, s
+ * @param delivery  its arrival; empty when it never arrives (beyond a horizon)
  */
-public record MessageRow(long message, double sendClock, double sendTime, boolean delivered, double receiveTime,
-                         double receiveClock, double lightTime, double doppler, double frequencyOffset,
-                         double receiveInterval, Budget budget, double lightTimeCondition) {
+public record MessageRow(long message, double sendClock, double sendTime, Optional<Delivery> delivery) {
+    public MessageRow {
+        Objects.requireNonNull(delivery, "delivery");
+    }
+
+    /** True when the message arrives. */
+    public boolean delivered() {
+        return delivery.isPresent();
+    }
+
+    /**
+     * A message's arrival. A number that does not exist is NaN.
+     *
+     * @param receiveTime        mission time of arrival, s
+     * @param receiveClock       receiver's clock at arrival, s
+     * @param lightTime          receiveTime - sendTime, solved for directly, s
+     * @param doppler            f_rx / f_tx
+     * @param frequencyOffset    doppler - 1, without cancellation
+     * @param receiveInterval    receiver-clock time since the previous message of this link arrived, s (NaN for
+     *                           the first and after one that never arrives)
+     * @param lightTimeCondition relative condition number of the light time (see lightcone.Conditioning)
+     * @param budget             frequency plan and link budget, when the link has terms
+     */
+    public record Delivery(double receiveTime, double receiveClock, double lightTime, double doppler,
+                           double frequencyOffset, double receiveInterval, double lightTimeCondition,
+                           Optional<Budget> budget) {
+        public Delivery {
+            Objects.requireNonNull(budget, "budget");
+        }
+    }
 }

@@ -3,6 +3,7 @@ package org.nullpath.schedule;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
+import java.util.Optional;
 
 import org.nullpath.lightcone.SignalPath;
 import org.nullpath.link.Budget;
@@ -43,10 +44,10 @@ public final class SampledSeries {
      * @param lightTime    receiveTime - sendTime, solved for directly, s
      * @param doppler      f_rx / f_tx
      * @param frequencyOffset doppler - 1, computed without cancellation
-     * @param budget       frequency plan and link budget; null when the link has no terms
+     * @param budget       frequency plan and link budget, when the link has terms
      */
     public record Sample(double sendClock, double sendTime, double receiveTime, double receiveClock,
-                         double lightTime, double doppler, double frequencyOffset, Budget budget) {
+                         double lightTime, double doppler, double frequencyOffset, Optional<Budget> budget) {
     }
 
     /**
@@ -107,7 +108,6 @@ public final class SampledSeries {
         }
         Worldline sender = link.sender();
         Worldline receiver = link.receiver();
-        LinkTerms terms = link.terms().orElse(null);
         HorizonRow horizon = Deadlines.horizonRow(link.name(), sender, receiver);
         double[] range = plannedRange(mission, link);
         if (range == null) {
@@ -131,13 +131,13 @@ public final class SampledSeries {
         int skipped = 0;
         for (double clock : clocks) {
             try {
-                LinkSchedule.Evaluated ev = LinkSchedule.evaluate(sender, receiver, terms, clock);
+                LinkSchedule.Evaluated ev = LinkSchedule.evaluate(link, clock);
                 SignalPath p = ev.path();
-                if (!p.delivered()) {
+                if (ev.arrival().isEmpty()) {
                     continue;
                 }
-                Doppler.Factor d = ev.doppler();
-                Budget b = ev.budget();
+                Doppler.Factor d = ev.arrival().get().doppler();
+                Optional<Budget> b = ev.arrival().get().budget();
                 samples.add(new Sample(clock, p.send().timeSeconds(), p.receive().timeSeconds(), p.receive().clock(),
                         p.lightTimeSeconds(), d.doppler(), d.offset(), b));
             } catch (ArithmeticException e) {

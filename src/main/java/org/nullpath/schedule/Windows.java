@@ -62,7 +62,7 @@ public final class Windows {
         Worldline receiver = link.receiver();
         Horizon horizon = LightCone.horizon(sender, receiver);
         double lastClock = horizon.exists() ? horizon.lastSend().clock() : Double.POSITIVE_INFINITY;
-        Conditions c = new Conditions(terms, sender, receiver, lastClock);
+        Conditions c = new Conditions(link, terms, lastClock);
 
         double from = w.from();
         double to = w.to();
@@ -144,7 +144,7 @@ public final class Windows {
     }
 
     /** The four condition functions at a send clock: >= 0 where the condition holds. */
-    private record Conditions(LinkTerms terms, Worldline sender, Worldline receiver, double lastClock) {
+    private record Conditions(Link link, LinkTerms terms, double lastClock) {
         double[] values(double clock) {
             double[] v = new double[4];
             v[0] = lastClock - clock > 0 ? Math.min(lastClock - clock, 1.0) : -1.0;
@@ -152,12 +152,12 @@ public final class Windows {
                 Arrays.fill(v, 1, 4, -1.0);
                 return v;
             }
-            LinkSchedule.Evaluated ev = LinkSchedule.evaluate(sender, receiver, terms, clock);
-            if (!ev.path().delivered()) {
+            LinkSchedule.Evaluated ev = LinkSchedule.evaluate(link, clock);
+            if (ev.arrival().isEmpty()) {
                 Arrays.fill(v, -1.0);
                 return v;
             }
-            Budget b = ev.budget();
+            Budget b = ev.arrival().get().budget().orElseThrow();
             v[1] = Double.isNaN(b.marginDb()) ? 1.0 : b.marginDb(); // at one place the link trivially closes
             v[2] = terms.hasTuningRange()
                     ? Math.min(b.rxFrequencyHz() - terms.tuningMinHz(), terms.tuningMaxHz() - b.rxFrequencyHz())
