@@ -118,7 +118,7 @@ final class CraftReader {
         int last = list.items().size() - 1;
         for (int i = 0; i <= last; i++) {
             LegSite[] site = new LegSite[1];
-            LegSpec leg = leg(list.items().get(i), Values.item(path, i), values, site, context);
+            LegSpec leg = leg(list.items().get(i), KeyPaths.item(path, i), values, site, context);
             if (leg == null) {
                 ok = false;
                 continue;
@@ -150,7 +150,7 @@ final class CraftReader {
         Entry type = null;
         boolean ok = true;
         for (Entry e : m.entries().values()) {
-            String keyPath = Values.child(path, e.key());
+            String keyPath = KeyPaths.child(path, e.key());
             if (!LEG_TYPES.contains(e.key())) {
                 String hint = Spelling.closest(e.key(), LEG_TYPES);
                 problems.atKey(e, keyPath, "unknown leg type '" + e.key() + "'"
@@ -167,7 +167,7 @@ final class CraftReader {
         if (!ok || type == null) {
             return null;
         }
-        String typePath = Values.child(path, type.key());
+        String typePath = KeyPaths.child(path, type.key());
         switch (type.key()) {
             case "rocket" -> {
                 return ProfiledLegReader.rocket(type.value(), typePath, values, site);

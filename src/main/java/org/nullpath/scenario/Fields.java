@@ -64,7 +64,7 @@ final class Fields {
             if (known.contains(e.key())) {
                 continue;
             }
-            String keyPath = Values.child(path, e.key());
+            String keyPath = KeyPaths.child(path, e.key());
             String special = specials.get(e.key());
             if (special != null) {
                 values.problems().atKey(e, keyPath, special);
@@ -118,7 +118,7 @@ final class Fields {
     }
 
     String path(String key) {
-        return Values.child(path, key);
+        return KeyPaths.child(path, key);
     }
 
     boolean has(String key) {

@@ -220,13 +220,13 @@ final class LinkTermsReader {
             return null;
         }
         Values v = rx.values();
-        double lo = v.quantity(l.items().get(0), Values.item(path, 0), Dimension.FREQUENCY);
-        double hi = v.quantity(l.items().get(1), Values.item(path, 1), Dimension.FREQUENCY);
+        double lo = v.quantity(l.items().get(0), KeyPaths.item(path, 0), Dimension.FREQUENCY);
+        double hi = v.quantity(l.items().get(1), KeyPaths.item(path, 1), Dimension.FREQUENCY);
         if (Double.isNaN(lo) || Double.isNaN(hi)) {
             return null;
         }
         if (!(lo > 0)) {
-            rx.problems().at(l.items().get(0), Values.item(path, 0), "the tuning range's low edge must be positive");
+            rx.problems().at(l.items().get(0), KeyPaths.item(path, 0), "the tuning range's low edge must be positive");
             return null;
         }
         if (!(lo < hi)) {

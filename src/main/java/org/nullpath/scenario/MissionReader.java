@@ -39,7 +39,7 @@ import org.nullpath.worldline.InertialWorldline;
  * here; message plans, cut-offs, exchanges and window scans in {@link PlanReader}. Every problem is added to
  * the document's {@link Problems}; a {@link Mission} is returned only when there is none.
  */
-final class MissionReader {
+final class MissionReader implements References {
     static final List<String> TOP_KEYS = List.of("title", "epoch", "stations", "craft", "links", "messages", "cutoffs",
             "exchanges", "windows");
     static final List<String> STATION_KEYS = List.of("position", "velocity", "clock-offset");
@@ -51,9 +51,6 @@ final class MissionReader {
         LINK_KEYS = List.copyOf(k);
     }
 
-    /** What the reader knows about a link while reading references to it (also when the link has problems). */
-    record LinkInfo(String name, String from, String to, boolean hasTerms) {
-    }
 
     private final Values values;
     private final Problems problems;
@@ -62,7 +59,7 @@ final class MissionReader {
     private final Map<String, Boolean> declared = new LinkedHashMap<>();
     private final Map<String, Station> stations = new LinkedHashMap<>();
     private final Map<String, Craft> craft = new LinkedHashMap<>();
-    private final Map<String, LinkInfo> linkInfo = new LinkedHashMap<>();
+    private final Map<String, LinkRef> linkInfo = new LinkedHashMap<>();
     private final Map<String, Link> links = new LinkedHashMap<>();
 
     MissionReader(Values values, ScenarioText source) {
@@ -172,7 +169,7 @@ final class MissionReader {
     }
 
     private void station(Entry e) {
-        String p = Values.child("stations", e.key());
+        String p = KeyPaths.child("stations", e.key());
         boolean nameOk = declare(e, p, false);
         Fields f = Fields.of(e.value(), p, values, "a station", STATION_KEYS);
         if (!f.ok()) {
@@ -192,7 +189,7 @@ final class MissionReader {
     }
 
     private void craft(Entry e) {
-        String p = Values.child("craft", e.key());
+        String p = KeyPaths.child("craft", e.key());
         boolean nameOk = declare(e, p, true);
         Craft c = CraftReader.read(e.key(), e.value(), p, values, stations, path);
         if (nameOk && c != null) {
@@ -201,7 +198,7 @@ final class MissionReader {
     }
 
     private void link(Entry e, Map<String, String> lowerCase) {
-        String p = Values.child("links", e.key());
+        String p = KeyPaths.child("links", e.key());
         String bad = Names.problem(e.key(), "a link name");
         if (bad == null) {
             bad = Names.outputClash(e.key());
@@ -217,13 +214,13 @@ final class MissionReader {
         }
         Fields f = Fields.of(e.value(), p, values, "a link", LINK_KEYS);
         if (!f.ok()) {
-            linkInfo.put(e.key(), new LinkInfo(e.key(), null, null, false));
+            linkInfo.put(e.key(), new LinkRef(e.key(), null, null, false));
             return;
         }
         String from = nodeRef(f, "from");
         String to = nodeRef(f, "to");
         boolean hasTerms = LinkTermsReader.hasTerms(f);
-        linkInfo.put(e.key(), new LinkInfo(e.key(), from, to, hasTerms));
+        linkInfo.put(e.key(), new LinkRef(e.key(), from, to, hasTerms));
         if (from != null && from.equals(to)) {
             f.problemAt("to", "a link joins two different nodes; both ends are '" + from + "'");
             from = null;
@@ -255,23 +252,23 @@ final class MissionReader {
         return s != null ? s : craft.get(name);
     }
 
-    /** The craft of that name, null when there is none (or it has problems). */
-    Craft craft(String name) {
+    @Override
+    public Craft craft(String name) {
         return name == null ? null : craft.get(name);
     }
 
-    /** The resolved link of a reference, null when the link has problems. */
-    Link link(LinkInfo info) {
+    @Override
+    public Link link(LinkRef info) {
         return links.get(info.name());
     }
 
-    /** A required reference to a link; null when absent or unknown (problem added). */
-    LinkInfo linkRef(Fields f, String key) {
+    @Override
+    public LinkRef linkRef(Fields f, String key) {
         String name = f.text(key, "the name of a link");
         if (name == null) {
             return null;
         }
-        LinkInfo info = linkInfo.get(name);
+        LinkRef info = linkInfo.get(name);
         if (info == null) {
             f.problemAt(key, "unknown link '" + name + "'" + hint(name, linkInfo.keySet(), "links"));
         }

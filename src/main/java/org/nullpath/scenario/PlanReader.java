@@ -18,7 +18,7 @@ import org.nullpath.worldline.StraightLineCraft;
 
 /**
  * Reads the scenario's plans: message plans, cut-offs, exchanges and window scans, each resolved against
- * the links the {@link MissionReader} has read.
+ * the nodes and links read before them.
  */
 final class PlanReader {
     static final List<String> MESSAGE_KEYS = List.of("link", "first", "last", "every", "at");
@@ -34,11 +34,11 @@ final class PlanReader {
     }
 
     private final Values values;
-    private final MissionReader reader;
+    private final References reader;
     private final Map<String, Node> cutoffNames = new HashMap<>();
     private final Map<String, Node> exchangeNames = new HashMap<>();
 
-    PlanReader(Values values, MissionReader reader) {
+    PlanReader(Values values, References reader) {
         this.values = values;
         this.reader = reader;
     }
@@ -47,7 +47,7 @@ final class PlanReader {
     <T> List<T> all(List<Node> items, String section, ItemReader<T> one) {
         List<T> out = new ArrayList<>();
         for (int i = 0; i < items.size(); i++) {
-            T t = one.read(items.get(i), Values.item(section, i));
+            T t = one.read(items.get(i), KeyPaths.item(section, i));
             if (t != null) {
                 out.add(t);
             }
@@ -68,7 +68,7 @@ final class PlanReader {
         if (!f.ok()) {
             return null;
         }
-        MissionReader.LinkInfo link = reader.linkRef(f, "link");
+        LinkRef link = reader.linkRef(f, "link");
         boolean series = SERIES_KEYS.stream().anyMatch(f::has);
         if (f.has("at") && series) {
             String k = SERIES_KEYS.stream().filter(f::has).findFirst().orElseThrow();
@@ -140,7 +140,7 @@ final class PlanReader {
         if (name != null && !unique(f, name, names, "cut-off", false)) {
             name = null;
         }
-        MissionReader.LinkInfo link = reader.linkRef(f, "link");
+        LinkRef link = reader.linkRef(f, "link");
         double arriveBy = f.quantity("arrive-by", Dimension.TIME);
         if (name == null || link == null || Double.isNaN(arriveBy)
                 || !within(f, "arrive-by", link.to(), arriveBy, "the deadline")) {
@@ -178,8 +178,8 @@ final class PlanReader {
                 name = null;
             }
         }
-        MissionReader.LinkInfo query = reader.linkRef(f, "query");
-        MissionReader.LinkInfo reply = reader.linkRef(f, "reply");
+        LinkRef query = reader.linkRef(f, "query");
+        LinkRef reply = reader.linkRef(f, "reply");
         boolean linksOk = query != null && reply != null;
         if (linksOk && query.from() != null && query.to() != null && reply.from() != null && reply.to() != null
                 && !(reply.from().equals(query.to()) && reply.to().equals(query.from()))) {
@@ -214,7 +214,7 @@ final class PlanReader {
         if (!f.ok()) {
             return null;
         }
-        MissionReader.LinkInfo link = reader.linkRef(f, "link");
+        LinkRef link = reader.linkRef(f, "link");
         if (link != null && !link.hasTerms()) {
             f.problemAt("link", "link '" + link.name() + "' has no radio or optical terms, so it has no windows to"
                     + " scan; give it carrier, transmitter, receiver, data-rate and a requirement");

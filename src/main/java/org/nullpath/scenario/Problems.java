@@ -33,12 +33,12 @@ final class Problems {
     }
 
     /** A problem located at a node's value. */
-    void at(YamlTree.Node node, String key, String message) {
+    void at(Located node, String key, String message) {
         add(node.line(), node.column(), key, message);
     }
 
     /** A problem located at a mapping key. */
-    void atKey(YamlTree.Entry entry, String key, String message) {
+    void atKey(Located entry, String key, String message) {
         add(entry.line(), entry.column(), key, message);
     }
 

@@ -32,16 +32,6 @@ final class Values {
         return problems;
     }
 
-    /** {@code path.key}, or {@code key} at the top. */
-    static String child(String path, String key) {
-        return path.isEmpty() ? key : path + "." + key;
-    }
-
-    /** {@code path[i]}. */
-    static String item(String path, int i) {
-        return path + "[" + i + "]";
-    }
-
     /** Words for what a node is, for "got ..." in messages. */
     static String describe(Node n) {
         if (n instanceof MapNode) {
@@ -136,7 +126,7 @@ final class Values {
         boolean ok = true;
         for (int i = 0; i < 3; i++) {
             Node e = l.items().get(i);
-            c[i] = d == Dimension.DIMENSIONLESS ? number(e, item(path, i)) : quantity(e, item(path, i), d);
+            c[i] = d == Dimension.DIMENSIONLESS ? number(e, KeyPaths.item(path, i)) : quantity(e, KeyPaths.item(path, i), d);
             ok &= !Double.isNaN(c[i]);
         }
         return ok ? new Vec3(c[0], c[1], c[2]) : null;
@@ -152,7 +142,7 @@ final class Values {
         List<Double> out = new ArrayList<>(l.items().size());
         boolean ok = true;
         for (int i = 0; i < l.items().size(); i++) {
-            double q = quantity(l.items().get(i), item(path, i), d);
+            double q = quantity(l.items().get(i), KeyPaths.item(path, i), d);
             ok &= !Double.isNaN(q);
             out.add(q);
         }

@@ -66,7 +66,7 @@ final class YamlTree {
     }
 
     /** A value in the tree. */
-    sealed interface Node permits MapNode, ListNode, Scalar {
+    sealed interface Node extends Located permits MapNode, ListNode, Scalar {
         int line();
 
         int column();
@@ -79,7 +79,7 @@ final class YamlTree {
     }
 
     /** A key of a mapping, where it was written, and its value. */
-    record Entry(String key, int line, int column, Node value) {
+    record Entry(String key, int line, int column, Node value) implements Located {
     }
 
     /** A mapping: keys in file order (a repeated key keeps its first value; the repeat is a problem). */
@@ -301,12 +301,12 @@ final class YamlTree {
                 }
                 JsonLocation at = p.currentTokenLocation();
                 String key = text();
-                Node value = value(next(), depth + 1, Values.child(path, key));
+                Node value = value(next(), depth + 1, KeyPaths.child(path, key));
                 size = grow(size, value, line, column, path);
                 height = Math.max(height, value.height() + 1);
                 Entry first = entries.get(key);
                 if (first != null) {
-                    problems.add(at.getLineNr(), at.getColumnNr(), Values.child(path, key), "key '" + key + "' is repeated (first given at line "
+                    problems.add(at.getLineNr(), at.getColumnNr(), KeyPaths.child(path, key), "key '" + key + "' is repeated (first given at line "
                             + first.line() + ", column " + first.column() + "); each key may appear once");
                 } else {
                     entries.put(key, new Entry(key, at.getLineNr(), at.getColumnNr(), value));
@@ -324,7 +324,7 @@ final class YamlTree {
                 if (t == JsonToken.END_ARRAY || t == null) {
                     break;
                 }
-                Node value = value(t, depth + 1, Values.item(path, items.size()));
+                Node value = value(t, depth + 1, KeyPaths.item(path, items.size()));
                 size = grow(size, value, line, column, path);
                 height = Math.max(height, value.height() + 1);
                 items.add(value);
