@@ -12,9 +12,9 @@ import org.nullpath.report.PlanResult;
 import org.nullpath.mission.Mission;
 import org.nullpath.schedule.RangeException;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
 /** {@code nullpath plan SCENARIO --out DIR}: the main job. */
@@ -26,14 +26,11 @@ final class PlanCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "SCENARIO", description = "the scenario file (YAML)")
-    Path scenario;
+    @Mixin
+    ScenarioInput input;
 
     @Option(names = "--out", required = true, paramLabel = "DIR", description = "folder to write into (created if missing)")
     Path out;
-
-    @Option(names = "--max-messages", paramLabel = "N", description = "cap on messages per plan (default: ${DEFAULT-VALUE})")
-    long maxMessages = Inputs.DEFAULT_MAX_MESSAGES;
 
     @Option(names = "--no-report", description = "do not write report.html")
     boolean noReport;
@@ -44,7 +41,7 @@ final class PlanCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
-        Mission s = Inputs.load(scenario, maxMessages, err);
+        Mission s = input.load(err);
         if (s == null) {
             return Main.INPUT_ERROR;
         }
@@ -59,7 +56,7 @@ final class PlanCommand implements Callable<Integer> {
             }
             return Main.FAILURE;
         } catch (RangeException e) {
-            err.println(scenario + ": " + e.key() + ": " + e.getMessage()
+            err.println(input.scenario + ": " + e.key() + ": " + e.getMessage()
                     + " (shorten the open-ended burn's use: plan sends, deadlines and scans before it gets that far)");
             return Main.INPUT_ERROR;
         } catch (RuntimeException e) {
