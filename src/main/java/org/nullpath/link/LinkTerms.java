@@ -1,7 +1,7 @@
 package org.nullpath.link;
 
 /**
- * The radio or optical terms of a one-way link (contract.md, "Link budget additions"). Frequencies are
+ * The radio or optical terms of a one-way link (docs/link-budget.md). Frequencies are
  * in the sender's frame unless named otherwise. Absent limits are NaN.
  *
  * @param carrierHz              nominal carrier frequency (from {@code carrier}, or c / {@code wavelength})

@@ -11,7 +11,7 @@ import org.nullpath.units.Constants;
 import org.nullpath.units.Dimension;
 import org.nullpath.units.Spelling;
 
-/** Reads the radio or optical terms of a link (contract.md, "Link budget additions"). */
+/** Reads the radio or optical terms of a link (docs/link-budget.md). */
 final class LinkTermsReader {
     /** Keys of a link mapping that belong to its terms; any of them makes the link carry terms. */
     static final List<String> TERM_KEYS = List.of("carrier", "wavelength", "precompensate", "transmitter", "receiver",

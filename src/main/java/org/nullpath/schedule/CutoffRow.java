@@ -1,7 +1,7 @@
 package org.nullpath.schedule;
 
 /**
- * The latest send on a link whose message still arrives by a deadline (contract.md, cutoffs.csv).
+ * The latest send on a link whose message still arrives by a deadline (docs/output-files.md, cutoffs.csv).
  *
  * @param name              the cut-off's name
  * @param link              link name

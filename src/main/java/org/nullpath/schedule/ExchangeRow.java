@@ -1,7 +1,7 @@
 package org.nullpath.schedule;
 
 /**
- * One query/response round trip (contract.md, exchanges-NAME.csv). Values that do not exist are NaN.
+ * One query/response round trip (docs/output-files.md, exchanges-NAME.csv). Values that do not exist are NaN.
  *
  * @param exchange            1, 2, ... within the exchange plan
  * @param querySendClock      querier's clock when the query leaves, s

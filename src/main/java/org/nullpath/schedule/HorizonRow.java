@@ -1,7 +1,7 @@
 package org.nullpath.schedule;
 
 /**
- * A link's horizon (contract.md, horizons.csv): the supremum of send times that still arrive.
+ * A link's horizon (docs/output-files.md, horizons.csv): the supremum of send times that still arrive.
  *
  * @param link          link name
  * @param hasHorizon    false when every send arrives

@@ -2,7 +2,7 @@ package org.nullpath.schedule;
 
 /**
  * A send-clock interval in which a message on a link would be received: margin >= 0, inside the
- * tuning range and within the Doppler-rate limit (contract.md, windows.csv).
+ * tuning range and within the Doppler-rate limit (docs/output-files.md, windows.csv).
  *
  * @param link        link name
  * @param opensClock  sender's clock where the window opens, s
