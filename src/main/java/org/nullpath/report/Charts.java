@@ -2,7 +2,6 @@ package org.nullpath.report;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
-import java.awt.Font;
 import java.awt.Stroke;
 import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
@@ -29,6 +28,22 @@ import org.jfree.data.xy.XYSeriesCollection;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.ViewBox;
 
+import static org.nullpath.report.Palette.AXIS_FONT;
+import static org.nullpath.report.Palette.BLACK;
+import static org.nullpath.report.Palette.BLUE;
+import static org.nullpath.report.Palette.FRAME;
+import static org.nullpath.report.Palette.GREEN;
+import static org.nullpath.report.Palette.GRID;
+import static org.nullpath.report.Palette.INK;
+import static org.nullpath.report.Palette.MUTED;
+import static org.nullpath.report.Palette.NOTE_FONT;
+import static org.nullpath.report.Palette.ORANGE;
+import static org.nullpath.report.Palette.PURPLE;
+import static org.nullpath.report.Palette.SKY_BLUE;
+import static org.nullpath.report.Palette.TICK_FONT;
+import static org.nullpath.report.Palette.VERMILLION;
+import static org.nullpath.report.Palette.YELLOW;
+
 /**
  * The report's charts: JFreeChart plots drawn to inline SVG with JFreeSVG, in nullpath's own plain
  * look. Colours come from the Okabe-Ito palette (Okabe and Ito, "Color Universal Design", 2008), which
@@ -47,24 +62,6 @@ final class Charts {
     }
 
     // Okabe-Ito palette
-    static final Color BLACK = new Color(0x000000);
-    static final Color ORANGE = new Color(0xE69F00);
-    static final Color SKY_BLUE = new Color(0x56B4E9);
-    static final Color GREEN = new Color(0x009E73);
-    static final Color YELLOW = new Color(0xF0E442);
-    static final Color BLUE = new Color(0x0072B2);
-    static final Color VERMILLION = new Color(0xD55E00);
-    static final Color PURPLE = new Color(0xCC79A7);
-
-    static final Color INK = new Color(0x222222);
-    static final Color GRID = new Color(0xE1E1E1);
-    static final Color FRAME = new Color(0x9A9A9A);
-    static final Color MUTED = new Color(0x6B6B6B);
-
-    static final Font AXIS_FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 13);
-    static final Font TICK_FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 11);
-    static final Font NOTE_FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 11);
-
     /** Width and height of a per-link chart, px (the SVG scales with the page). */
     static final int WIDTH = 900;
     static final int HEIGHT = 300;
@@ -187,7 +184,7 @@ final class Charts {
         for (Level l : levels) {
             ys.add(l.y());
         }
-        ValueAxis yAxis = y.log() ? logAxis(y.label(), ys) : linearAxis(y.label(), ys, 0.05, y.floorAtZero(), 5);
+        ValueAxis yAxis = y.log() ? Axes.log(y.label(), ys) : Axes.linear(y.label(), ys, 0.05, y.floorAtZero(), 5);
         CombinedRangeXYPlot plot = new CombinedRangeXYPlot(yAxis);
         plot.setGap(26);
         for (Panel p : panels) {
@@ -197,7 +194,7 @@ final class Charts {
                     xs.add(v);
                 }
             }
-            XYPlot sub = new XYPlot(dataset(p.lines(), y.log()), linearAxis(p.xLabel(), xs, 0.01, false, 5), null,
+            XYPlot sub = new XYPlot(dataset(p.lines(), y.log()), Axes.linear(p.xLabel(), xs, 0.01, false, 5), null,
                     renderer(p.lines()));
             style(sub);
             if (band != null) {
@@ -249,8 +246,8 @@ final class Charts {
                 ys.add(v);
             }
         }
-        XYPlot plot = new XYPlot(dataset(lines), linearAxis(xLabel, xs, 0.01, false, 6),
-                linearAxis(yLabel, ys, 0.04, true, 6), renderer(lines));
+        XYPlot plot = new XYPlot(dataset(lines), Axes.linear(xLabel, xs, 0.01, false, 6),
+                Axes.linear(yLabel, ys, 0.04, true, 6), renderer(lines));
         style(plot);
         for (Mark mk : marks) {
             plot.addDomainMarker(domainMarker(mk), Layer.FOREGROUND);
@@ -315,101 +312,6 @@ final class Charts {
         plot.setRangeGridlineStroke(new BasicStroke(0.8f));
         plot.setAxisOffset(new RectangleInsets(2, 2, 2, 2));
         plot.setInsets(new RectangleInsets(2, 2, 2, 2));
-    }
-
-    static void styleAxis(ValueAxis a) {
-        a.setLabelFont(AXIS_FONT);
-        a.setLabelPaint(INK);
-        a.setTickLabelFont(TICK_FONT);
-        a.setTickLabelPaint(INK);
-        a.setAxisLinePaint(FRAME);
-        a.setTickMarkPaint(FRAME);
-        a.setTickMarkOutsideLength(3f);
-        a.setTickMarkInsideLength(0f);
-    }
-
-    /** Finite values' {min, max}; null when there are none. */
-    static double[] extent(List<Double> values) {
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (double v : values) {
-            if (Double.isFinite(v)) {
-                lo = Math.min(lo, v);
-                hi = Math.max(hi, v);
-            }
-        }
-        return lo <= hi ? new double[] {lo, hi} : null;
-    }
-
-    /** A linear axis over the values (padded by {@code pad} of the span) with about {@code ticks} steps. */
-    static NumberAxis linearAxis(String label, List<Double> values, double pad, boolean floorAtZero, int ticks) {
-        double[] e = extent(values);
-        double lo;
-        double hi;
-        if (e == null) {
-            lo = 0;
-            hi = 1;
-        } else {
-            lo = e[0];
-            hi = e[1];
-            double span = hi - lo;
-            if (!(span > Math.abs(hi) * 1e-12)) {
-                double half = Math.max(Math.abs(hi) * 0.01, 1e-12);
-                if (hi == 0) {
-                    half = 1;
-                }
-                lo -= half;
-                hi += half;
-            } else {
-                boolean nonNegative = lo >= 0;
-                lo -= pad * span;
-                hi += pad * span;
-                if (floorAtZero && nonNegative && lo < 0) {
-                    lo = 0;
-                }
-            }
-        }
-        return fixedAxis(label, lo, hi, ticks);
-    }
-
-    /** A linear axis over exactly [lo, hi]. */
-    static NumberAxis fixedAxis(String label, double lo, double hi, int ticks) {
-        NumberAxis a = new NumberAxis(label);
-        styleAxis(a);
-        a.setAutoRange(false);
-        a.setRange(lo, hi);
-        double step = Scales.step(hi - lo, ticks);
-        a.setTickUnit(new NumberTickUnit(step, Scales.ticks(step)));
-        a.setMinorTickMarksVisible(false);
-        return a;
-    }
-
-    /** A base-10 logarithmic axis over the positive values, labelled at powers of ten. */
-    static LogAxis logAxis(String label, List<Double> values) {
-        List<Double> positive = new ArrayList<>();
-        for (double v : values) {
-            if (v > 0) {
-                positive.add(v);
-            }
-        }
-        double[] e = extent(positive);
-        double lo = e == null ? 1 : e[0];
-        double hi = e == null ? 10 : e[1];
-        double llo = Math.log10(lo);
-        double lhi = Math.log10(hi);
-        double span = Math.max(lhi - llo, 0.5);
-        llo -= 0.05 * span;
-        lhi += 0.05 * span;
-        LogAxis a = new LogAxis(label);
-        styleAxis(a);
-        a.setAutoRange(false);
-        a.setRange(Math.pow(10, llo), Math.pow(10, lhi));
-        double decades = lhi - llo;
-        a.setTickUnit(new NumberTickUnit(Math.max(1, Math.ceil(decades / 6))));
-        a.setNumberFormatOverride(Scales.powers());
-        a.setMinorTickMarksVisible(true);
-        a.setMinorTickCount(9);
-        return a;
     }
 
     /**

@@ -59,9 +59,9 @@ final class LinkCharts {
         List<Charts.Mark> horizonMark = new ArrayList<>();
         List<Charts.Key> horizonKey = new ArrayList<>();
         if (ls.horizonCutsRange()) {
-            horizonMark.add(new Charts.Mark(tSend.of(ls.horizon().lastSendTime()), "horizon", Charts.PURPLE,
+            horizonMark.add(new Charts.Mark(tSend.of(ls.horizon().lastSendTime()), "horizon", Palette.PURPLE,
                     Charts.Dash.DOTTED));
-            horizonKey.add(Charts.Key.line("horizon: sends from here on never arrive", Charts.PURPLE,
+            horizonKey.add(Charts.Key.line("horizon: sends from here on never arrive", Palette.PURPLE,
                     Charts.Dash.DOTTED));
         }
         String link = ls.link();
@@ -73,8 +73,8 @@ final class LinkCharts {
                 "How long each sampled signal is in flight in the mission frame (arrival minus sending, in mission"
                         + " time).",
                 new Charts.YAxis("light time (" + lu.symbol() + ")", false, true),
-                List.of(series("light time", Charts.BLUE, Charts.Dash.SOLID, x1, x2, scaled(light, lu))),
-                horizonMark, null, List.of(), with(List.of(Charts.Key.line("light time", Charts.BLUE,
+                List.of(series("light time", Palette.BLUE, Charts.Dash.SOLID, x1, x2, scaled(light, lu))),
+                horizonMark, null, List.of(), with(List.of(Charts.Key.line("light time", Palette.BLUE,
                         Charts.Dash.SOLID)), horizonKey), x1Label, x2Label));
 
         // Doppler factor, or the frequency offset when the shift is small
@@ -87,10 +87,10 @@ final class LinkCharts {
                     "The Doppler factor D = f received / f sent: below 1 the signal arrives red-shifted (and the"
                             + " receiver's clock sees the sender's seconds stretched by 1/D), above 1 blue-shifted.",
                     new Charts.YAxis("Doppler factor D", log, false),
-                    List.of(series("Doppler factor", Charts.BLUE, Charts.Dash.SOLID, x1, x2, doppler)),
-                    horizonMark, null, List.of(new Charts.Level(1, "no shift", Charts.MUTED, Charts.Dash.DASHED)),
-                    with(List.of(Charts.Key.line("Doppler factor D", Charts.BLUE, Charts.Dash.SOLID),
-                            Charts.Key.line("D = 1: no shift", Charts.MUTED, Charts.Dash.DASHED)), horizonKey),
+                    List.of(series("Doppler factor", Palette.BLUE, Charts.Dash.SOLID, x1, x2, doppler)),
+                    horizonMark, null, List.of(new Charts.Level(1, "no shift", Palette.MUTED, Charts.Dash.DASHED)),
+                    with(List.of(Charts.Key.line("Doppler factor D", Palette.BLUE, Charts.Dash.SOLID),
+                            Charts.Key.line("D = 1: no shift", Palette.MUTED, Charts.Dash.DASHED)), horizonKey),
                     x1Label, x2Label));
         } else {
             int exp = maxOffset > 0 ? (int) Math.floor(Math.log10(maxOffset) / 3) * 3 : 0;
@@ -105,10 +105,10 @@ final class LinkCharts {
                     "The shift is small here, so the frequency offset D \u2212 1 (computed without cancellation)"
                             + " is drawn rather than D itself.",
                     new Charts.YAxis(label, false, false),
-                    List.of(series("offset", Charts.BLUE, Charts.Dash.SOLID, x1, x2, off)), horizonMark, null,
-                    List.of(new Charts.Level(0, "no shift", Charts.MUTED, Charts.Dash.DASHED)),
-                    with(List.of(Charts.Key.line("frequency offset D \u2212 1", Charts.BLUE, Charts.Dash.SOLID),
-                            Charts.Key.line("0: no shift", Charts.MUTED, Charts.Dash.DASHED)), horizonKey),
+                    List.of(series("offset", Palette.BLUE, Charts.Dash.SOLID, x1, x2, off)), horizonMark, null,
+                    List.of(new Charts.Level(0, "no shift", Palette.MUTED, Charts.Dash.DASHED)),
+                    with(List.of(Charts.Key.line("frequency offset D \u2212 1", Palette.BLUE, Charts.Dash.SOLID),
+                            Charts.Key.line("0: no shift", Palette.MUTED, Charts.Dash.DASHED)), horizonKey),
                     x1Label, x2Label));
         }
 
@@ -119,11 +119,11 @@ final class LinkCharts {
         double[] cy = scaled(rxClock, cu);
         double[] diagX = {min(cx), max(cx)};
         List<Charts.Line> clockLines = List.of(
-                new Charts.Line("equal readings", Charts.MUTED, Charts.Dash.DASHED, 1.2f, diagX, diagX.clone()),
-                new Charts.Line("clock image", Charts.BLUE, Charts.Dash.SOLID, 2.2f, cx, cy));
+                new Charts.Line("equal readings", Palette.MUTED, Charts.Dash.DASHED, 1.2f, diagX, diagX.clone()),
+                new Charts.Line("clock image", Palette.BLUE, Charts.Dash.SOLID, 2.2f, cx, cy));
         List<Charts.Mark> clockMarks = new ArrayList<>();
         if (ls.horizonCutsRange()) {
-            clockMarks.add(new Charts.Mark(cu.of(ls.horizon().lastSendClock()), "horizon", Charts.PURPLE,
+            clockMarks.add(new Charts.Mark(cu.of(ls.horizon().lastSendClock()), "horizon", Palette.PURPLE,
                     Charts.Dash.DOTTED));
         }
         String clockId = svgId(link, "clock-image");
@@ -134,8 +134,8 @@ final class LinkCharts {
                         + "'s clock when it arrives; the slope is 1/D. The dashed line marks equal readings.",
                 Charts.single(clockId, clockTitle, ls.from() + "'s clock at sending (" + cu.symbol() + ")",
                         ls.to() + "'s clock at arrival (" + cu.symbol() + ")", clockLines, clockMarks,
-                        with(List.of(Charts.Key.line("arrival reading against sending reading", Charts.BLUE,
-                                Charts.Dash.SOLID), Charts.Key.line("equal readings", Charts.MUTED,
+                        with(List.of(Charts.Key.line("arrival reading against sending reading", Palette.BLUE,
+                                Charts.Dash.SOLID), Charts.Key.line("equal readings", Palette.MUTED,
                                 Charts.Dash.DASHED)), horizonKey), Charts.WIDTH, 340));
 
         LinkTerms terms = ls.terms();
@@ -150,19 +150,19 @@ final class LinkCharts {
         double[] band = terms.hasTuningRange() ? new double[] {fu.of(terms.tuningMinHz()), fu.of(terms.tuningMaxHz())}
                 : null;
         List<Charts.Key> fKey = new ArrayList<>(List.of(
-                Charts.Key.line("received frequency (receiver's frame)", Charts.BLUE, Charts.Dash.SOLID),
+                Charts.Key.line("received frequency (receiver's frame)", Palette.BLUE, Charts.Dash.SOLID),
                 Charts.Key.line(terms.precompensate() ? "transmitted frequency: carrier / D (pre-compensated)"
-                        : "transmitted frequency (sender's frame)", Charts.VERMILLION, Charts.Dash.DASHED)));
+                        : "transmitted frequency (sender's frame)", Palette.VERMILLION, Charts.Dash.DASHED)));
         if (band != null) {
-            fKey.add(Charts.Key.band("receiver tuning range", Charts.YELLOW));
+            fKey.add(Charts.Key.band("receiver tuning range", Palette.YELLOW));
         }
         out.add(plot(link, "frequency", "Received frequency",
                 "The frequency the receiver sees, and what the sender transmits"
                         + (band == null ? "; no tuning range is given for this receiver."
                         : "; the shaded band is the receiver's tuning range."),
                 new Charts.YAxis("frequency (" + fu.symbol() + ")", false, false),
-                List.of(series("transmitted", Charts.VERMILLION, Charts.Dash.DASHED, x1, x2, scaled(tx, fu)),
-                        series("received", Charts.BLUE, Charts.Dash.SOLID, x1, x2, scaled(rx, fu))),
+                List.of(series("transmitted", Palette.VERMILLION, Charts.Dash.DASHED, x1, x2, scaled(tx, fu)),
+                        series("received", Palette.BLUE, Charts.Dash.SOLID, x1, x2, scaled(rx, fu))),
                 horizonMark, band, List.of(), with(fKey, horizonKey), x1Label, x2Label));
 
         // margin
@@ -172,10 +172,10 @@ final class LinkCharts {
                 (photons ? "Received photons per bit over the required number, in dB." : "Eb/N0 over the required"
                         + " Eb/N0, in dB.") + " The link closes where the margin is at or above 0 dB.",
                 new Charts.YAxis("margin (dB)", false, false),
-                List.of(series("margin", Charts.BLUE, Charts.Dash.SOLID, x1, x2, margin)), horizonMark, null,
-                List.of(new Charts.Level(0, "0 dB", Charts.BLACK, Charts.Dash.DASHED)),
-                with(List.of(Charts.Key.line("margin", Charts.BLUE, Charts.Dash.SOLID),
-                        Charts.Key.line("0 dB: closes at and above", Charts.BLACK, Charts.Dash.DASHED)), horizonKey),
+                List.of(series("margin", Palette.BLUE, Charts.Dash.SOLID, x1, x2, margin)), horizonMark, null,
+                List.of(new Charts.Level(0, "0 dB", Palette.BLACK, Charts.Dash.DASHED)),
+                with(List.of(Charts.Key.line("margin", Palette.BLUE, Charts.Dash.SOLID),
+                        Charts.Key.line("0 dB: closes at and above", Palette.BLACK, Charts.Dash.DASHED)), horizonKey),
                 x1Label, x2Label));
 
         // highest data rate that closes
@@ -184,12 +184,12 @@ final class LinkCharts {
         out.add(plot(link, "data-rate", "Highest data rate that closes",
                 "The highest sender-frame data rate that would close with zero margin, against the planned rate.",
                 new Charts.YAxis("data rate (" + ru.symbol() + ")", true, false),
-                List.of(series("highest rate", Charts.BLUE, Charts.Dash.SOLID, x1, x2, scaled(rate, ru))),
+                List.of(series("highest rate", Palette.BLUE, Charts.Dash.SOLID, x1, x2, scaled(rate, ru))),
                 horizonMark, null,
-                List.of(new Charts.Level(ru.of(terms.dataRateBps()), "planned", Charts.VERMILLION, Charts.Dash.DASHED)),
-                with(List.of(Charts.Key.line("highest rate that closes", Charts.BLUE, Charts.Dash.SOLID),
+                List.of(new Charts.Level(ru.of(terms.dataRateBps()), "planned", Palette.VERMILLION, Charts.Dash.DASHED)),
+                with(List.of(Charts.Key.line("highest rate that closes", Palette.BLUE, Charts.Dash.SOLID),
                         Charts.Key.line("planned rate (" + Scales.number(ru.of(terms.dataRateBps())) + " "
-                                + ru.symbol() + ")", Charts.VERMILLION, Charts.Dash.DASHED)), horizonKey),
+                                + ru.symbol() + ")", Palette.VERMILLION, Charts.Dash.DASHED)), horizonKey),
                 x1Label, x2Label));
         out.add(clockImage);
         return out;

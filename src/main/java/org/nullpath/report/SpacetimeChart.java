@@ -36,10 +36,10 @@ final class SpacetimeChart {
     static final int MIN_WIDTH = 480;
     static final int HEIGHT = 660;
 
-    private static final Color[] CRAFT = {Charts.BLUE, Charts.VERMILLION, Charts.GREEN, Charts.PURPLE};
-    private static final Color[] STATIONS = {Charts.BLACK, Charts.MUTED};
-    private static final Color[] RAYS = {Charts.ORANGE, Charts.SKY_BLUE, Charts.GREEN, Charts.PURPLE,
-        Charts.VERMILLION, Charts.BLUE};
+    private static final Color[] CRAFT = {Palette.BLUE, Palette.VERMILLION, Palette.GREEN, Palette.PURPLE};
+    private static final Color[] STATIONS = {Palette.BLACK, Palette.MUTED};
+    private static final Color[] RAYS = {Palette.ORANGE, Palette.SKY_BLUE, Palette.GREEN, Palette.PURPLE,
+        Palette.VERMILLION, Palette.BLUE};
     private static final Charts.Dash[] DASHES = {Charts.Dash.SOLID, Charts.Dash.DASHED, Charts.Dash.LONG_DASH};
     private static final Font LABEL = new Font(Font.SANS_SERIF, Font.BOLD, 12);
 
@@ -74,8 +74,8 @@ final class SpacetimeChart {
     }
 
     private static XYPlot frame(String xLabel, String yLabel, double x0, double x1, double y0, double y1) {
-        NumberAxis x = Charts.fixedAxis(xLabel, x0, x1, 8);
-        NumberAxis y = Charts.fixedAxis(yLabel, y0, y1, 8);
+        NumberAxis x = Axes.fixed(xLabel, x0, x1, 8);
+        NumberAxis y = Axes.fixed(yLabel, y0, y1, 8);
         XYPlot plot = new XYPlot(null, x, y, null);
         Charts.style(plot);
         AxisSpace left = new AxisSpace();
@@ -171,12 +171,12 @@ final class SpacetimeChart {
                 s.add(xs[i], ys[i], false);
             }
             horizons.addSeries(s);
-            horizonRenderer.setSeriesPaint(h, Charts.INK);
+            horizonRenderer.setSeriesPaint(h, Palette.INK);
             horizonRenderer.setSeriesStroke(h++, Charts.stroke(Charts.Dash.LONG_DASH, 1.5f));
             key.add(Charts.Key.line("horizon of " + line.link() + ": where " + line.body()
                     + "'s asymptote c t \u2212 s = L crosses the line; nothing sent on or above it reaches "
-                    + line.body(), Charts.INK, Charts.Dash.LONG_DASH));
-            labelLine(plot, "horizon of " + line.link(), xs, ys, x0, x1, y0, y1, Charts.INK);
+                    + line.body(), Palette.INK, Charts.Dash.LONG_DASH));
+            labelLine(plot, "horizon of " + line.link(), xs, ys, x0, x1, y0, y1, Palette.INK);
         }
         plot.setDataset(dataset, horizons);
         plot.setRenderer(dataset++, horizonRenderer);
@@ -236,8 +236,8 @@ final class SpacetimeChart {
             s.add(x, y, false);
             if (legLabelled.get(i)) {
                 XYTextAnnotation a = new XYTextAnnotation(legLabel(mark), x + 0.012 * (x1 - x0), y);
-                a.setFont(Charts.NOTE_FONT);
-                a.setPaint(Charts.INK);
+                a.setFont(Palette.NOTE_FONT);
+                a.setPaint(Palette.INK);
                 a.setTextAnchor(TextAnchor.CENTER_LEFT);
                 plot.addAnnotation(a);
             }
@@ -260,7 +260,7 @@ final class SpacetimeChart {
         }
         if (!byCraft.isEmpty()) {
             key.add(Charts.Key.point("start of a leg (numbered, with its kind; the last mark: the final coast;"
-                    + " labels that would overlap are left out)", Charts.INK));
+                    + " labels that would overlap are left out)", Palette.INK));
         }
         plot.setDataset(dataset, marks);
         plot.setRenderer(dataset, markRenderer);
@@ -341,7 +341,7 @@ final class SpacetimeChart {
         }
         int i = visible.get(visible.size() * 2 / 3);
         XYTextAnnotation a = new XYTextAnnotation(text, xs[i] + 0.01 * (x1 - x0), ys[i]);
-        a.setFont(Charts.NOTE_FONT);
+        a.setFont(Palette.NOTE_FONT);
         a.setPaint(c);
         a.setTextAnchor(TextAnchor.TOP_LEFT);
         plot.addAnnotation(a);

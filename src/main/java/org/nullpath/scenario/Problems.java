@@ -24,6 +24,14 @@ final class Problems {
         return file;
     }
 
+    /** A new list with the same problems, to go on from independently. */
+    Problems copy() {
+        Problems c = new Problems(file);
+        c.list.addAll(list);
+        c.dropped = dropped;
+        return c;
+    }
+
     void add(int line, int column, String key, String message) {
         if (list.size() < LIMIT) {
             list.add(new Problem(file, line, column, key, message));

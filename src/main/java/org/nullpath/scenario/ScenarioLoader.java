@@ -5,8 +5,6 @@ import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 
 import org.nullpath.mission.Mission;
-import org.nullpath.mission.ScenarioText;
-import org.nullpath.scenario.YamlTree.Node;
 
 /**
  * Reads a scenario file (docs/scenario-format.md) into a resolved {@link Mission}.
@@ -32,9 +30,7 @@ public final class ScenarioLoader {
      * @throws ScenarioException with every problem found, including a missing, unreadable or oversized file
      */
     public static Mission load(Path file) throws ScenarioException {
-        String name = file.toString();
-        String text = ScenarioBytes.readFile(file, name);
-        return read(text, name, file);
+        return ScenarioDocument.read(file).resolve();
     }
 
     /**
@@ -44,7 +40,7 @@ public final class ScenarioLoader {
      * @throws ScenarioException with every problem found
      */
     public static Mission load(String text, String displayName) throws ScenarioException {
-        return read(checkedText(text, displayName), displayName, pathOf(displayName));
+        return ScenarioDocument.of(text, displayName).resolve();
     }
 
     static String checkedText(String text, String displayName) throws ScenarioException {
@@ -62,14 +58,5 @@ public final class ScenarioLoader {
         } catch (InvalidPathException e) {
             return Path.of("scenario.yaml");
         }
-    }
-
-    private static Mission read(String text, String name, Path path) throws ScenarioException {
-        Problems problems = new Problems(name);
-        Node root = YamlTree.parse(text, problems);
-        if (root == null) {
-            throw problems.exception();
-        }
-        return new MissionReader(new Values(problems), new ScenarioText(path, text)).mission(root);
     }
 }
