@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.nio.file.Path;
+import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.nullpath.report.OutputFolder;
@@ -13,9 +14,7 @@ import org.nullpath.mission.Mission;
 import org.nullpath.schedule.RangeException;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
-import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
-import picocli.CommandLine.Spec;
 
 /** {@code nullpath plan SCENARIO --out DIR}: the main job. */
 @Command(name = "plan", mixinStandardHelpOptions = true,
@@ -23,9 +22,6 @@ import picocli.CommandLine.Spec;
                 + "them as CSV and JSON, with an HTML report, into a folder (all files appear together, or none on "
                 + "failure).")
 final class PlanCommand implements Callable<Integer> {
-    @Spec
-    CommandSpec spec;
-
     @Mixin
     ScenarioInput input;
 
@@ -40,11 +36,12 @@ final class PlanCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        PrintWriter err = spec.commandLine().getErr();
-        Mission s = input.load(err);
-        if (s == null) {
+        PrintWriter err = input.err();
+        Optional<Mission> loaded = input.load();
+        if (loaded.isEmpty()) {
             return Main.INPUT_ERROR;
         }
+        Mission s = loaded.get();
         PlanResult result;
         try (OutputFolder folder = OutputFolder.begin(out)) {
             result = PlanOutput.write(s, folder, !noReport, err);
@@ -66,7 +63,7 @@ final class PlanCommand implements Callable<Integer> {
             }
             return Main.FAILURE;
         }
-        TerminalSummary.print(spec.commandLine().getOut(), s, result, out);
+        TerminalSummary.print(input.out(), s, result, out);
         return 0;
     }
 }

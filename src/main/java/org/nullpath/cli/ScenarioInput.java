@@ -2,13 +2,16 @@ package org.nullpath.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.Optional;
 
 import org.nullpath.mission.Mission;
 import org.nullpath.scenario.Problem;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
+import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
 
 /** What every command that reads a scenario takes: the file and the cap on planned messages (a picocli mixin). */
 final class ScenarioInput {
@@ -18,11 +21,25 @@ final class ScenarioInput {
     @Parameters(index = "0", paramLabel = "SCENARIO", description = "the scenario file (YAML)")
     Path scenario;
 
+    @Spec(Spec.Target.MIXEE)
+    CommandSpec command;
+
     @Option(names = "--max-messages", paramLabel = "N", description = "cap on messages per plan (default: ${DEFAULT-VALUE})")
     long maxMessages = DEFAULT_MAX_MESSAGES;
 
-    /** Loads and validates; on problems prints them, one per line, and returns null. */
-    Mission load(PrintWriter err) {
+    /** The command's standard error. */
+    PrintWriter err() {
+        return command.commandLine().getErr();
+    }
+
+    /** The command's standard output. */
+    PrintWriter out() {
+        return command.commandLine().getOut();
+    }
+
+    /** Loads and validates; on problems prints them on standard error, one per line, and returns empty. */
+    Optional<Mission> load() {
+        PrintWriter err = err();
         Mission s;
         try {
             s = ScenarioLoader.load(scenario);
@@ -30,14 +47,14 @@ final class ScenarioInput {
             for (Problem p : e.problems()) {
                 err.println(p.render());
             }
-            return null;
+            return Optional.empty();
         }
         long planned = s.plannedMessages();
         if (planned > maxMessages) {
             err.println(new Problem(scenario.toString(), 0, 0, "messages", planned + " messages planned, more than the"
                     + " cap of " + maxMessages + " per plan (raise it with --max-messages)").render());
-            return null;
+            return Optional.empty();
         }
-        return s;
+        return Optional.of(s);
     }
 }

@@ -8,6 +8,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.function.Function;
 
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
@@ -219,68 +220,69 @@ public final class HtmlReport {
         return "<td>" + Html.escape(text) + "</td>";
     }
 
-    private static void tables(StringBuilder h, PlanResult r) {
-        h.append("<section id=\"tables\">\n<h2>Cut-offs, horizons, windows and round trips</h2>\n");
+    /** A column of a report table: its header and the cell (HTML, escaped) of a row. */
+    private record Shown<R>(String header, Function<R, String> cell) {
+    }
 
-        h.append("<h3 id=\"table-cutoffs\">Cut-offs</h3>\n");
-        if (r.cutoffs().isEmpty()) {
-            h.append("<p class=\"empty\">No cut-offs are asked for in this scenario.</p>\n");
-        } else {
-            h.append("<p>The latest send on a link whose message still arrives by a deadline on the receiver's ")
-                    .append("clock.</p>\n<table class=\"grid\">\n<thead><tr><th>cut-off</th><th>link</th>")
-                    .append("<th>arrive by (receiver's clock)</th><th>latest send (sender's clock)</th>")
-                    .append("<th>latest send (mission time)</th><th>status</th></tr></thead>\n<tbody>\n");
-            for (CutoffRow c : r.cutoffs()) {
-                h.append("<tr>").append(cell(c.name())).append(cell(c.link())).append(time(c.arriveByClock()))
-                        .append(time(c.latestSendClock())).append(time(c.latestSendTime()))
-                        .append(cell(!c.reachable() ? "unreachable" : c.beforeStart()
-                                ? "ok, but the latest send lies before the mission starts" : "ok"))
-                        .append("</tr>\n");
-            }
-            h.append("</tbody>\n</table>\n");
+    /**
+     * A report table under its heading: the intro and the rows, or the {@code empty} note when there are no
+     * rows ({@code empty} null: the table is shown even then).
+     */
+    private static <R> void table(StringBuilder h, String id, String heading, String intro, String empty, List<R> rows,
+                                  List<Shown<R>> columns) {
+        h.append("<h3 id=\"").append(id).append("\">").append(heading).append("</h3>\n");
+        if (rows.isEmpty() && empty != null) {
+            h.append("<p class=\"empty\">").append(empty).append("</p>\n");
+            return;
         }
-
-        h.append("<h3 id=\"table-horizons\">Horizons</h3>\n<p>For each link, the last send that still arrives; ")
-                .append("a send at or after it never does.</p>\n<table class=\"grid\">\n<thead><tr><th>link</th>")
-                .append("<th>horizon</th><th>last send (sender's clock)</th><th>last send (mission time)</th>")
-                .append("</tr></thead>\n<tbody>\n");
-        for (HorizonRow hr : r.horizons()) {
-            h.append("<tr>").append(cell(hr.link())).append(cell(hr.hasHorizon() ? "yes" : "none"))
-                    .append(time(hr.lastSendClock())).append(time(hr.lastSendTime())).append("</tr>\n");
+        h.append("<p>").append(intro).append("</p>\n<table class=\"grid\">\n<thead><tr>");
+        for (Shown<R> c : columns) {
+            h.append("<th>").append(c.header()).append("</th>");
+        }
+        h.append("</tr></thead>\n<tbody>\n");
+        for (R r : rows) {
+            h.append("<tr>");
+            for (Shown<R> c : columns) {
+                h.append(c.cell().apply(r));
+            }
+            h.append("</tr>\n");
         }
         h.append("</tbody>\n</table>\n");
+    }
 
-        h.append("<h3 id=\"table-windows\">Link windows</h3>\n");
-        if (r.windows().isEmpty()) {
-            h.append("<p class=\"empty\">No link window was found (or none was asked for): a window needs a ")
-                    .append("<code>windows</code> entry on a link with link terms.</p>\n");
-        } else {
-            h.append("<p>Send-clock intervals in which a message would be received: margin at or above 0 dB, ")
-                    .append("inside the tuning range and within the Doppler-rate limit.</p>\n<table class=\"grid\">\n")
-                    .append("<thead><tr><th>link</th><th>opens (sender's clock)</th><th>closes (sender's clock)</th>")
-                    .append("<th>length</th><th>closed by</th></tr></thead>\n<tbody>\n");
-            for (WindowRow w : r.windows()) {
-                h.append("<tr>").append(cell(w.link())).append(time(w.opensClock())).append(time(w.closesClock()))
-                        .append(time(w.closesClock() - w.opensClock())).append(cell(w.closedBy())).append("</tr>\n");
-            }
-            h.append("</tbody>\n</table>\n");
-        }
-
-        h.append("<h3 id=\"table-round-trips\">Round trips</h3>\n");
-        if (r.exchanges().isEmpty()) {
-            h.append("<p class=\"empty\">No query and reply exchanges are planned in this scenario.</p>\n");
-        } else {
-            h.append("<p>Query and reply exchanges; each round trip's time on the querier's clock is in its ")
-                    .append("<code>exchanges-NAME.csv</code>.</p>\n<table class=\"grid\">\n<thead><tr>")
-                    .append("<th>exchange</th><th>planned</th><th>complete</th><th>never complete</th></tr></thead>\n")
-                    .append("<tbody>\n");
-            for (ExchangeTally e : r.exchanges()) {
-                h.append("<tr>").append(cell(e.name())).append(cell(Long.toString(e.roundTrips())))
-                        .append(cell(Long.toString(e.complete()))).append(cell(Long.toString(e.roundTrips() - e.complete())))
-                        .append("</tr>\n");
-            }
-            h.append("</tbody>\n</table>\n");
-        }
+    private static void tables(StringBuilder h, PlanResult r) {
+        h.append("<section id=\"tables\">\n<h2>Cut-offs, horizons, windows and round trips</h2>\n");
+        table(h, "table-cutoffs", "Cut-offs", "The latest send on a link whose message still arrives by a deadline on"
+                + " the receiver's clock.", "No cut-offs are asked for in this scenario.", r.cutoffs(), List.of(
+                new Shown<>("cut-off", c -> cell(c.name())),
+                new Shown<>("link", c -> cell(c.link())),
+                new Shown<>("arrive by (receiver's clock)", c -> time(c.arriveByClock())),
+                new Shown<>("latest send (sender's clock)", c -> time(c.latestSendClock())),
+                new Shown<>("latest send (mission time)", c -> time(c.latestSendTime())),
+                new Shown<>("status", c -> cell(!c.reachable() ? "unreachable" : c.beforeStart()
+                        ? "ok, but the latest send lies before the mission starts" : "ok"))));
+        table(h, "table-horizons", "Horizons", "For each link, the last send that still arrives; a send at or after it"
+                + " never does.", null, r.horizons(), List.of(
+                new Shown<>("link", x -> cell(x.link())),
+                new Shown<>("horizon", x -> cell(x.hasHorizon() ? "yes" : "none")),
+                new Shown<>("last send (sender's clock)", x -> time(x.lastSendClock())),
+                new Shown<>("last send (mission time)", x -> time(x.lastSendTime()))));
+        table(h, "table-windows", "Link windows", "Send-clock intervals in which a message would be received: margin"
+                + " at or above 0 dB, inside the tuning range and within the Doppler-rate limit.", "No link window was"
+                + " found (or none was asked for): a window needs a <code>windows</code> entry on a link with link"
+                + " terms.", r.windows(), List.of(
+                new Shown<>("link", w -> cell(w.link())),
+                new Shown<>("opens (sender's clock)", w -> time(w.opensClock())),
+                new Shown<>("closes (sender's clock)", w -> time(w.closesClock())),
+                new Shown<>("length", w -> time(w.closesClock() - w.opensClock())),
+                new Shown<>("closed by", w -> cell(w.closedBy()))));
+        table(h, "table-round-trips", "Round trips", "Query and reply exchanges; each round trip's time on the"
+                + " querier's clock is in its <code>exchanges-NAME.csv</code>.", "No query and reply exchanges are"
+                + " planned in this scenario.", r.exchanges(), List.of(
+                new Shown<>("exchange", e -> cell(e.name())),
+                new Shown<>("planned", e -> cell(Long.toString(e.roundTrips()))),
+                new Shown<>("complete", e -> cell(Long.toString(e.complete()))),
+                new Shown<>("never complete", e -> cell(Long.toString(e.roundTrips() - e.complete())))));
         h.append("</section>\n");
     }
 

@@ -252,23 +252,26 @@ final class LinkCharts {
         return out;
     }
 
+    /** The largest finite value, 0 when there is none. */
     private static double max(double[] v) {
-        double m = Double.NEGATIVE_INFINITY;
-        for (double x : v) {
-            if (Double.isFinite(x)) {
-                m = Math.max(m, x);
-            }
-        }
-        return m == Double.NEGATIVE_INFINITY ? 0 : m;
+        return finiteExtent(v)[1];
     }
 
+    /** The smallest finite value, 0 when there is none. */
     private static double min(double[] v) {
-        double m = Double.POSITIVE_INFINITY;
+        return finiteExtent(v)[0];
+    }
+
+    /** {min, max} of the finite values; {0, 0} when there are none. */
+    private static double[] finiteExtent(double[] v) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = Double.NEGATIVE_INFINITY;
         for (double x : v) {
             if (Double.isFinite(x)) {
-                m = Math.min(m, x);
+                lo = Math.min(lo, x);
+                hi = Math.max(hi, x);
             }
         }
-        return m == Double.POSITIVE_INFINITY ? 0 : m;
+        return lo <= hi ? new double[] {lo, hi} : new double[] {0, 0};
     }
 }

@@ -137,7 +137,20 @@ final class Scales {
     }
 
     /** Fixed decimals, locale-free; "-0" shown as "0". */
-    private static final class Fixed extends NumberFormat {
+    /** A number format for axis labels only: whole numbers as doubles, no parsing. */
+    private abstract static class DisplayFormat extends NumberFormat {
+        @Override
+        public StringBuffer format(long number, StringBuffer toAppendTo, FieldPosition pos) {
+            return format((double) number, toAppendTo, pos);
+        }
+
+        @Override
+        public Number parse(String source, ParsePosition parsePosition) {
+            throw new UnsupportedOperationException("display only");
+        }
+    }
+
+    private static final class Fixed extends DisplayFormat {
         private final int decimals;
 
         Fixed(int decimals) {
@@ -152,19 +165,9 @@ final class Scales {
             }
             return toAppendTo.append(s);
         }
-
-        @Override
-        public StringBuffer format(long number, StringBuffer toAppendTo, FieldPosition pos) {
-            return format((double) number, toAppendTo, pos);
-        }
-
-        @Override
-        public Number parse(String source, ParsePosition parsePosition) {
-            throw new UnsupportedOperationException("display only");
-        }
     }
 
-    private static final class Powers extends NumberFormat {
+    private static final class Powers extends DisplayFormat {
         @Override
         public StringBuffer format(double number, StringBuffer toAppendTo, FieldPosition pos) {
             if (!(number > 0)) {
@@ -179,16 +182,6 @@ final class Scales {
                         .toPlainString());
             }
             return toAppendTo.append("10").append(superscript(exp));
-        }
-
-        @Override
-        public StringBuffer format(long number, StringBuffer toAppendTo, FieldPosition pos) {
-            return format((double) number, toAppendTo, pos);
-        }
-
-        @Override
-        public Number parse(String source, ParsePosition parsePosition) {
-            throw new UnsupportedOperationException("display only");
         }
     }
 }

@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
@@ -13,12 +14,9 @@ import org.nullpath.mission.Craft;
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
 import org.nullpath.mission.Station;
-import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.BudgetTally;
-import org.nullpath.schedule.CutoffRow;
-import org.nullpath.schedule.HorizonRow;
+import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.LinkTally;
-import org.nullpath.schedule.WindowRow;
 import org.nullpath.worldline.LegSpan;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.LineState;
@@ -101,29 +99,8 @@ final class SummaryJson {
             links.add(m);
         }
         root.put("links", links);
-        List<Object> horizons = new ArrayList<>();
-        for (HorizonRow h : r.horizons()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("link", h.link());
-            m.put("has_horizon", h.hasHorizon());
-            m.put("last_send_clock_s", nan(h.lastSendClock()));
-            m.put("last_send_time_s", nan(h.lastSendTime()));
-            horizons.add(m);
-        }
-        root.put("horizons", horizons);
-        List<Object> cutoffs = new ArrayList<>();
-        for (CutoffRow c : r.cutoffs()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("name", c.name());
-            m.put("link", c.link());
-            m.put("arrive_by_clock_s", c.arriveByClock());
-            m.put("latest_send_clock_s", nan(c.latestSendClock()));
-            m.put("latest_send_time_s", nan(c.latestSendTime()));
-            m.put("status", c.reachable() ? "ok" : "unreachable");
-            m.put("before_mission_start", c.beforeStart());
-            cutoffs.add(m);
-        }
-        root.put("cutoffs", cutoffs);
+        root.put("horizons", Tables.horizons(Optional.empty()).json(r.horizons()));
+        root.put("cutoffs", Tables.cutoffs(Optional.empty()).json(r.cutoffs()));
         List<Object> exchanges = new ArrayList<>();
         for (ExchangeTally e : r.exchanges()) {
             Map<String, Object> m = new LinkedHashMap<>();
@@ -133,16 +110,7 @@ final class SummaryJson {
             exchanges.add(m);
         }
         root.put("exchanges", exchanges);
-        List<Object> windows = new ArrayList<>();
-        for (WindowRow w : r.windows()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("link", w.link());
-            m.put("opens_send_clock_s", w.opensClock());
-            m.put("closes_send_clock_s", w.closesClock());
-            m.put("closed_by", w.closedBy());
-            windows.add(m);
-        }
-        root.put("windows", windows);
+        root.put("windows", Tables.WINDOWS.json(r.windows()));
         List<String> files = new ArrayList<>(otherFiles);
         files.add(file.getFileName().toString());
         files.sort(null);

@@ -6,7 +6,10 @@ import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVPrinter;
@@ -29,6 +32,19 @@ public record Table<R>(List<Column<R>> columns) {
     /** The header names. */
     public List<String> header() {
         return columns.stream().map(Column::name).toList();
+    }
+
+    /** The rows as JSON objects: column name to value, in column order. */
+    public List<Map<String, Object>> json(Iterable<R> rows) {
+        List<Map<String, Object>> out = new ArrayList<>();
+        for (R r : rows) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            for (Column<R> c : columns) {
+                m.put(c.name(), c.json(r));
+            }
+            out.add(m);
+        }
+        return out;
     }
 
     /** Opens {@code file} and writes the header; rows follow with {@link Writer#write}. */
@@ -62,7 +78,7 @@ public record Table<R>(List<Column<R>> columns) {
         /** Writes one row; an I/O failure surfaces as {@link UncheckedIOException}. */
         public void write(R row) {
             for (int i = 0; i < cells.length; i++) {
-                cells[i] = columns.get(i).cell().apply(row);
+                cells[i] = columns.get(i).cell(row);
             }
             try {
                 printer.printRecord((Object[]) cells);
