@@ -64,6 +64,8 @@ public sealed interface LegSpec {
 
     /** Scenario end keys of legs at constant acceleration. */
     List<String> BURN_END_KEYS = List.of("duration", "duration-mission", "until-speed", "until-distance");
+    /** Scenario end keys of a coast (it keeps its speed). */
+    List<String> COAST_END_KEYS = List.of("duration", "duration-mission", "until-distance");
     /** Scenario end keys of legs that end by their own physics unless told to end earlier. */
     List<String> LIMITED_END_KEYS = List.of("until-speed", "until-distance");
 
@@ -105,7 +107,7 @@ public sealed interface LegSpec {
 
         @Override
         public List<String> endKeys() {
-            return List.of("duration", "duration-mission", "until-distance");
+            return COAST_END_KEYS;
         }
 
         @Override
