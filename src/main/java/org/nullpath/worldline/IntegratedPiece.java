@@ -28,7 +28,9 @@ import org.nullpath.units.Constants;
  * free of cancellation at high rapidity. Tolerance: {@value #RELATIVE_TOLERANCE} relative per step;
  * positions and times meet 1e-10 relative against independent quadrature (tests). Inversions (the
  * proper time at which t, U or V reach a value) are Brent solves on the dense output, all of which
- * increase strictly with u.
+ * increase strictly with u. End conditions on the rapidity or the distance, which may turn, are found
+ * by {@link #firstReach} on monotonic stretches of the dense output; a leg ended early keeps the
+ * dense output and only moves its end ({@link #endedAt}).
  */
 final class IntegratedPiece implements Piece {
     /** Relative tolerance of each integration step. */
