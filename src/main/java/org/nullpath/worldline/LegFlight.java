@@ -79,6 +79,16 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
         return Double.POSITIVE_INFINITY;
     }
 
+    /** A number for a message: 12 significant digits, no trailing zeros, plain unless very large or small. */
+    static String num(double x) {
+        if (!Double.isFinite(x)) {
+            return Double.toString(x);
+        }
+        java.math.BigDecimal d = new java.math.BigDecimal(x).round(new java.math.MathContext(12)).stripTrailingZeros();
+        double a = Math.abs(x);
+        return a == 0 || (a >= 1e-4 && a < 1e15) ? d.toPlainString() : d.toString();
+    }
+
     final WorldlineException refusal(String message) {
         return WorldlineException.aboutEnd(start.index(), message);
     }
@@ -112,19 +122,19 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
                 return limit;
             }
             double eta = start.state().rapidity() + a * limit / C;
-            throw refusal(what + " is not reached before " + limitName + " (after " + limit
-                    + " s of craft clock, at speed " + Math.tanh(eta) + " c)");
+            throw refusal(what + " is not reached before " + limitName + " (after " + num(limit)
+                    + " s of craft clock, at speed " + num(Math.tanh(eta)) + " c)");
         }
 
         @Override
         public double afterClock(double seconds) {
-            return withinLimit(seconds, "duration " + seconds + " s");
+            return withinLimit(seconds, "duration " + num(seconds) + " s");
         }
 
         @Override
         public double afterMission(double seconds) {
             return withinLimit(Hyperbolic.properTimeForTime(start.state().rapidity(), a, seconds),
-                    "duration-mission " + seconds + " s");
+                    "duration-mission " + num(seconds) + " s");
         }
 
         @Override
@@ -140,11 +150,11 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
                 return 0;
             }
             if (a == 0 || Math.signum(dEta) != Math.signum(a)) {
-                throw refusal("until-speed " + speed / C + " c is never reached: the leg's acceleration "
+                throw refusal("until-speed " + num(speed / C) + " c is never reached: the leg's acceleration "
                         + (a == 0 ? "is zero" : "points away from it") + " (speed at the leg start "
-                        + Math.tanh(eta) + " c)");
+                        + num(Math.tanh(eta)) + " c)");
             }
-            return withinLimit(C * dEta / a, "until-speed " + speed / C + " c");
+            return withinLimit(C * dEta / a, "until-speed " + num(speed / C) + " c");
         }
 
         /** The first proper time at which the displacement is {@code d}: cosh(eta1) = cosh(eta0) + a d / c^2. */
@@ -160,7 +170,7 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
                     throw refusal("until-distance is never reached: the craft coasts "
                             + (v == 0 ? "at rest" : "the other way"));
                 }
-                return withinLimit(d / v, "until-distance " + d + " m");
+                return withinLimit(d / v, "until-distance " + num(d) + " m");
             }
             double x = a * d / Constants.C2;
             double ch = Math.cosh(eta);
@@ -187,7 +197,7 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
             if (!Double.isFinite(best)) {
                 throw refusal("until-distance is never reached by this burn");
             }
-            return withinLimit(best, "until-distance " + d + " m");
+            return withinLimit(best, "until-distance " + num(d) + " m");
         }
     }
 
@@ -217,14 +227,14 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
         }
 
         private String speeds() {
-            return "speed at the leg start " + Math.tanh(start.state().rapidity()) + " c, at its end "
-                    + Math.tanh(piece.rapidityAfter(start.state(), limit)) + " c";
+            return "speed at the leg start " + num(Math.tanh(start.state().rapidity())) + " c, at its end "
+                    + num(Math.tanh(piece.rapidityAfter(start.state(), limit))) + " c";
         }
 
         @Override
         public double afterClock(double seconds) {
             if (!(seconds <= limit)) {
-                throw refusal("duration " + seconds + " s is not reached before " + limitName + " (after " + limit
+                throw refusal("duration " + num(seconds) + " s is not reached before " + limitName + " (after " + num(limit)
                         + " s of craft clock)");
             }
             return seconds;
@@ -236,8 +246,8 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
                 return 0;
             }
             return found(seconds > 0 ? piece.firstReach(IntegratedPiece.T, seconds) : Double.NaN,
-                    "duration-mission " + seconds + " s",
-                    "after " + piece.timeOffset(start.state(), limit) + " s of mission time");
+                    "duration-mission " + num(seconds) + " s",
+                    "after " + num(piece.timeOffset(start.state(), limit)) + " s of mission time");
         }
 
         @Override
@@ -247,7 +257,7 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
             if (target == start.state().rapidity()) {
                 return 0;
             }
-            return found(piece.firstReach(IntegratedPiece.ETA, target), "until-speed " + speed / C + " c", speeds());
+            return found(piece.firstReach(IntegratedPiece.ETA, target), "until-speed " + num(speed / C) + " c", speeds());
         }
 
         @Override
@@ -255,8 +265,8 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
             if (d == 0) {
                 return 0;
             }
-            return found(piece.firstReach(IntegratedPiece.S, d), "until-distance " + d + " m",
-                    "distance covered by then " + piece.distanceOffset(start.state(), limit) + " m");
+            return found(piece.firstReach(IntegratedPiece.S, d), "until-distance " + num(d) + " m",
+                    "distance covered by then " + num(piece.distanceOffset(start.state(), limit)) + " m");
         }
     }
 }

@@ -345,7 +345,7 @@ class LimitedLegEndsTest {
         assertTrue(speed.getMessage().contains("until-speed 0.01 c is not reached before the profile's last sample"),
                 speed.getMessage());
         WorldlineException far = refused(0, profile(new LegSpec.UntilDistance(1e12)));
-        assertTrue(far.getMessage().contains("until-distance 1.0E12 m is not reached before the profile's last sample"),
+        assertTrue(far.getMessage().contains("until-distance 1000000000000 m is not reached before the profile's last sample"),
                 far.getMessage());
     }
 
