@@ -164,6 +164,24 @@ class LimitedLegEndsTest {
     }
 
     @Test
+    void anUntilSpeedOfExactlyWhatThePropellantBuysIsAccepted() {
+        // Ackeret: MR = 10, v_ex = c/2 gives (10 - 1) / (10 + 1) = 9/11 c, at the end of the burn, which
+        // the closed form may put an ulp beyond the limit (LegFlight.LIMIT_SLACK)
+        LegSpec.Rocket r = rocket(new LegSpec.UntilSpeed(9.0 / 11.0 * C));
+        LineState end = fly(r).legs().get(0).end();
+        assertRelative(r.burnTime(), end.clock(), 1e-12, "ends where the propellant is spent");
+        assertRelative(0.5 * Math.log(10), end.rapidity(), 1e-12, "with the whole rapidity budget");
+    }
+
+    @Test
+    void aLegWithItsOwnLimitCannotLastForEverAndABurnHasNoLimitToEndAt() {
+        WorldlineException forever = refused(0, rocket(new LegSpec.Forever()));
+        assertTrue(forever.getMessage().contains("cannot last for ever"), forever.getMessage());
+        WorldlineException beam = refused(0, new LegSpec.Burn(G0, new LegSpec.BeamOff()));
+        assertTrue(beam.getMessage().contains("no end of its own"), beam.getMessage());
+    }
+
+    @Test
     void aRocketWithoutAnEndBurnsItsWholeBudget() {
         LineState end = fly(new LegSpec.Rocket(G0, 0.5 * C, 10)).legs().get(0).end();
         assertRelative(0.5 * Math.log(10), end.rapidity(), 1e-15, "Ackeret's rapidity budget");
