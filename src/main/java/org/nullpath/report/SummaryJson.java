@@ -118,35 +118,14 @@ final class SummaryJson {
         new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), root);
     }
 
+    /** A leg's kind: its key in the scenario file. */
     static String kind(LegSpec spec) {
-        if (spec instanceof LegSpec.Burn) {
-            return "burn";
-        }
-        if (spec instanceof LegSpec.Coast) {
-            return "coast";
-        }
-        if (spec instanceof LegSpec.Rocket || spec instanceof LegSpec.ThrustRocket) {
-            return "rocket";
-        }
-        return spec instanceof LegSpec.Sail ? "sail" : "profile";
+        return spec.key();
     }
 
-    /** The propellant story of rocket legs: mass ratio, exhaust speed, rapidity budget. */
+    /** The leg's own figures (rockets: the propellant story; sails: the beam), as the leg names them. */
     private static void propellant(LegSpec spec, Map<String, Object> leg) {
-        if (spec instanceof LegSpec.Rocket r) {
-            leg.put("mass_ratio", r.massRatio());
-            leg.put("exhaust_speed_c", r.exhaustSpeedMetresPerSecond() / org.nullpath.units.Constants.C);
-            leg.put("rapidity_budget", r.rapidityBudget());
-        } else if (spec instanceof LegSpec.ThrustRocket t) {
-            leg.put("mass_ratio", t.initialMassKg() / t.burnoutMassKg());
-            leg.put("exhaust_speed_c", t.exhaustSpeedMetresPerSecond() / org.nullpath.units.Constants.C);
-            leg.put("propellant_kg", t.initialMassKg() - t.burnoutMassKg());
-            leg.put("burn_time_s", t.burnTime());
-        } else if (spec instanceof LegSpec.Sail sl) {
-            leg.put("beam_power_w", sl.beamPowerWatts());
-            leg.put("sail_mass_kg", sl.massKg());
-            leg.put("reflectivity", sl.reflectivity());
-        }
+        leg.putAll(spec.figures());
     }
 
     private static Map<String, Object> event(LineState st) {

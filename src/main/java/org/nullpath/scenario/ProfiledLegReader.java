@@ -13,8 +13,8 @@ import java.util.Map;
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVParser;
 import org.apache.commons.csv.CSVRecord;
-import org.nullpath.scenario.YamlTree.Node;
 import org.nullpath.mission.Station;
+import org.nullpath.scenario.YamlTree.Node;
 import org.nullpath.units.Constants;
 import org.nullpath.units.Dimension;
 import org.nullpath.units.Spelling;
@@ -22,21 +22,42 @@ import org.nullpath.worldline.InertialWorldline;
 import org.nullpath.worldline.LegSpec;
 
 /**
- * Reads the profiled legs of contract.md ("Profiled legs"): {@code rocket} (constant proper
+ * Reads the profiled legs (docs/scenario-format.md, "Legs"): {@code rocket} (constant proper
  * acceleration with exhaust speed and mass ratio, or constant thrust with initial and burnout mass),
  * {@code sail} (pushed by a beam from a station) and {@code profile} (a CSV table of acceleration).
+ * Each ends by its own physics unless an end key ({@link LegSpec#LIMITED_END_KEYS}) ends it earlier.
  */
 final class ProfiledLegReader {
     /** Largest profile table read, in bytes. */
     static final long MAX_PROFILE_BYTES = 16L * 1024 * 1024;
     static final String CLOCK_COLUMN = "clock_s";
     static final String ACCELERATION_COLUMN = "acceleration_m_s2";
+    static final List<String> ROCKET_KEYS = ConstantLegReader.keys(List.of("acceleration", "exhaust-speed",
+            "mass-ratio", "thrust", "initial-mass", "burnout-mass"), LegSpec.LIMITED_END_KEYS);
+    static final List<String> SAIL_KEYS = ConstantLegReader.keys(List.of("beam-from", "beam-power", "mass",
+            "reflectivity", "beam-off"), LegSpec.LIMITED_END_KEYS);
+    static final List<String> PROFILE_KEYS = ConstantLegReader.keys(List.of("file"), LegSpec.LIMITED_END_KEYS);
 
     private ProfiledLegReader() {
     }
 
-    static LegSpec rocket(Node n, String path, Values values, CraftReader.LegSite[] site) {
-        Fields f = Fields.of(n, path, values, "a rocket leg", CraftReader.ROCKET_KEYS);
+    /** An end condition given among the limited end keys, if any. */
+    private record End(boolean ok, LegSpec.LegEnd end, Node node, String path) {
+    }
+
+    /** The end written (ok with a null end when none is: the leg ends by its own physics); not ok on a problem. */
+    private static End end(Fields f) {
+        List<String> keys = LegSpec.LIMITED_END_KEYS;
+        String key = LegEndReader.key(f, keys, false);
+        if (key == null) {
+            return new End(!LegEndReader.any(f, keys), null, null, null);
+        }
+        LegSpec.LegEnd end = LegEndReader.read(f, key);
+        return new End(end != null, end, f.get(key), f.path(key));
+    }
+
+    static LegEntry.Read rocket(Node n, String path, LegEntry.Context context) {
+        Fields f = Fields.of(n, path, context.values(), "a rocket leg", ROCKET_KEYS);
         if (!f.ok()) {
             return null;
         }
@@ -52,7 +73,6 @@ final class ProfiledLegReader {
                     + Values.format(ve / Constants.C) + " c");
             ve = Double.NaN;
         }
-        site[0] = new CraftReader.LegSite(n, path, null, null);
         if (thrust) {
             for (String k : List.of("acceleration", "mass-ratio")) {
                 if (f.has(k)) {
@@ -77,10 +97,12 @@ final class ProfiledLegReader {
                         + " mass (" + Values.format(m0) + " kg)");
                 return null;
             }
-            if (Double.isNaN(force) || Double.isNaN(m0) || Double.isNaN(m1) || Double.isNaN(ve)) {
+            End end = end(f);
+            if (Double.isNaN(force) || Double.isNaN(m0) || Double.isNaN(m1) || Double.isNaN(ve) || !end.ok()) {
                 return null;
             }
-            return new LegSpec.ThrustRocket(force, m0, m1, ve);
+            return read(end.end() == null ? new LegSpec.ThrustRocket(force, m0, m1, ve)
+                    : new LegSpec.ThrustRocket(force, m0, m1, ve, end.end()), n, path, null, null, end);
         }
         for (String k : List.of("initial-mass", "burnout-mass")) {
             if (f.has(k)) {
@@ -100,18 +122,24 @@ final class ProfiledLegReader {
                     + Values.format(ratio));
             return null;
         }
-        if (Double.isNaN(a) || Double.isNaN(ratio) || Double.isNaN(ve)) {
+        End end = end(f);
+        if (Double.isNaN(a) || Double.isNaN(ratio) || Double.isNaN(ve) || !end.ok()) {
             return null;
         }
-        return new LegSpec.Rocket(a, ve, ratio);
+        return read(end.end() == null ? new LegSpec.Rocket(a, ve, ratio) : new LegSpec.Rocket(a, ve, ratio, end.end()),
+                n, path, null, null, end);
     }
 
-    static LegSpec sail(Node n, String path, Values values, CraftReader.LegSite[] site,
-                        Map<String, Station> stations) {
-        Fields f = Fields.of(n, path, values, "a sail leg", CraftReader.SAIL_KEYS);
+    private static LegEntry.Read read(LegSpec spec, Node n, String path, Node own, String ownPath, End end) {
+        return new LegEntry.Read(spec, new LegEntry.Site(n, path, own, ownPath, end.node(), end.path()));
+    }
+
+    static LegEntry.Read sail(Node n, String path, LegEntry.Context context) {
+        Fields f = Fields.of(n, path, context.values(), "a sail leg", SAIL_KEYS);
         if (!f.ok()) {
             return null;
         }
+        Map<String, Station> stations = context.stations();
         String from = f.text("beam-from", "the name of the station that beams");
         InertialWorldline station = null;
         if (from != null) {
@@ -142,19 +170,23 @@ final class ProfiledLegReader {
                     + Values.format(reflectivity));
             return null;
         }
+        End end = end(f);
         if (station == null || Double.isNaN(power) || Double.isNaN(mass) || Double.isNaN(reflectivity)
-                || Double.isNaN(off)) {
+                || Double.isNaN(off) || !end.ok()) {
             return null;
         }
-        site[0] = new CraftReader.LegSite(n, path, f.get("beam-from"), f.path("beam-from"));
-        return new LegSpec.Sail(station, power, mass, reflectivity, off);
+        return read(end.end() == null ? new LegSpec.Sail(station, power, mass, reflectivity, off)
+                : new LegSpec.Sail(station, power, mass, reflectivity, off, end.end()),
+                n, path, f.get("beam-from"), f.path("beam-from"), end);
     }
 
-    static LegSpec profile(Node n, String path, Values values, CraftReader.LegSite[] site, Path scenarioFile) {
-        Fields f = Fields.of(n, path, values, "a profile leg", CraftReader.PROFILE_KEYS);
+    static LegEntry.Read profile(Node n, String path, LegEntry.Context context) {
+        Fields f = Fields.of(n, path, context.values(), "a profile leg", PROFILE_KEYS);
         if (!f.ok()) {
             return null;
         }
+        Path scenarioFile = context.scenarioFile();
+        End end = end(f);
         String name = f.text("file", "the path of a CSV table of clock_s and acceleration_m_s2");
         if (name == null) {
             return null;
@@ -183,8 +215,11 @@ final class ProfiledLegReader {
             clocks[i] = rows.get(i)[0];
             accelerations[i] = rows.get(i)[1];
         }
-        site[0] = new CraftReader.LegSite(n, path, f.get("file"), f.path("file"));
-        return new LegSpec.Profile(clocks, accelerations);
+        if (!end.ok()) {
+            return null;
+        }
+        return read(end.end() == null ? new LegSpec.Profile(clocks, accelerations)
+                : new LegSpec.Profile(clocks, accelerations, end.end()), n, path, f.get("file"), f.path("file"), end);
     }
 
     /** Reads the table into {@code rows}; returns a problem naming the file, row and column, or null. */

@@ -10,6 +10,7 @@ import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
 import java.nio.file.Files;
+import java.nio.file.InvalidPathException;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.List;
@@ -83,5 +84,24 @@ final class ScenarioBytes {
 
     static ScenarioException single(String file, String message) {
         return new ScenarioException(List.of(new Problem(file, 0, 0, "", message)));
+    }
+
+    /** Scenario text given directly: refused when over the size limit, byte order mark removed. */
+    static String checkedText(String text, String displayName) throws ScenarioException {
+        long bytes = text.length() > MAX_FILE_BYTES ? text.length()
+                : text.getBytes(StandardCharsets.UTF_8).length;
+        if (bytes > MAX_FILE_BYTES) {
+            throw single(displayName, tooLarge(bytes));
+        }
+        return stripBom(text);
+    }
+
+    /** The path a scenario given as text is named by (its display name, when that is a path). */
+    static Path pathOf(String displayName) {
+        try {
+            return Path.of(displayName);
+        } catch (InvalidPathException e) {
+            return Path.of("scenario.yaml");
+        }
     }
 }

@@ -48,7 +48,7 @@ public final class ScenarioDocument {
      * @throws ScenarioException when it is too large or not one readable YAML document
      */
     public static ScenarioDocument of(String text, String displayName) throws ScenarioException {
-        return parse(ScenarioLoader.checkedText(text, displayName), displayName, ScenarioLoader.pathOf(displayName));
+        return parse(ScenarioBytes.checkedText(text, displayName), displayName, ScenarioBytes.pathOf(displayName));
     }
 
     private static ScenarioDocument parse(String text, String name, Path path) throws ScenarioException {

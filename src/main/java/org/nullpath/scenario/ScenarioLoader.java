@@ -1,7 +1,5 @@
 package org.nullpath.scenario;
 
-import java.nio.charset.StandardCharsets;
-import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 
 import org.nullpath.mission.Mission;
@@ -41,22 +39,5 @@ public final class ScenarioLoader {
      */
     public static Mission load(String text, String displayName) throws ScenarioException {
         return ScenarioDocument.of(text, displayName).resolve();
-    }
-
-    static String checkedText(String text, String displayName) throws ScenarioException {
-        long bytes = text.length() > MAX_FILE_BYTES ? text.length()
-                : text.getBytes(StandardCharsets.UTF_8).length;
-        if (bytes > MAX_FILE_BYTES) {
-            throw ScenarioBytes.single(displayName, ScenarioBytes.tooLarge(bytes));
-        }
-        return ScenarioBytes.stripBom(text);
-    }
-
-    static Path pathOf(String displayName) {
-        try {
-            return Path.of(displayName);
-        } catch (InvalidPathException e) {
-            return Path.of("scenario.yaml");
-        }
     }
 }

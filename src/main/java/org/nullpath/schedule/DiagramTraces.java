@@ -3,7 +3,6 @@ package org.nullpath.schedule;
 import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 
 import org.nullpath.lightcone.SignalPath;
@@ -295,15 +294,9 @@ public final class DiagramTraces {
         return new LegMark(craft, leg, kind, a, t, axis.dot(w.atTime(t).position()));
     }
 
-    /** A leg's kind in a word or two. */
+    /** A leg's kind in a word, as the leg labels itself. */
     static String kindOf(LegSpec spec) {
-        if (spec instanceof LegSpec.Burn) {
-            return "burn";
-        }
-        if (spec instanceof LegSpec.Coast) {
-            return "coast";
-        }
-        return spec.getClass().getSimpleName().toLowerCase(Locale.ROOT);
+        return spec.label();
     }
 
     private static List<Trace> traces(Mission s, Vec3 axis, double first, double last, List<LegMark> marks) {

@@ -28,20 +28,32 @@ import org.nullpath.units.Constants;
  * free of cancellation at high rapidity. Tolerance: {@value #RELATIVE_TOLERANCE} relative per step;
  * positions and times meet 1e-10 relative against independent quadrature (tests). Inversions (the
  * proper time at which t, U or V reach a value) are Brent solves on the dense output, all of which
- * increase strictly with u.
+ * increase strictly with u. End conditions on the rapidity or the distance, which may turn, are found
+ * by {@link #firstReach} on monotonic stretches of the dense output; a leg ended early keeps the
+ * dense output and only moves its end ({@link #endedAt}).
  */
 final class IntegratedPiece implements Piece {
     /** Relative tolerance of each integration step. */
     static final double RELATIVE_TOLERANCE = 1e-13;
 
     private static final double C = Constants.C;
-    private static final int ETA = 0;
-    private static final int T = 1;
-    private static final int S = 2;
+    /**
+     * Relative accuracy (in proper time, with an absolute floor of this times max(leg, 1 s)) to which an
+     * end condition is located on the dense output, and to which inversions are solved.
+     */
+    static final double ROOT_TOLERANCE = 1e-15;
+
+    static final int ETA = 0;
+    static final int T = 1;
+    static final int S = 2;
     private static final int U = 3;
     private static final int V = 4;
 
-    /** Proper acceleration as a function of proper time since the leg start and of rapidity. */
+    /**
+     * Proper acceleration as a function of proper time since the leg start and of rapidity. Between two
+     * consecutive knots of the integration it may change sign at most once (true of a linear profile
+     * and of laws of one sign), so the rapidity has at most one turning point there.
+     */
     interface Law {
         double at(double u, double eta);
     }
@@ -50,12 +62,90 @@ final class IntegratedPiece implements Piece {
     private final Law law;
     private final DenseOutputModel model;
     private final double uEnd;
+    private final double[] knots;
 
-    private IntegratedPiece(LineState start, Law law, DenseOutputModel model, double uEnd) {
+    private IntegratedPiece(LineState start, Law law, DenseOutputModel model, double uEnd, double[] knots) {
         this.start = start;
         this.law = law;
         this.model = model;
         this.uEnd = uEnd;
+        this.knots = knots;
+    }
+
+    /** The same motion ended after proper time {@code du} (at most the integrated span). */
+    IntegratedPiece endedAt(double du) {
+        if (du == uEnd) {
+            return this;
+        }
+        if (!(du >= 0 && du < uEnd)) {
+            throw new IllegalArgumentException("a leg can only end inside its integrated span");
+        }
+        return new IntegratedPiece(start, law, model, du, knots);
+    }
+
+    /**
+     * The first proper time in [0, end of the leg] at which component {@code k} of the state
+     * ({@link #ETA} absolute rapidity, {@link #T} or {@link #S} offset from the leg start) equals
+     * {@code target}; NaN when it never does. The leg is cut where the component may turn (for the
+     * rapidity, at the knots and where the acceleration changes sign; for the distance, also where the
+     * rapidity crosses zero; mission time only grows), so each part is monotonic and the first part
+     * whose ends bracket the target holds the first crossing, solved by Brent to
+     * {@link #ROOT_TOLERANCE}.
+     */
+    double firstReach(int k, double target) {
+        double[] cuts = k == T ? new double[] {0, uEnd} : monotoneParts(k == S);
+        for (int i = 0; i + 1 < cuts.length; i++) {
+            double a = cuts[i];
+            double b = cuts[i + 1];
+            double fa = y(a)[k] - target;
+            double fb = y(b)[k] - target;
+            if (fa == 0) {
+                return a;
+            }
+            if (Math.signum(fa) != Math.signum(fb)) {
+                return fb == 0 ? b : solve(x -> y(x)[k] - target, a, b);
+            }
+        }
+        return Double.NaN;
+    }
+
+    /** Cuts from 0 to the leg end between which the rapidity (or, with {@code distance}, the distance) is monotonic. */
+    private double[] monotoneParts(boolean distance) {
+        java.util.List<Double> cuts = new java.util.ArrayList<>();
+        cuts.add(0.0);
+        for (int i = 0; i + 1 < knots.length && knots[i] < uEnd; i++) {
+            double a = knots[i];
+            double b = Math.min(knots[i + 1], uEnd);
+            UnivariateFunction acc = x -> law.at(x, y(x)[ETA]);
+            double turn = signChange(acc, a, b);
+            double[] parts = Double.isNaN(turn) ? new double[] {a, b} : new double[] {a, turn, b};
+            for (int j = 0; j + 1 < parts.length; j++) {
+                if (distance) {
+                    double stop = signChange(x -> y(x)[ETA], parts[j], parts[j + 1]);
+                    if (!Double.isNaN(stop)) {
+                        cuts.add(stop);
+                    }
+                }
+                cuts.add(parts[j + 1]);
+            }
+        }
+        return cuts.stream().mapToDouble(Double::doubleValue).toArray();
+    }
+
+    /** Where {@code f} changes sign strictly inside [a, b] (it changes at most once there), or NaN. */
+    private double signChange(UnivariateFunction f, double a, double b) {
+        double fa = f.value(a);
+        double fb = f.value(b);
+        if (fa == 0 || fb == 0 || Math.signum(fa) == Math.signum(fb)) {
+            return Double.NaN;
+        }
+        return solve(f, a, b);
+    }
+
+    private double solve(UnivariateFunction f, double a, double b) {
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(ROOT_TOLERANCE,
+                ROOT_TOLERANCE * Math.max(uEnd, 1), 0.0, 5);
+        return solver.solve(400, f, a, b, AllowedSolution.ANY_SIDE);
     }
 
     /** Proper time the leg lasts. */
@@ -114,7 +204,7 @@ final class IntegratedPiece implements Piece {
                 all.append(part);
             }
         }
-        return new IntegratedPiece(start, law, all, knots[knots.length - 1]);
+        return new IntegratedPiece(start, law, all, knots[knots.length - 1], knots.clone());
     }
 
     /**
@@ -142,7 +232,7 @@ final class IntegratedPiece implements Piece {
             }
             y = end.getPrimaryState();
             if (y[U] >= targetU || end.getTime() < b) {
-                return new IntegratedPiece(start, law, all, end.getTime());
+                return new IntegratedPiece(start, law, all, end.getTime(), new double[] {0, end.getTime()});
             }
             a = b;
             b = 2 * b;
@@ -210,7 +300,7 @@ final class IntegratedPiece implements Piece {
         if (fHi == 0) {
             return hi - u0;
         }
-        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(1e-15, 1e-15 * Math.max(uEnd, 1),
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(ROOT_TOLERANCE, ROOT_TOLERANCE * Math.max(uEnd, 1),
                 0.0, 5);
         double u = solver.solve(400, x -> y(x)[k] - target, lo, hi, AllowedSolution.ANY_SIDE);
         return u - u0;

@@ -1,21 +1,18 @@
 package org.nullpath.worldline;
 
-import java.util.ArrayList;
-import java.util.Collections;
 import java.util.List;
 import java.util.Optional;
 
-import org.nullpath.spacetime.Hyperbolic;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
 
 /**
  * A craft moving on a straight line through its start position along a unit heading, flying a list of
- * legs (burns at constant proper acceleration and coasts). Before the first leg it coasts at its start
- * speed (for ever into the past); after a finite last leg it coasts for ever.
+ * legs (built by {@link FlightPlan}; this class answers the queries). Before the first leg it coasts at
+ * its start speed (for ever into the past); after a finite last leg it coasts for ever.
  *
  * <p>Every position and time inside a leg is computed from the leg's start state with the product
- * forms of {@link Hyperbolic}, so nothing cancels as {@code a u / c -> 0}. Moves along the worldline
+ * forms of {@link org.nullpath.spacetime.Hyperbolic}, so nothing cancels as {@code a u / c -> 0}. Moves along the worldline
  * ({@link #walkTime}, {@link #walkU}, {@link #walkV}) add offsets piece by piece, so a light time of a
  * few seconds far into a mission keeps its own relative precision.
  */
@@ -31,11 +28,7 @@ public final class StraightLineCraft implements Worldline {
     private final List<LegSpan> legs;
     private final Optional<Asymptote> asymptote;
 
-    /** One piece of the worldline at constant proper acceleration; lo/hi null where it runs to infinity. */
-    private record Segment(Piece piece, LineState ref, LineState lo, LineState hi) {
-    }
-
-    private StraightLineCraft(Vec3 origin, Vec3 heading, List<Segment> segments, List<LegSpan> legs) {
+    StraightLineCraft(Vec3 origin, Vec3 heading, List<Segment> segments, List<LegSpan> legs) {
         this.origin = origin;
         this.heading = heading;
         this.segments = segments;
@@ -44,7 +37,7 @@ public final class StraightLineCraft implements Worldline {
     }
 
     /**
-     * Builds a craft.
+     * Builds a craft (the legs are flown by {@link FlightPlan}).
      *
      * @param startPosition  where the first leg starts (metres)
      * @param heading        direction of the flight line (any non-zero length)
@@ -56,195 +49,8 @@ public final class StraightLineCraft implements Worldline {
      */
     public static StraightLineCraft of(Vec3 startPosition, Vec3 heading, double startTime, double startClock,
                                        double startSpeed, List<LegSpec> legSpecs) {
-        if (heading.isZero() || !heading.isFinite()) {
-            throw new WorldlineException(-1, "the heading must be a non-zero vector");
-        }
-        if (!(Math.abs(startSpeed) < C)) {
-            throw new WorldlineException(-1, "the start speed must be below c in magnitude");
-        }
-        Vec3 n = heading.unit();
-        double eta0 = Hyperbolic.rapidityOfBeta(startSpeed / C);
-        LineState start = new LineState(startClock, startTime, 0.0, eta0, 0, 0.0);
-        List<Segment> segs = new ArrayList<>();
-        segs.add(new Segment(new ConstantPiece(0.0), start, null, start));
-        List<LegSpan> spans = new ArrayList<>();
-        LineState cur = start;
-        boolean open = false;
-        for (int i = 0; i < legSpecs.size(); i++) {
-            LegSpec leg = legSpecs.get(i);
-            if (open) {
-                throw new WorldlineException(i - 1, "an open-ended leg must be the last leg");
-            }
-            if (leg.end() instanceof LegSpec.Forever) {
-                if (i != legSpecs.size() - 1) {
-                    throw new WorldlineException(i, "an open-ended leg (duration: forever) must be the last leg");
-                }
-                LineState lo = withSegment(cur, segs.size());
-                segs.add(new Segment(new ConstantPiece(leg.accelerationMetresPerSecond2()), lo, lo, null));
-                spans.add(new LegSpan(i, leg, lo, null));
-                open = true;
-                continue;
-            }
-            LineState lo = withSegment(cur, segs.size());
-            Piece piece;
-            double du;
-            if (leg instanceof LegSpec.ThrustRocket || leg instanceof LegSpec.Sail || leg instanceof LegSpec.Profile) {
-                IntegratedPiece ip = integrated(i, leg, lo, startPosition, n);
-                piece = ip;
-                du = ip.duration();
-            } else {
-                piece = new ConstantPiece(leg.accelerationMetresPerSecond2());
-                du = properTimeOfLeg(i, leg, cur);
-            }
-            LineState hi = new LineState(cur.clock() + du,
-                    cur.timeSeconds() + piece.timeOffset(lo, du),
-                    cur.along() + piece.distanceOffset(lo, du),
-                    piece.rapidityAfter(lo, du), segs.size(), du);
-            checkRepresentable(i, hi);
-            spans.add(new LegSpan(i, leg, lo, hi));
-            if (du > 0) {
-                segs.add(new Segment(piece, lo, lo, hi));
-            }
-            cur = hi;
-        }
-        if (!open) {
-            LineState lo = withSegment(cur, segs.size());
-            segs.add(new Segment(new ConstantPiece(0.0), lo, lo, null));
-        }
-        return new StraightLineCraft(startPosition, n, Collections.unmodifiableList(segs),
-                Collections.unmodifiableList(spans));
-    }
-
-    private static LineState withSegment(LineState s, int index) {
-        return new LineState(s.clock(), s.timeSeconds(), s.along(), s.rapidity(), index, 0.0);
-    }
-
-    private static void checkRepresentable(int leg, LineState s) {
-        if (!(Math.abs(s.rapidity()) <= MAX_RAPIDITY) || !Double.isFinite(s.timeSeconds())
-                || !Double.isFinite(s.along()) || !Double.isFinite(s.clock())) {
-            throw new WorldlineException(leg, "the leg reaches a rapidity or distance beyond what double precision can hold"
-                    + " (rapidity limit " + MAX_RAPIDITY + ")");
-        }
-    }
-
-    /** The integrated piece of a profiled leg starting at {@code lo}. */
-    private static IntegratedPiece integrated(int i, LegSpec leg, LineState lo, Vec3 origin, Vec3 n) {
-        if (leg instanceof LegSpec.ThrustRocket r) {
-            double f = r.thrustNewtons();
-            double m0 = r.initialMassKg();
-            double rate = Math.abs(f) / r.exhaustSpeedMetresPerSecond();
-            return IntegratedPiece.throughKnots(lo, (u, eta) -> f / (m0 - rate * u), new double[] {0, r.burnTime()});
-        }
-        if (leg instanceof LegSpec.Profile p) {
-            return IntegratedPiece.throughKnots(lo, (u, eta) -> p.at(u), p.clockSeconds());
-        }
-        LegSpec.Sail sail = (LegSpec.Sail) leg;
-        InertialWorldline st = sail.beamStation();
-        State atStart = st.atTime(lo.timeSeconds());
-        Vec3 rel = atStart.position().minus(origin);
-        double along = n.dot(rel);
-        Vec3 perpendicular = rel.minus(n.times(along));
-        double scale = Math.max(rel.norm(), Math.abs(lo.along()));
-        if (perpendicular.norm() > 1e-12 * scale || st.velocity().cross(n).norm() > 1e-12 * Math.max(st.velocity().norm(), 1)) {
-            throw new WorldlineException(i, "the beam station must sit (and move, if it moves) on the craft's flight line");
-        }
-        if (!(along < lo.along())) {
-            throw new WorldlineException(i, "the beam station must be behind the craft on its flight line at the start of the leg");
-        }
-        double etaStation = Hyperbolic.atanh(n.dot(st.velocity()) / C);
-        double k = (1 + sail.reflectivity()) * sail.beamPowerWatts() / (sail.massKg() * C);
-        State off = st.atClock(sail.beamOffClock());
-        double targetU = C * (off.timeSeconds() - lo.timeSeconds()) - (n.dot(off.position().minus(origin)) - lo.along());
-        if (!(targetU > 0)) {
-            throw new WorldlineException(i, "the beam is switched off before its light reaches the sail at the start of the leg");
-        }
-        return IntegratedPiece.untilU(lo, (u, eta) -> k * Math.exp(-2 * (eta - etaStation)), targetU, targetU / C);
-    }
-
-    /** Craft-clock duration of a finite leg starting at {@code cur}. */
-    private static double properTimeOfLeg(int i, LegSpec leg, LineState cur) {
-        double a = leg.accelerationMetresPerSecond2();
-        double eta = cur.rapidity();
-        double du;
-        LegSpec.LegEnd end = leg.end();
-        if (end instanceof LegSpec.ClockDuration d) {
-            du = d.seconds();
-        } else if (end instanceof LegSpec.MissionDuration d) {
-            du = Hyperbolic.properTimeForTime(eta, a, d.seconds());
-        } else if (end instanceof LegSpec.UntilSpeed s) {
-            du = properTimeUntilSpeed(i, a, eta, s.metresPerSecond());
-        } else if (end instanceof LegSpec.UntilDistance d) {
-            du = properTimeUntilDistance(i, a, eta, d.metres());
-        } else {
-            throw new WorldlineException(i, "unsupported leg end " + end);
-        }
-        if (!(du >= 0) || !Double.isFinite(du)) {
-            throw new WorldlineException(i, "the leg has a negative or undefined duration");
-        }
-        return du;
-    }
-
-    private static double properTimeUntilSpeed(int i, double a, double eta, double speed) {
-        if (!(Math.abs(speed) < C)) {
-            throw new WorldlineException(i, "until-speed must be below c in magnitude");
-        }
-        double target = speed / C;
-        double dEta = Math.abs(eta) < 0.5
-                ? Hyperbolic.deltaRapidity(target, Math.tanh(eta))
-                : Hyperbolic.rapidityOfBeta(target) - eta;
-        if (dEta == 0) {
-            return 0;
-        }
-        if (a == 0 || Math.signum(dEta) != Math.signum(a)) {
-            throw new WorldlineException(i, "until-speed " + speed / C + " c is never reached: the leg's acceleration "
-                    + (a == 0 ? "is zero" : "points away from it") + " (speed at the leg start "
-                    + Math.tanh(eta) + " c)");
-        }
-        return C * dEta / a;
-    }
-
-    /**
-     * Proper time until the displacement along the heading first equals {@code d}:
-     * cosh(eta1) = cosh(eta0) + a d / c^2 on the branch reached first.
-     */
-    private static double properTimeUntilDistance(int i, double a, double eta, double d) {
-        if (d == 0) {
-            return 0;
-        }
-        if (a == 0) {
-            double v = C * Math.sinh(eta);
-            if (v == 0 || Math.signum(v) != Math.signum(d)) {
-                throw new WorldlineException(i, "until-distance is never reached: the craft coasts "
-                        + (v == 0 ? "at rest" : "the other way"));
-            }
-            return d / v;
-        }
-        double x = a * d / Constants.C2;
-        double ch = Math.cosh(eta);
-        double sh = Math.sinh(eta);
-        double q = sh * sh + x * (2 * ch + x); // sinh^2(eta1)
-        if (!(q >= 0)) {
-            throw new WorldlineException(i, "until-distance is never reached: the burn turns the craft round before it gets there");
-        }
-        double s1 = Math.sqrt(q);
-        double best = Double.POSITIVE_INFINITY;
-        for (double target : new double[] {s1, -s1}) {
-            double dEta;
-            if (target * sh >= 0 && target + sh != 0) {
-                double diff = x * (2 * ch + x) / (target + sh);
-                dEta = Hyperbolic.deltaAsinh(target, sh, diff);
-            } else {
-                dEta = Hyperbolic.asinh(target) - eta;
-            }
-            double du = C * dEta / a;
-            if (du > 0 && du < best) {
-                best = du;
-            }
-        }
-        if (!Double.isFinite(best)) {
-            throw new WorldlineException(i, "until-distance is never reached by this burn");
-        }
-        return best;
+        FlightPlan.Flown f = FlightPlan.fly(startPosition, heading, startTime, startClock, startSpeed, legSpecs);
+        return new StraightLineCraft(f.origin(), f.heading(), f.segments(), f.legs());
     }
 
     public Vec3 origin() {
