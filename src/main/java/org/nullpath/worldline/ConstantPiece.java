@@ -22,37 +22,26 @@ record ConstantPiece(double a) implements Piece {
     }
 
     @Override
-    public double timeOffset(LineState cur, double du) {
-        return Hyperbolic.timeOffset(cur.rapidity(), a, du);
+    public double offset(Measure m, LineState cur, double du) {
+        double eta = cur.rapidity();
+        return switch (m) {
+            case CLOCK -> du;
+            case TIME -> Hyperbolic.timeOffset(eta, a, du);
+            case DISTANCE -> Hyperbolic.distanceOffset(eta, a, du);
+            case U -> Hyperbolic.uOffset(eta, a, du);
+            case V -> Hyperbolic.vOffset(eta, a, du);
+        };
     }
 
     @Override
-    public double distanceOffset(LineState cur, double du) {
-        return Hyperbolic.distanceOffset(cur.rapidity(), a, du);
-    }
-
-    @Override
-    public double uOffset(LineState cur, double du) {
-        return Hyperbolic.uOffset(cur.rapidity(), a, du);
-    }
-
-    @Override
-    public double vOffset(LineState cur, double du) {
-        return Hyperbolic.vOffset(cur.rapidity(), a, du);
-    }
-
-    @Override
-    public double properTimeForTime(LineState cur, double dt) {
-        return Hyperbolic.properTimeForTime(cur.rapidity(), a, dt);
-    }
-
-    @Override
-    public double properTimeForU(LineState cur, double dU) {
-        return Hyperbolic.properTimeForU(cur.rapidity(), a, dU);
-    }
-
-    @Override
-    public double properTimeForV(LineState cur, double dV) {
-        return Hyperbolic.properTimeForV(cur.rapidity(), a, dV);
+    public double properTimeFor(Measure m, LineState cur, double amount) {
+        double eta = cur.rapidity();
+        return switch (m) {
+            case CLOCK -> amount;
+            case TIME -> Hyperbolic.properTimeForTime(eta, a, amount);
+            case U -> Hyperbolic.properTimeForU(eta, a, amount);
+            case V -> Hyperbolic.properTimeForV(eta, a, amount);
+            case DISTANCE -> throw new UnsupportedOperationException("distance along a burn may turn back");
+        };
     }
 }

@@ -69,8 +69,8 @@ final class FlightPlan {
             }
             Piece piece = flight.piece(du);
             LineState hi = new LineState(cur.clock() + du,
-                    cur.timeSeconds() + piece.timeOffset(lo, du),
-                    cur.along() + piece.distanceOffset(lo, du),
+                    cur.timeSeconds() + piece.offset(Measure.TIME, lo, du),
+                    cur.along() + piece.offset(Measure.DISTANCE, lo, du),
                     piece.rapidityAfter(lo, du), segs.size(), du);
             checkRepresentable(i, hi);
             spans.add(new LegSpan(i, leg, lo, hi));

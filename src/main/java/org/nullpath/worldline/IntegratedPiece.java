@@ -322,37 +322,26 @@ final class IntegratedPiece implements Piece {
     }
 
     @Override
-    public double timeOffset(LineState cur, double du) {
-        return offset(cur, du, T);
+    public double offset(Measure m, LineState cur, double du) {
+        return m == Measure.CLOCK ? du : offset(cur, du, column(m));
     }
 
     @Override
-    public double distanceOffset(LineState cur, double du) {
-        return offset(cur, du, S);
+    public double properTimeFor(Measure m, LineState cur, double amount) {
+        if (m == Measure.DISTANCE) {
+            throw new UnsupportedOperationException("distance along a profiled leg may turn back");
+        }
+        return m == Measure.CLOCK ? amount : invert(cur, amount, column(m));
     }
 
-    @Override
-    public double uOffset(LineState cur, double du) {
-        return offset(cur, du, U);
-    }
-
-    @Override
-    public double vOffset(LineState cur, double du) {
-        return offset(cur, du, V);
-    }
-
-    @Override
-    public double properTimeForTime(LineState cur, double dt) {
-        return invert(cur, dt, T);
-    }
-
-    @Override
-    public double properTimeForU(LineState cur, double dU) {
-        return invert(cur, dU, U);
-    }
-
-    @Override
-    public double properTimeForV(LineState cur, double dV) {
-        return invert(cur, dV, V);
+    /** The integrated state's column of a measure other than the clock. */
+    private static int column(Measure m) {
+        return switch (m) {
+            case TIME -> T;
+            case DISTANCE -> S;
+            case U -> U;
+            case V -> V;
+            case CLOCK -> throw new IllegalArgumentException("the clock is the integration variable");
+        };
     }
 }

@@ -247,7 +247,7 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
             }
             return found(seconds > 0 ? piece.firstReach(IntegratedPiece.T, seconds) : Double.NaN,
                     "duration-mission " + num(seconds) + " s",
-                    "after " + num(piece.timeOffset(start.state(), limit)) + " s of mission time");
+                    "after " + num(piece.offset(Measure.TIME, start.state(), limit)) + " s of mission time");
         }
 
         @Override
@@ -266,7 +266,7 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
                 return 0;
             }
             return found(piece.firstReach(IntegratedPiece.S, d), "until-distance " + num(d) + " m",
-                    "distance covered by then " + num(piece.distanceOffset(start.state(), limit)) + " m");
+                    "distance covered by then " + num(piece.offset(Measure.DISTANCE, start.state(), limit)) + " m");
         }
     }
 }

@@ -4,7 +4,7 @@ package org.nullpath.worldline;
  * The motion inside one leg of a straight-line craft, queried as offsets from a state that lies in
  * the leg. Offsets are exact differences of the leg's own functions, so short moves keep their
  * relative precision. Every "for" method returns the proper time {@code du} (any sign) that changes
- * the named quantity by the given amount, or NaN when no such proper time exists.
+ * a {@link Measure} by the given amount, or NaN when no such proper time exists.
  */
 interface Piece {
 
@@ -16,19 +16,13 @@ interface Piece {
 
     double rapidityAfter(LineState cur, double du);
 
-    double timeOffset(LineState cur, double du);
+    /** The change of {@code m} over proper time {@code du} (any sign) from {@code cur}. */
+    double offset(Measure m, LineState cur, double du);
 
-    double distanceOffset(LineState cur, double du);
-
-    /** Offset of {@code U = c t - along}. */
-    double uOffset(LineState cur, double du);
-
-    /** Offset of {@code V = c t + along}. */
-    double vOffset(LineState cur, double du);
-
-    double properTimeForTime(LineState cur, double dt);
-
-    double properTimeForU(LineState cur, double dU);
-
-    double properTimeForV(LineState cur, double dV);
+    /**
+     * The proper time {@code du} (any sign) from {@code cur} over which {@code m} changes by {@code amount},
+     * NaN when it never does within the piece. Every measure but {@link Measure#DISTANCE} (which may turn
+     * back) can be inverted.
+     */
+    double properTimeFor(Measure m, LineState cur, double amount);
 }

@@ -121,7 +121,7 @@ public final class StraightLineCraft implements Worldline {
         LineState r = g.ref();
         double du = clock - r.clock();
         Piece p = g.piece();
-        return checked(new LineState(clock, r.timeSeconds() + p.timeOffset(r, du), r.along() + p.distanceOffset(r, du),
+        return checked(new LineState(clock, r.timeSeconds() + p.offset(Measure.TIME, r, du), r.along() + p.offset(Measure.DISTANCE, r, du),
                 p.rapidityAfter(r, du), i, r.local() + du));
     }
 
@@ -131,8 +131,8 @@ public final class StraightLineCraft implements Worldline {
         Segment g = segments.get(i);
         LineState r = g.ref();
         Piece p = g.piece();
-        double du = p.properTimeForTime(r, t - r.timeSeconds());
-        return checked(new LineState(r.clock() + du, t, r.along() + p.distanceOffset(r, du), p.rapidityAfter(r, du), i,
+        double du = p.properTimeFor(Measure.TIME, r, t - r.timeSeconds());
+        return checked(new LineState(r.clock() + du, t, r.along() + p.offset(Measure.DISTANCE, r, du), p.rapidityAfter(r, du), i,
                 r.local() + du));
     }
 
@@ -221,70 +221,14 @@ public final class StraightLineCraft implements Worldline {
         }
     }
 
-    private interface Measure {
-        /** The measure's change over proper time {@code du} from {@code cur} within piece {@code p}. */
-        double offset(Piece p, LineState cur, double du);
-
-        /** Proper time from {@code cur} for a change {@code amount} within piece {@code p}; NaN if never. */
-        double properTime(Piece p, LineState cur, double amount);
-    }
-
-    private static final Measure TIME = new Measure() {
-        @Override
-        public double offset(Piece p, LineState cur, double du) {
-            return p.timeOffset(cur, du);
-        }
-
-        @Override
-        public double properTime(Piece p, LineState cur, double amount) {
-            return p.properTimeForTime(cur, amount);
-        }
-    };
-
-    private static final Measure CLOCK = new Measure() {
-        @Override
-        public double offset(Piece p, LineState cur, double du) {
-            return du;
-        }
-
-        @Override
-        public double properTime(Piece p, LineState cur, double amount) {
-            return amount;
-        }
-    };
-
-    private static final Measure U = new Measure() {
-        @Override
-        public double offset(Piece p, LineState cur, double du) {
-            return p.uOffset(cur, du);
-        }
-
-        @Override
-        public double properTime(Piece p, LineState cur, double amount) {
-            return p.properTimeForU(cur, amount);
-        }
-    };
-
-    private static final Measure V = new Measure() {
-        @Override
-        public double offset(Piece p, LineState cur, double du) {
-            return p.vOffset(cur, du);
-        }
-
-        @Override
-        public double properTime(Piece p, LineState cur, double amount) {
-            return p.properTimeForV(cur, amount);
-        }
-    };
-
     /** Moves by mission time {@code dt} (any sign). */
     public LineWalk walkTime(LineState from, double dt) {
-        return walk(from, dt, TIME, true, false);
+        return walk(from, dt, Measure.TIME, true, false);
     }
 
     /** Moves by craft-clock time {@code dClock} (any sign). */
     public LineWalk walkClock(LineState from, double dClock) {
-        return walk(from, dClock, CLOCK, false, true);
+        return walk(from, dClock, Measure.CLOCK, false, true);
     }
 
     /**
@@ -292,12 +236,12 @@ public final class StraightLineCraft implements Worldline {
      * signal travelling along +heading meets the craft there. {@link LineWalk#never()} when it never does.
      */
     public LineWalk walkU(LineState from, double dU) {
-        return walk(from, dU, U, false, false);
+        return walk(from, dU, Measure.U, false, false);
     }
 
     /** Moves until {@code V = c t + along} has changed by {@code dV} (any sign); see {@link #walkU}. */
     public LineWalk walkV(LineState from, double dV) {
-        return walk(from, dV, V, false, false);
+        return walk(from, dV, Measure.V, false, false);
     }
 
     /** @param nulls whether to sum the U and V offsets too (else they are NaN): only the off-line cone needs them */
@@ -321,14 +265,14 @@ public final class StraightLineCraft implements Worldline {
             if (boundary != null) {
                 // every step is an offset over a proper time that is a difference of local (small) values
                 double du = boundary.local() - cur.local();
-                double cap = m.offset(p, cur, du);
+                double cap = p.offset(m, cur, du);
                 if (forward ? rem > cap : rem < cap) {
-                    dt += p.timeOffset(cur, du);
+                    dt += p.offset(Measure.TIME, cur, du);
                     dClock += du;
-                    dAlong += p.distanceOffset(cur, du);
+                    dAlong += p.offset(Measure.DISTANCE, cur, du);
                     if (nulls) {
-                        dU += p.uOffset(cur, du);
-                        dV += p.vOffset(cur, du);
+                        dU += p.offset(Measure.U, cur, du);
+                        dV += p.offset(Measure.V, cur, du);
                     }
                     rem -= cap;
                     i += forward ? 1 : -1;
@@ -337,17 +281,17 @@ public final class StraightLineCraft implements Worldline {
                     continue;
                 }
             }
-            double du = m.properTime(p, cur, rem);
+            double du = p.properTimeFor(m, cur, rem);
             if (Double.isNaN(du)) {
                 return new LineWalk(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NaN, Double.NaN,
                         Double.NaN, null);
             }
-            double ddt = exactTime ? rem : p.timeOffset(cur, du);
-            double dds = p.distanceOffset(cur, du);
+            double ddt = exactTime ? rem : p.offset(Measure.TIME, cur, du);
+            double dds = p.offset(Measure.DISTANCE, cur, du);
             LineState end = checked(new LineState(cur.clock() + du, cur.timeSeconds() + ddt, cur.along() + dds,
                     p.rapidityAfter(cur, du), i, cur.local() + du));
             return nulls
-                    ? new LineWalk(dt + ddt, dClock + du, dAlong + dds, dU + p.uOffset(cur, du), dV + p.vOffset(cur, du), end)
+                    ? new LineWalk(dt + ddt, dClock + du, dAlong + dds, dU + p.offset(Measure.U, cur, du), dV + p.offset(Measure.V, cur, du), end)
                     : new LineWalk(dt + ddt, dClock + du, dAlong + dds, Double.NaN, Double.NaN, end);
         }
     }
