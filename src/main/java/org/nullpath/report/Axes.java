@@ -31,6 +31,11 @@ final class Axes {
 
     /** Finite values' {min, max}; null when there are none. */
     static double[] extent(List<Double> values) {
+        return extent(values.stream().mapToDouble(Double::doubleValue).toArray());
+    }
+
+    /** Finite values' {min, max}; null when there are none. */
+    static double[] extent(double[] values) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (double v : values) {

@@ -264,14 +264,7 @@ final class LinkCharts {
 
     /** {min, max} of the finite values; {0, 0} when there are none. */
     private static double[] finiteExtent(double[] v) {
-        double lo = Double.POSITIVE_INFINITY;
-        double hi = Double.NEGATIVE_INFINITY;
-        for (double x : v) {
-            if (Double.isFinite(x)) {
-                lo = Math.min(lo, x);
-                hi = Math.max(hi, x);
-            }
-        }
-        return lo <= hi ? new double[] {lo, hi} : new double[] {0, 0};
+        double[] e = Axes.extent(v);
+        return e == null ? new double[] {0, 0} : e;
     }
 }

@@ -97,10 +97,14 @@ final class MissionReader implements References {
             link(e, lowerCaseLinks);
         }
         PlanReader plans = new PlanReader(values, this);
-        List<MessagePlan> messages = plans.all(list(top, "messages", "message plans"), "messages", plans::message);
-        List<Cutoff> cutoffs = plans.all(list(top, "cutoffs", "cut-offs"), "cutoffs", plans::cutoff);
-        List<Exchange> exchanges = plans.all(list(top, "exchanges", "exchanges"), "exchanges", plans::exchange);
-        List<WindowScan> windows = plans.all(list(top, "windows", "window scans"), "windows", plans::window);
+        List<MessagePlan> messages = plans.all(list(top, "messages", "message plans"), "messages",
+                "a message plan", PlanReader.MESSAGE_KEYS, plans::message);
+        List<Cutoff> cutoffs = plans.all(list(top, "cutoffs", "cut-offs"), "cutoffs", "a cut-off",
+                PlanReader.CUTOFF_KEYS, plans::cutoff);
+        List<Exchange> exchanges = plans.all(list(top, "exchanges", "exchanges"), "exchanges",
+                "an exchange", PlanReader.EXCHANGE_KEYS, plans::exchange);
+        List<WindowScan> windows = plans.all(list(top, "windows", "window scans"), "windows",
+                "a window scan", PlanReader.WINDOW_KEYS, plans::window);
         problems.throwIfAny();
         return new Mission(source, title, epoch, List.copyOf(stations.values()), List.copyOf(craft.values()), links,
                 messages, cutoffs, exchanges, windows);

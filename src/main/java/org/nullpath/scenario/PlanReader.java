@@ -27,10 +27,10 @@ final class PlanReader {
     static final List<String> EXCHANGE_KEYS = List.of("name", "query", "reply", "turnaround", "first", "last", "every");
     static final List<String> WINDOW_KEYS = List.of("link", "from", "to");
 
-    /** Reads one item of a list section at its key path; null when it has problems (added). */
+    /** Reads one item of a list section from its keys; null when it has problems (added). */
     @FunctionalInterface
     interface ItemReader<T> {
-        T read(Node item, String keyPath);
+        T read(Fields item);
     }
 
     private final Values values;
@@ -43,11 +43,15 @@ final class PlanReader {
         this.reader = reader;
     }
 
-    /** Every item of a list section that reads without problems, in order. */
-    <T> List<T> all(List<Node> items, String section, ItemReader<T> one) {
+    /**
+     * Every item of a list section that reads without problems, in order; {@code what} names one item ("a
+     * cut-off") and {@code keys} are the keys it may have.
+     */
+    <T> List<T> all(List<Node> items, String section, String what, List<String> keys, ItemReader<T> one) {
         List<T> out = new ArrayList<>();
         for (int i = 0; i < items.size(); i++) {
-            T t = one.read(items.get(i), KeyPaths.item(section, i));
+            Fields f = Fields.of(items.get(i), KeyPaths.item(section, i), values, what, keys);
+            T t = f.ok() ? one.read(f) : null;
             if (t != null) {
                 out.add(t);
             }
@@ -55,19 +59,15 @@ final class PlanReader {
         return out;
     }
 
-    Cutoff cutoff(Node item, String p) {
-        return cutoff(item, p, cutoffNames);
+    Cutoff cutoff(Fields f) {
+        return cutoff(f, cutoffNames);
     }
 
-    Exchange exchange(Node item, String p) {
-        return exchange(item, p, exchangeNames);
+    Exchange exchange(Fields f) {
+        return exchange(f, exchangeNames);
     }
 
-    MessagePlan message(Node item, String p) {
-        Fields f = Fields.of(item, p, values, "a message plan", MESSAGE_KEYS);
-        if (!f.ok()) {
-            return null;
-        }
+    MessagePlan message(Fields f) {
         LinkRef link = reader.linkRef(f, "link");
         boolean series = SERIES_KEYS.stream().anyMatch(f::has);
         if (f.has("at") && series) {
@@ -127,11 +127,7 @@ final class PlanReader {
         return every;
     }
 
-    private Cutoff cutoff(Node item, String p, Map<String, Node> names) {
-        Fields f = Fields.of(item, p, values, "a cut-off", CUTOFF_KEYS);
-        if (!f.ok()) {
-            return null;
-        }
+    private Cutoff cutoff(Fields f, Map<String, Node> names) {
         String name = f.text("name", "a name for the cut-off");
         if (name != null && name.isBlank()) {
             f.problemAt("name", "a cut-off name must not be empty");
@@ -163,11 +159,7 @@ final class PlanReader {
         return true;
     }
 
-    private Exchange exchange(Node item, String p, Map<String, Node> names) {
-        Fields f = Fields.of(item, p, values, "an exchange", EXCHANGE_KEYS);
-        if (!f.ok()) {
-            return null;
-        }
+    private Exchange exchange(Fields f, Map<String, Node> names) {
         String name = f.text("name", "a name for the exchange");
         if (name != null) {
             String bad = Names.problem(name, "an exchange name");
@@ -209,11 +201,7 @@ final class PlanReader {
         return q == null || r == null ? null : new Exchange(name, q, r, turnaround, first, last, every);
     }
 
-    WindowScan window(Node item, String p) {
-        Fields f = Fields.of(item, p, values, "a window scan", WINDOW_KEYS);
-        if (!f.ok()) {
-            return null;
-        }
+    WindowScan window(Fields f) {
         LinkRef link = reader.linkRef(f, "link");
         if (link != null && !link.hasTerms()) {
             f.problemAt("link", "link '" + link.name() + "' has no radio or optical terms, so it has no windows to"

@@ -74,12 +74,9 @@ final class ProfiledLegReader {
             ve = Double.NaN;
         }
         if (thrust) {
-            for (String k : List.of("acceleration", "mass-ratio")) {
-                if (f.has(k)) {
-                    f.problemAt(k, "'" + k + "' belongs to a constant-acceleration rocket; a constant-thrust rocket"
-                            + " takes thrust, initial-mass, burnout-mass and exhaust-speed");
-                    return null;
-                }
+            if (refused(f, List.of("acceleration", "mass-ratio"), "belongs to a constant-acceleration rocket; a"
+                    + " constant-thrust rocket takes thrust, initial-mass, burnout-mass and exhaust-speed")) {
+                return null;
             }
             double force = f.quantity("thrust", Dimension.FORCE);
             double m0 = f.quantity("initial-mass", Dimension.MASS);
@@ -104,12 +101,9 @@ final class ProfiledLegReader {
             return read(end.end() == null ? new LegSpec.ThrustRocket(force, m0, m1, ve)
                     : new LegSpec.ThrustRocket(force, m0, m1, ve, end.end()), n, path, null, null, end);
         }
-        for (String k : List.of("initial-mass", "burnout-mass")) {
-            if (f.has(k)) {
-                f.problemAt(k, "'" + k + "' belongs to a constant-thrust rocket (with thrust); a constant-acceleration"
-                        + " rocket takes acceleration, exhaust-speed and mass-ratio");
-                return null;
-            }
+        if (refused(f, List.of("initial-mass", "burnout-mass"), "belongs to a constant-thrust rocket (with thrust);"
+                + " a constant-acceleration rocket takes acceleration, exhaust-speed and mass-ratio")) {
+            return null;
         }
         double a = f.quantity("acceleration", Dimension.ACCELERATION);
         double ratio = f.number("mass-ratio");
@@ -132,6 +126,17 @@ final class ProfiledLegReader {
 
     private static LegEntry.Read read(LegSpec spec, Node n, String path, Node own, String ownPath, End end) {
         return new LegEntry.Read(spec, new LegEntry.Site(n, path, own, ownPath, end.node(), end.path()));
+    }
+
+    /** True, with a problem at the first of {@code keys} that is given, when any is: "'key' " + why. */
+    private static boolean refused(Fields f, List<String> keys, String why) {
+        for (String k : keys) {
+            if (f.has(k)) {
+                f.problemAt(k, "'" + k + "' " + why);
+                return true;
+            }
+        }
+        return false;
     }
 
     static LegEntry.Read sail(Node n, String path, LegEntry.Context context) {

@@ -26,66 +26,38 @@ public final class Units {
 
     static {
         Map<String, Unit> u = new LinkedHashMap<>();
-        lin(u, Dimension.TIME, "s", 1.0);
-        lin(u, Dimension.TIME, "ms", 1e-3);
-        lin(u, Dimension.TIME, "us", 1e-6);
-        lin(u, Dimension.TIME, "ns", 1e-9);
-        lin(u, Dimension.TIME, "min", 60.0);
-        lin(u, Dimension.TIME, "h", 3600.0);
-        lin(u, Dimension.TIME, "d", Constants.DAY);
-        lin(u, Dimension.TIME, "yr", Constants.JULIAN_YEAR);
-        lin(u, Dimension.LENGTH, "m", 1.0);
-        lin(u, Dimension.LENGTH, "km", 1e3);
-        lin(u, Dimension.LENGTH, "cm", 1e-2);
-        lin(u, Dimension.LENGTH, "mm", 1e-3);
-        lin(u, Dimension.LENGTH, "um", 1e-6);
-        lin(u, Dimension.LENGTH, "nm", 1e-9);
-        lin(u, Dimension.LENGTH, "au", Constants.AU);
-        lin(u, Dimension.LENGTH, "ly", Constants.LIGHT_YEAR);
-        lin(u, Dimension.LENGTH, "pc", Constants.PARSEC);
-        lin(u, Dimension.SPEED, "m/s", 1.0);
-        lin(u, Dimension.SPEED, "km/s", 1e3);
-        lin(u, Dimension.SPEED, "c", Constants.C);
-        lin(u, Dimension.ACCELERATION, "m/s^2", 1.0);
-        lin(u, Dimension.ACCELERATION, "g0", Constants.G0);
-        lin(u, Dimension.FREQUENCY, "Hz", 1.0);
-        lin(u, Dimension.FREQUENCY, "kHz", 1e3);
-        lin(u, Dimension.FREQUENCY, "MHz", 1e6);
-        lin(u, Dimension.FREQUENCY, "GHz", 1e9);
-        lin(u, Dimension.FREQUENCY, "THz", 1e12);
-        lin(u, Dimension.FREQUENCY_RATE, "Hz/s", 1.0);
-        lin(u, Dimension.FREQUENCY_RATE, "kHz/s", 1e3);
-        lin(u, Dimension.FREQUENCY_RATE, "MHz/s", 1e6);
-        lin(u, Dimension.POWER, "W", 1.0);
-        lin(u, Dimension.POWER, "mW", 1e-3);
-        lin(u, Dimension.POWER, "kW", 1e3);
-        lin(u, Dimension.POWER, "MW", 1e6);
-        lin(u, Dimension.POWER, "GW", 1e9);
+        lin(u, Dimension.TIME, of("s", 1.0), of("ms", 1e-3), of("us", 1e-6), of("ns", 1e-9), of("min", 60.0),
+                of("h", 3600.0), of("d", Constants.DAY), of("yr", Constants.JULIAN_YEAR));
+        lin(u, Dimension.LENGTH, of("m", 1.0), of("km", 1e3), of("cm", 1e-2), of("mm", 1e-3), of("um", 1e-6),
+                of("nm", 1e-9), of("au", Constants.AU), of("ly", Constants.LIGHT_YEAR), of("pc", Constants.PARSEC));
+        lin(u, Dimension.SPEED, of("m/s", 1.0), of("km/s", 1e3), of("c", Constants.C));
+        lin(u, Dimension.ACCELERATION, of("m/s^2", 1.0), of("g0", Constants.G0));
+        lin(u, Dimension.FREQUENCY, of("Hz", 1.0), of("kHz", 1e3), of("MHz", 1e6), of("GHz", 1e9), of("THz", 1e12));
+        lin(u, Dimension.FREQUENCY_RATE, of("Hz/s", 1.0), of("kHz/s", 1e3), of("MHz/s", 1e6));
+        lin(u, Dimension.POWER, of("W", 1.0), of("mW", 1e-3), of("kW", 1e3), of("MW", 1e6), of("GW", 1e9));
         u.put("dBW", new Unit(Dimension.POWER, 1.0, true, 0.0));
         u.put("dBm", new Unit(Dimension.POWER, 1.0, true, -30.0));
         u.put("dBi", new Unit(Dimension.GAIN, 1.0, false, 0.0));
         u.put("dB", new Unit(Dimension.RATIO, 1.0, false, 0.0));
-        lin(u, Dimension.TEMPERATURE, "K", 1.0);
-        lin(u, Dimension.DATA_RATE, "bit/s", 1.0);
-        lin(u, Dimension.DATA_RATE, "kbit/s", 1e3);
-        lin(u, Dimension.DATA_RATE, "Mbit/s", 1e6);
-        lin(u, Dimension.DATA_RATE, "Gbit/s", 1e9);
-        lin(u, Dimension.ANGLE, "rad", 1.0);
-        lin(u, Dimension.ANGLE, "mrad", 1e-3);
-        lin(u, Dimension.ANGLE, "urad", 1e-6);
-        lin(u, Dimension.ANGLE, "deg", Math.PI / 180.0);
-        lin(u, Dimension.ANGLE, "arcsec", Math.PI / 648_000.0);
-        lin(u, Dimension.MASS, "kg", 1.0);
-        lin(u, Dimension.MASS, "g", 1e-3);
-        lin(u, Dimension.MASS, "t", 1e3);
-        lin(u, Dimension.FORCE, "N", 1.0);
-        lin(u, Dimension.FORCE, "kN", 1e3);
-        lin(u, Dimension.FORCE, "MN", 1e6);
+        lin(u, Dimension.TEMPERATURE, of("K", 1.0));
+        lin(u, Dimension.DATA_RATE, of("bit/s", 1.0), of("kbit/s", 1e3), of("Mbit/s", 1e6), of("Gbit/s", 1e9));
+        lin(u, Dimension.ANGLE, of("rad", 1.0), of("mrad", 1e-3), of("urad", 1e-6), of("deg", Math.PI / 180.0),
+                of("arcsec", Math.PI / 648_000.0));
+        lin(u, Dimension.MASS, of("kg", 1.0), of("g", 1e-3), of("t", 1e3));
+        lin(u, Dimension.FORCE, of("N", 1.0), of("kN", 1e3), of("MN", 1e6));
         UNITS = Collections.unmodifiableMap(u);
     }
 
-    private static void lin(Map<String, Unit> u, Dimension d, String symbol, double factor) {
-        u.put(symbol, new Unit(d, factor, false, 0.0));
+    /** Units of dimension {@code d}, each its symbol and its factor to SI. */
+    @SafeVarargs
+    private static void lin(Map<String, Unit> u, Dimension d, Map.Entry<String, Double>... units) {
+        for (Map.Entry<String, Double> e : units) {
+            u.put(e.getKey(), new Unit(d, e.getValue(), false, 0.0));
+        }
+    }
+
+    private static Map.Entry<String, Double> of(String symbol, double factor) {
+        return Map.entry(symbol, factor);
     }
 
     private static final Pattern FORM = Pattern.compile(
