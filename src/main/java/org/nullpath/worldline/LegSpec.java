@@ -330,21 +330,7 @@ public sealed interface LegSpec {
 
         /** Linear interpolation of the samples at leg clock {@code u} (held at the ends). */
         public double at(double u) {
-            int n = clockSeconds.length;
-            if (u <= clockSeconds[0]) {
-                return accelerationsMetresPerSecond2[0];
-            }
-            if (u >= clockSeconds[n - 1]) {
-                return accelerationsMetresPerSecond2[n - 1];
-            }
-            int i = java.util.Arrays.binarySearch(clockSeconds, u);
-            if (i >= 0) {
-                return accelerationsMetresPerSecond2[i];
-            }
-            int hi = -i - 1;
-            int lo = hi - 1;
-            double w = (u - clockSeconds[lo]) / (clockSeconds[hi] - clockSeconds[lo]);
-            return accelerationsMetresPerSecond2[lo] + w * (accelerationsMetresPerSecond2[hi] - accelerationsMetresPerSecond2[lo]);
+            return Samples.linear(clockSeconds, accelerationsMetresPerSecond2, u);
         }
 
         @Override
