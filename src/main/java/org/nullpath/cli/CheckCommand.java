@@ -22,10 +22,8 @@ final class CheckCommand implements Callable<Integer> {
             return Main.INPUT_ERROR;
         }
         Mission s = loaded.get();
-        input.out().printf("%s: usable (%s, %d craft, %s, %s planned)%n", input.scenario,
-                TerminalSummary.count(s.stations().size(), "station"), s.craft().size(),
-                TerminalSummary.count(s.links().size(), "link"),
-                TerminalSummary.count(s.plannedMessages(), "message"));
+        input.out().printf("%s: usable (%s; %s)%n", input.scenario, TerminalSummary.bodies(s),
+                TerminalSummary.planned(s, ""));
         return 0;
     }
 }

@@ -25,14 +25,32 @@ final class TerminalSummary {
         return n + " " + noun + (n == 1 ? "" : "s");
     }
 
+    /**
+     * What a scenario plans, in the same words for check and plan: "182 messages planned: 156 on links, 26 in
+     * 13 round trips"; {@code onLinks} is put after the links' count ("156 on links (...)").
+     */
+    static String planned(Mission s, String onLinks) {
+        long trips = s.plannedRoundTrips();
+        String head = count(s.plannedMessages(), "message") + " planned";
+        if (trips == 0) {
+            return head + onLinks;
+        }
+        return head + ": " + s.plannedOnLinks() + " on links" + onLinks + ", " + (2 * trips) + " in "
+                + count(trips, "round trip");
+    }
+
+    /** "2 stations, 1 craft, 3 links". */
+    static String bodies(Mission s) {
+        return count(s.stations().size(), "station") + ", " + s.craft().size() + " craft, "
+                + count(s.links().size(), "link");
+    }
+
     static void print(PrintWriter out, Mission s, PlanResult r, Path dir) {
-        long stations = s.stations().size();
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
         out.printf("%s%n", s.title());
-        out.printf("  %s, %d craft, %s; %s, %d delivered, %d never arrive%n", count(stations, "station"),
-                s.craft().size(), count(s.links().size(), "link"), count(messages, "message"),
-                messages - never, never);
+        out.printf("  %s; %s%n", bodies(s), planned(s, " (" + (messages - never) + " delivered, " + never
+                + " never arrive)"));
         for (LinkTally t : r.links()) {
             Link l = s.links().get(t.link());
             out.printf("  link %-12s %s -> %s: %d sent, %d arrive; light time %s to %s; Doppler %s to %s%n",
@@ -47,14 +65,16 @@ final class TerminalSummary {
         }
         for (CutoffRow c : r.cutoffs()) {
             out.printf("  cut-off %-12s on %s: %s%n", c.name(), c.link(), !c.reachable() ? "unreachable"
-                    : "send by " + Readable.time(c.latestSendClock()) + " on the sender's clock"
+                    : "send by " + Readable.notAfter(c.latestSendClock()) + " on the sender's clock"
+                    + s.epoch().map(e -> " (" + Readable.instantNotAfter(e, c.latestSendTime()) + ")").orElse("")
                     + (c.beforeStart() ? " (before the mission starts: already too late for a plan made at mission"
                     + " time 0)" : ""));
         }
         for (HorizonRow h : r.horizons()) {
             if (h.hasHorizon()) {
-                out.printf("  horizon on %-10s nothing sent after %s (sender's clock) ever arrives%n", h.link(),
-                        Readable.time(h.lastSendClock()));
+                out.printf("  horizon on %-10s send before %s on the sender's clock%s, or the message never"
+                        + " arrives%n", h.link(), Readable.notAfter(h.lastSendClock()),
+                        s.epoch().map(e -> " (" + Readable.instantNotAfter(e, h.lastSendTime()) + ")").orElse(""));
             }
         }
         for (ExchangeTally e : r.exchanges()) {
@@ -84,7 +104,7 @@ final class TerminalSummary {
         }
         for (WindowRow w : r.windows()) {
             out.printf("  window on %-10s sends from %s to %s (sender's clock), closed by %s%n", w.link(),
-                    Readable.time(w.opensClock()), Readable.time(w.closesClock()), w.closedBy());
+                    Readable.notBefore(w.opensClock()), Readable.notAfter(w.closesClock()), w.closedBy());
         }
         if (worstLink == null) {
             out.printf("  worst margin: no link budget terms in this scenario%n");

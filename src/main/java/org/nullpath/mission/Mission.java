@@ -66,12 +66,24 @@ public record Mission(ScenarioText source, String title, Optional<Instant> epoch
 
     /** Total messages planned: every message plan, plus a query and a reply for each exchange round trip. */
     public long plannedMessages() {
+        long trips = plannedRoundTrips();
+        return saturatingAdd(plannedOnLinks(), saturatingAdd(trips, trips));
+    }
+
+    /** Messages of the message plans. */
+    public long plannedOnLinks() {
         long n = 0;
         for (MessagePlan p : messages) {
             n = saturatingAdd(n, p.count());
         }
+        return n;
+    }
+
+    /** Round trips of the exchanges (each a query and a reply). */
+    public long plannedRoundTrips() {
+        long n = 0;
         for (Exchange e : exchanges) {
-            n = saturatingAdd(n, saturatingAdd(e.count(), e.count()));
+            n = saturatingAdd(n, e.count());
         }
         return n;
     }

@@ -4,18 +4,20 @@ import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 import java.util.function.Function;
 
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
-import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.DiagramTraces;
+import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkTally;
 import org.nullpath.schedule.SampledSeries;
@@ -58,7 +60,7 @@ public final class HtmlReport {
         contents(h, s);
         diagramSection(h, s, diagram);
         linkSections(h, s, r, series);
-        tables(h, r);
+        tables(h, r, s.epoch());
         scenarioSection(h, s);
         h.append("<footer><p>Written by nullpath. Every value here is rounded for reading; the CSV and JSON files ")
                 .append("beside this report carry full precision.</p></footer>\n</body>\n</html>\n");
@@ -149,8 +151,8 @@ public final class HtmlReport {
             row(h, "Doppler factor", shown(t.minDoppler()) + " to " + shown(t.maxDoppler()));
         }
         row(h, "horizon", ls.horizon().hasHorizon()
-                ? "nothing sent after " + Readable.time(ls.horizon().lastSendClock()) + " on " + ls.from()
-                + "'s clock ever arrives" : "none: every send arrives");
+                ? "send before " + Readable.notAfter(ls.horizon().lastSendClock()) + " on " + ls.from()
+                + "'s clock, or the message never arrives" : "none: every send arrives");
         if (t.budget().isPresent() && t.delivered() > 0) {
             BudgetTally.Figures b = t.budget().get();
             row(h, "margin", shown(b.worstMarginDb()) + " to " + shown(b.bestMarginDb()) + " dB; "
@@ -216,6 +218,16 @@ public final class HtmlReport {
         return "<td title=\"" + Cells.num(seconds) + " s\">" + Html.escape(Readable.time(seconds)) + "</td>";
     }
 
+    /** A latest time: shown rounded toward earlier, full seconds on hover. */
+    private static String latest(double seconds) {
+        return "<td title=\"" + Cells.num(seconds) + " s\">" + Html.escape(Readable.notAfter(seconds)) + "</td>";
+    }
+
+    /** An earliest time: shown rounded toward later, full seconds on hover. */
+    private static String earliest(double seconds) {
+        return "<td title=\"" + Cells.num(seconds) + " s\">" + Html.escape(Readable.notBefore(seconds)) + "</td>";
+    }
+
     private static String cell(String text) {
         return "<td>" + Html.escape(text) + "</td>";
     }
@@ -250,30 +262,34 @@ public final class HtmlReport {
         h.append("</tbody>\n</table>\n");
     }
 
-    private static void tables(StringBuilder h, PlanResult r) {
+    private static void tables(StringBuilder h, PlanResult r, Optional<Instant> epoch) {
         h.append("<section id=\"tables\">\n<h2>Cut-offs, horizons, windows and round trips</h2>\n");
-        table(h, "table-cutoffs", "Cut-offs", "The latest send on a link whose message still arrives by a deadline on"
-                + " the receiver's clock.", "No cut-offs are asked for in this scenario.", r.cutoffs(), List.of(
+        List<Shown<CutoffRow>> cutoffColumns = new ArrayList<>(List.of(
                 new Shown<>("cut-off", c -> cell(c.name())),
                 new Shown<>("link", c -> cell(c.link())),
                 new Shown<>("arrive by (receiver's clock)", c -> time(c.arriveByClock())),
-                new Shown<>("latest send (sender's clock)", c -> time(c.latestSendClock())),
-                new Shown<>("latest send (mission time)", c -> time(c.latestSendTime())),
-                new Shown<>("status", c -> cell(!c.reachable() ? "unreachable" : c.beforeStart()
-                        ? "ok, but the latest send lies before the mission starts" : "ok"))));
+                new Shown<>("latest send (sender's clock)", c -> latest(c.latestSendClock())),
+                new Shown<>("latest send (mission time)", c -> latest(c.latestSendTime()))));
+        epoch.ifPresent(e -> cutoffColumns.add(new Shown<>("latest send (calendar)",
+                c -> cell(Readable.instantNotAfter(e, c.latestSendTime())))));
+        cutoffColumns.add(new Shown<>("status", c -> cell(!c.reachable() ? "unreachable" : c.beforeStart()
+                ? "ok, but the latest send lies before the mission starts" : "ok")));
+        table(h, "table-cutoffs", "Cut-offs", "The latest send on a link whose message still arrives by a deadline on"
+                + " the receiver's clock, shown rounded toward earlier (hover for the full value in seconds).",
+                "No cut-offs are asked for in this scenario.", r.cutoffs(), cutoffColumns);
         table(h, "table-horizons", "Horizons", "For each link, the last send that still arrives; a send at or after it"
                 + " never does.", null, r.horizons(), List.of(
                 new Shown<>("link", x -> cell(x.link())),
                 new Shown<>("horizon", x -> cell(x.hasHorizon() ? "yes" : "none")),
-                new Shown<>("last send (sender's clock)", x -> time(x.lastSendClock())),
-                new Shown<>("last send (mission time)", x -> time(x.lastSendTime()))));
+                new Shown<>("send before (sender's clock)", x -> latest(x.lastSendClock())),
+                new Shown<>("send before (mission time)", x -> latest(x.lastSendTime()))));
         table(h, "table-windows", "Link windows", "Send-clock intervals in which a message would be received: margin"
                 + " at or above 0 dB, inside the tuning range and within the Doppler-rate limit.", "No link window was"
                 + " found (or none was asked for): a window needs a <code>windows</code> entry on a link with link"
                 + " terms.", r.windows(), List.of(
                 new Shown<>("link", w -> cell(w.link())),
-                new Shown<>("opens (sender's clock)", w -> time(w.opensClock())),
-                new Shown<>("closes (sender's clock)", w -> time(w.closesClock())),
+                new Shown<>("opens (sender's clock)", w -> earliest(w.opensClock())),
+                new Shown<>("closes (sender's clock)", w -> latest(w.closesClock())),
                 new Shown<>("length", w -> time(w.closesClock() - w.opensClock())),
                 new Shown<>("closed by", w -> cell(w.closedBy()))));
         table(h, "table-round-trips", "Round trips", "Query and reply exchanges; each round trip's time on the"

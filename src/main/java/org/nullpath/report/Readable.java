@@ -1,5 +1,9 @@
 package org.nullpath.report;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
+import java.time.Instant;
 import java.util.Locale;
 
 import org.nullpath.units.Constants;
@@ -28,6 +32,79 @@ public final class Readable {
             return a == 0 ? "0 s" : fmt(seconds / 60) + " min";
         }
         return fmt(seconds) + " s";
+    }
+
+    /** Significant digits of a deadline: 1 part in 10^7, about 3 s in a year. */
+    static final int DEADLINE_DIGITS = 7;
+
+    /**
+     * A latest time ("send by"), rounded toward earlier to {@value #DEADLINE_DIGITS} significant digits in
+     * the largest convenient unit, so that the time shown is never later than the true one: "1.503879 yr".
+     */
+    public static String notAfter(double seconds) {
+        return directed(seconds, RoundingMode.FLOOR);
+    }
+
+    /**
+     * An earliest time ("arrives after", "opens at"), rounded toward later to {@value #DEADLINE_DIGITS}
+     * significant digits, so that the time shown is never earlier than the true one.
+     */
+    public static String notBefore(double seconds) {
+        return directed(seconds, RoundingMode.CEILING);
+    }
+
+    /** A latest calendar instant, {@code seconds} after {@code epoch}, rounded down to the whole second. */
+    public static String instantNotAfter(Instant epoch, double seconds) {
+        return calendar(epoch, seconds, RoundingMode.FLOOR);
+    }
+
+    /** An earliest calendar instant, rounded up to the whole second. */
+    public static String instantNotBefore(Instant epoch, double seconds) {
+        return calendar(epoch, seconds, RoundingMode.CEILING);
+    }
+
+    private static String directed(double seconds, RoundingMode mode) {
+        if (!Double.isFinite(seconds)) {
+            return Double.isNaN(seconds) ? "-" : seconds > 0 ? "never" : "always";
+        }
+        double a = Math.abs(seconds);
+        double unit;
+        String symbol;
+        if (a >= Constants.JULIAN_YEAR) {
+            unit = Constants.JULIAN_YEAR;
+            symbol = " yr";
+        } else if (a >= Constants.DAY) {
+            unit = Constants.DAY;
+            symbol = " d";
+        } else if (a >= 3600) {
+            unit = 3600;
+            symbol = " h";
+        } else if (a >= 60) {
+            unit = 60;
+            symbol = " min";
+        } else {
+            unit = 1;
+            symbol = " s";
+        }
+        if (seconds == 0) {
+            return "0 s";
+        }
+        // exact decimal division of the binary values, rounded once in the stated direction
+        BigDecimal v = new BigDecimal(seconds).divide(new BigDecimal(unit), new MathContext(DEADLINE_DIGITS, mode));
+        return v.stripTrailingZeros().toPlainString() + symbol;
+    }
+
+    private static String calendar(Instant epoch, double seconds, RoundingMode mode) {
+        if (!Double.isFinite(seconds)) {
+            return "-";
+        }
+        BigDecimal at = BigDecimal.valueOf(epoch.getEpochSecond()).add(BigDecimal.valueOf(epoch.getNano(), 9))
+                .add(new BigDecimal(seconds)).setScale(0, mode);
+        try {
+            return Instant.ofEpochSecond(at.longValueExact()).toString();
+        } catch (ArithmeticException | java.time.DateTimeException e) {
+            return "beyond the calendar";
+        }
     }
 
     /** A plain number to 6 significant digits. */
