@@ -43,9 +43,10 @@ final class PlanCommand implements Callable<Integer> {
         }
         Mission s = loaded.get();
         PlanResult result;
+        OutputFolder.Commit commit;
         try (OutputFolder folder = OutputFolder.begin(out)) {
             result = PlanOutput.write(s, folder, !noReport, err);
-            folder.commit();
+            commit = folder.commit();
         } catch (IOException | UncheckedIOException e) {
             err.println("nullpath: cannot write " + out + ": " + e.getMessage());
             if (debug) {
@@ -63,7 +64,7 @@ final class PlanCommand implements Callable<Integer> {
             }
             return Main.FAILURE;
         }
-        TerminalSummary.print(input.out(), s, result, out);
+        TerminalSummary.print(input.out(), s, result, out, commit);
         return 0;
     }
 }

@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 
 import org.nullpath.report.PlanOutput;
+import org.nullpath.report.OutputFolder;
 import org.nullpath.report.PlanResult;
 import org.nullpath.report.Readable;
 import org.nullpath.mission.Link;
@@ -45,7 +46,7 @@ final class TerminalSummary {
                 + count(s.links().size(), "link");
     }
 
-    static void print(PrintWriter out, Mission s, PlanResult r, Path dir) {
+    static void print(PrintWriter out, Mission s, PlanResult r, Path dir, OutputFolder.Commit commit) {
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
         out.printf("%s%n", s.title());
@@ -111,6 +112,15 @@ final class TerminalSummary {
         } else {
             out.printf("  worst margin: %s dB on %s%n", Readable.number(worst), worstLink);
         }
-        out.printf("  written to %s%n", dir);
+        out.printf("  written to %s%s%n", dir, commit.replaced().isEmpty() ? ""
+                : " (replacing " + count(commit.replaced().size(), "file") + " already there)");
+        if (!commit.removed().isEmpty()) {
+            out.printf("  removed what an earlier plan wrote there and this one does not: %s%n",
+                    String.join(", ", commit.removed()));
+        }
+        if (!commit.kept().isEmpty()) {
+            out.printf("  left alone (an earlier plan wrote them, but they have changed since): %s%n",
+                    String.join(", ", commit.kept()));
+        }
     }
 }

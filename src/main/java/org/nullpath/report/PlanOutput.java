@@ -161,6 +161,6 @@ public final class PlanOutput {
 
     /** Last, so that it can list every file of this plan (a later plan into the same folder removes the ones it no longer writes). */
     private static void summary(Run run) throws IOException {
-        SummaryJson.write(run.out.file(OutputNames.SUMMARY), run.mission, run.result(), run.out.stagedNames());
+        SummaryJson.write(run.out.file(OutputNames.SUMMARY), run.mission, run.result(), run.out.stagedDigests());
     }
 }

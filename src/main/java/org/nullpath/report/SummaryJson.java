@@ -7,6 +7,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.TreeMap;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
@@ -27,7 +28,11 @@ final class SummaryJson {
     private SummaryJson() {
     }
 
-    static void write(Path file, Mission s, PlanResult r, List<String> otherFiles) throws IOException {
+    /**
+     * Writes summary.json; {@code written} are the other files of the plan with their SHA-256 digests, so that
+     * a later plan into the same folder can prove which files it may remove.
+     */
+    static void write(Path file, Mission s, PlanResult r, Map<String, String> written) throws IOException {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("title", s.title());
         root.put("scenario", s.source().fileName());
@@ -111,10 +116,11 @@ final class SummaryJson {
         }
         root.put("exchanges", exchanges);
         root.put("windows", Tables.WINDOWS.json(r.windows()));
-        List<String> files = new ArrayList<>(otherFiles);
+        List<String> files = new ArrayList<>(written.keySet());
         files.add(file.getFileName().toString());
         files.sort(null);
         root.put(OutputFolder.FILES_KEY, files);
+        root.put(OutputFolder.DIGESTS_KEY, new TreeMap<>(written));
         new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), root);
     }
 
