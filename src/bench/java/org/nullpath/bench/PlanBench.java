@@ -1,13 +1,16 @@
 package org.nullpath.bench;
 
 import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.TimeUnit;
 
+import org.nullpath.mission.Mission;
 import org.nullpath.report.OutputFolder;
 import org.nullpath.report.PlanOutput;
-import org.nullpath.scenario.Scenario;
+import org.nullpath.report.PlanResult;
 import org.nullpath.scenario.ScenarioLoader;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -54,10 +57,10 @@ public class PlanBench {
 
     @Benchmark
     public long planEndToEnd() throws Exception {
-        Scenario s = ScenarioLoader.load(scenario);
+        Mission s = ScenarioLoader.load(scenario);
         Path out = dir.resolve("out");
         try (OutputFolder f = OutputFolder.begin(out)) {
-            PlanOutput.Result r = PlanOutput.write(s, f);
+            PlanResult r = PlanOutput.write(s, f, true, new PrintWriter(new StringWriter()));
             f.commit();
             return r.links().get(0).delivered();
         }

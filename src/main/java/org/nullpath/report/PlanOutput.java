@@ -87,14 +87,6 @@ public final class PlanOutput {
     }
 
     /**
-     * Computes and writes everything, report.html included, warnings to standard error; the caller commits or
-     * discards the folder.
-     */
-    public static PlanResult write(Mission s, OutputFolder out) throws IOException {
-        return write(s, out, true, new PrintWriter(System.err, true));
-    }
-
-    /**
      * Computes and writes everything; report.html only when {@code report} is true; a file left out is said
      * on {@code warnings}. The caller commits or discards the folder.
      */
@@ -152,7 +144,7 @@ public final class PlanOutput {
             HtmlReport.write(run.out.file(OutputNames.REPORT), run.mission, run.result());
         } catch (java.awt.AWTError | UnsatisfiedLinkError | NoClassDefFoundError e) {
             // charts need AWT font metrics; on a Java installation without any fonts, the data files are
-            // still the product: leave the report out and say why on standard error
+            // still the product: leave the report out and say why among the warnings
             java.nio.file.Files.deleteIfExists(run.out.file(OutputNames.REPORT));
             run.warnings.println("nullpath: report.html left out: this Java has no usable fonts for charts ("
                     + e.getClass().getSimpleName() + "); install a font package such as fonts-dejavu-core");

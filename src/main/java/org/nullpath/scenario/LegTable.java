@@ -8,6 +8,7 @@ import org.nullpath.scenario.YamlTree.Entry;
 import org.nullpath.scenario.YamlTree.MapNode;
 import org.nullpath.scenario.YamlTree.Node;
 import org.nullpath.units.Spelling;
+import org.nullpath.worldline.LegSpec;
 
 /**
  * The leg table: every kind of leg the scenario file knows, under its key, with the entry that reads
@@ -19,11 +20,11 @@ final class LegTable {
 
     private static Map<String, LegEntry> table() {
         Map<String, LegEntry> m = new LinkedHashMap<>();
-        m.put("burn", ConstantLegReader::burn);
-        m.put("coast", ConstantLegReader::coast);
-        m.put("rocket", ProfiledLegReader::rocket);
-        m.put("sail", ProfiledLegReader::sail);
-        m.put("profile", ProfiledLegReader::profile);
+        m.put(LegSpec.BURN, ConstantLegReader::burn);
+        m.put(LegSpec.COAST, ConstantLegReader::coast);
+        m.put(LegSpec.ROCKET, ProfiledLegReader::rocket);
+        m.put(LegSpec.SAIL, ProfiledLegReader::sail);
+        m.put(LegSpec.PROFILE, ProfiledLegReader::profile);
         return java.util.Collections.unmodifiableMap(m);
     }
 

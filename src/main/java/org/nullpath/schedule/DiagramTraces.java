@@ -204,7 +204,7 @@ public final class DiagramTraces {
             }
             if (!legs.isEmpty() && !legs.get(legs.size() - 1).openEnded()) {
                 LegSpan last = legs.get(legs.size() - 1);
-                marks.add(mark(n.name(), last.index() + 2, "coast", 0.0, craft, last.end().timeSeconds(), axis));
+                marks.add(mark(n.name(), last.index() + 2, LegSpec.COAST, 0.0, craft, last.end().timeSeconds(), axis));
             }
         }
         for (LegMark m : marks) {

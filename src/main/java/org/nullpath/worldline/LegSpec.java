@@ -69,6 +69,13 @@ public sealed interface LegSpec {
     /** Scenario end keys of legs that end by their own physics unless told to end earlier. */
     List<String> LIMITED_END_KEYS = List.of("until-speed", "until-distance");
 
+    /** The scenario keys of the leg kinds (a kind's {@link #key()}). */
+    String BURN = "burn";
+    String COAST = "coast";
+    String ROCKET = "rocket";
+    String SAIL = "sail";
+    String PROFILE = "profile";
+
     /** A constant proper acceleration burn ({@code acceleration} signed along the heading, not 0). */
     record Burn(double accelerationMetresPerSecond2, LegEnd end) implements LegSpec {
         public Burn {
@@ -80,7 +87,7 @@ public sealed interface LegSpec {
 
         @Override
         public String key() {
-            return "burn";
+            return BURN;
         }
 
         @Override
@@ -102,7 +109,7 @@ public sealed interface LegSpec {
 
         @Override
         public String key() {
-            return "coast";
+            return COAST;
         }
 
         @Override
@@ -160,7 +167,7 @@ public sealed interface LegSpec {
 
         @Override
         public String key() {
-            return "rocket";
+            return ROCKET;
         }
 
         @Override
@@ -204,7 +211,7 @@ public sealed interface LegSpec {
 
         @Override
         public String key() {
-            return "rocket";
+            return ROCKET;
         }
 
         @Override
@@ -264,7 +271,7 @@ public sealed interface LegSpec {
 
         @Override
         public String key() {
-            return "sail";
+            return SAIL;
         }
 
         @Override
@@ -315,7 +322,7 @@ public sealed interface LegSpec {
 
         @Override
         public String key() {
-            return "profile";
+            return PROFILE;
         }
 
         @Override
