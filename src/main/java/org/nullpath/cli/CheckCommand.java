@@ -4,6 +4,7 @@ import java.util.Optional;
 import java.util.concurrent.Callable;
 
 import org.nullpath.mission.Mission;
+import org.nullpath.report.Readable;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 
@@ -22,8 +23,8 @@ final class CheckCommand implements Callable<Integer> {
             return Main.INPUT_ERROR;
         }
         Mission s = loaded.get();
-        input.out().printf("%s: usable (%s; %s)%n", input.scenario, TerminalSummary.bodies(s),
-                TerminalSummary.planned(s, ""));
+        input.out().printf("%s: usable (%s; %s)%n", input.scenario, Readable.bodies(s),
+                Readable.planned(s, ""));
         return 0;
     }
 }

@@ -21,47 +21,22 @@ final class TerminalSummary {
     private TerminalSummary() {
     }
 
-    /** "1 station", "2 stations". */
-    static String count(long n, String noun) {
-        return n + " " + noun + (n == 1 ? "" : "s");
-    }
-
-    /**
-     * What a scenario plans, in the same words for check and plan: "182 messages planned: 156 on links, 26 in
-     * 13 round trips"; {@code onLinks} is put after the links' count ("156 on links (...)").
-     */
-    static String planned(Mission s, String onLinks) {
-        long trips = s.plannedRoundTrips();
-        String head = count(s.plannedMessages(), "message") + " planned";
-        if (trips == 0) {
-            return head + onLinks;
-        }
-        return head + ": " + s.plannedOnLinks() + " on links" + onLinks + ", " + (2 * trips) + " in "
-                + count(trips, "round trip");
-    }
-
-    /** "2 stations, 1 craft, 3 links". */
-    static String bodies(Mission s) {
-        return count(s.stations().size(), "station") + ", " + s.craft().size() + " craft, "
-                + count(s.links().size(), "link");
-    }
-
     static void print(PrintWriter out, Mission s, PlanResult r, Path dir, OutputFolder.Commit commit) {
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
         out.printf("%s%n", s.title());
-        out.printf("  %s; %s%n", bodies(s), planned(s, " (" + (messages - never) + " delivered, " + never
+        out.printf("  %s; %s%n", Readable.bodies(s), Readable.planned(s, " (" + (messages - never) + " delivered, " + never
                 + " never arrive)"));
         for (LinkTally t : r.links()) {
-            Link l = s.links().get(t.link());
+            Link l = t.link();
             out.printf("  link %-12s %s -> %s: %d sent, %d arrive; light time %s to %s; Doppler %s to %s%n",
-                    t.link(), l.from().name(), l.to().name(), t.messages(), t.delivered(), Readable.time(t.minLightTime()),
+                    l.name(), l.from().name(), l.to().name(), t.messages(), t.delivered(), Readable.time(t.minLightTime()),
                     Readable.time(t.maxLightTime()), Readable.number(t.minDoppler()), Readable.number(t.maxDoppler()));
         }
         for (LinkTally t : r.links()) {
             if (t.illConditioned() > 0) {
                 out.printf("  NOTE %s: %d light times are ill-conditioned (known to worse than 1e-12 relative; see the"
-                        + " light_time_condition column)%n", t.link(), t.illConditioned());
+                        + " light_time_condition column)%n", t.link().name(), t.illConditioned());
             }
         }
         for (CutoffRow c : r.cutoffs()) {
@@ -90,17 +65,17 @@ final class TerminalSummary {
             BudgetTally.Figures b = t.budget().get();
             out.printf("  budget %-12s margin %s to %s dB; %d of %d delivered close; received %s to %s Hz;"
                             + " Doppler rate up to %s Hz/s; rate that closes for all: %s bit/s%n",
-                    t.link(), Readable.number(b.worstMarginDb()), Readable.number(b.bestMarginDb()), b.closing(),
+                    t.link().name(), Readable.number(b.worstMarginDb()), Readable.number(b.bestMarginDb()), b.closing(),
                     t.delivered(), Readable.number(b.minRxFrequencyHz()), Readable.number(b.maxRxFrequencyHz()),
                     Readable.number(b.maxAbsDopplerRateHzPerS()), Readable.number(b.minMaxDataRateBps()));
             if (b.extremeShift()) {
                 out.printf("  NOTE %s: the received frequency leaves [carrier/2, 2 x carrier] (%s to %s Hz):"
-                        + " another band entirely%n", t.link(), Readable.number(b.minRxFrequencyHz()),
+                        + " another band entirely%n", t.link().name(), Readable.number(b.minRxFrequencyHz()),
                         Readable.number(b.maxRxFrequencyHz()));
             }
             if (!Double.isNaN(b.worstMarginDb()) && (Double.isNaN(worst) || b.worstMarginDb() < worst)) {
                 worst = b.worstMarginDb();
-                worstLink = t.link();
+                worstLink = t.link().name();
             }
         }
         for (WindowRow w : r.windows()) {
@@ -113,7 +88,7 @@ final class TerminalSummary {
             out.printf("  worst margin: %s dB on %s%n", Readable.number(worst), worstLink);
         }
         out.printf("  written to %s%s%n", dir, commit.replaced().isEmpty() ? ""
-                : " (replacing " + count(commit.replaced().size(), "file") + " already there)");
+                : " (replacing " + Readable.count(commit.replaced().size(), "file") + " already there)");
         if (!commit.removed().isEmpty()) {
             out.printf("  removed what an earlier plan wrote there and this one does not: %s%n",
                     String.join(", ", commit.removed()));

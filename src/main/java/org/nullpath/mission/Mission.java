@@ -57,7 +57,7 @@ public record Mission(ScenarioText source, String title, Optional<Instant> epoch
     public List<MessagePlan> plansOn(Link link) {
         List<MessagePlan> out = new ArrayList<>();
         for (MessagePlan p : messages) {
-            if (p.link().name().equals(link.name())) {
+            if (p.link() == link) {
                 out.add(p);
             }
         }

@@ -2,6 +2,7 @@ package org.nullpath.report;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 
 import org.jfree.chart.axis.LogAxis;
 import org.jfree.chart.axis.NumberAxis;
@@ -29,13 +30,13 @@ final class Axes {
         a.setTickMarkInsideLength(0f);
     }
 
-    /** Finite values' {min, max}; null when there are none. */
-    static double[] extent(List<Double> values) {
+    /** Finite values' {min, max}; empty when there are none. */
+    static Optional<double[]> extent(List<Double> values) {
         return extent(values.stream().mapToDouble(Double::doubleValue).toArray());
     }
 
-    /** Finite values' {min, max}; null when there are none. */
-    static double[] extent(double[] values) {
+    /** Finite values' {min, max}; empty when there are none. */
+    static Optional<double[]> extent(double[] values) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (double v : values) {
@@ -44,20 +45,20 @@ final class Axes {
                 hi = Math.max(hi, v);
             }
         }
-        return lo <= hi ? new double[] {lo, hi} : null;
+        return lo <= hi ? Optional.of(new double[] {lo, hi}) : Optional.empty();
     }
 
     /** A linear axis over the values (padded by {@code pad} of the span) with about {@code ticks} steps. */
     static NumberAxis linear(String label, List<Double> values, double pad, boolean floorAtZero, int ticks) {
-        double[] e = extent(values);
+        Optional<double[]> range = extent(values);
         double lo;
         double hi;
-        if (e == null) {
+        if (range.isEmpty()) {
             lo = 0;
             hi = 1;
         } else {
-            lo = e[0];
-            hi = e[1];
+            lo = range.get()[0];
+            hi = range.get()[1];
             double span = hi - lo;
             if (!(span > Math.abs(hi) * 1e-12)) {
                 double half = Math.max(Math.abs(hi) * 0.01, 1e-12);
@@ -98,9 +99,9 @@ final class Axes {
                 positive.add(v);
             }
         }
-        double[] e = extent(positive);
-        double lo = e == null ? 1 : e[0];
-        double hi = e == null ? 10 : e[1];
+        double[] e = extent(positive).orElse(new double[] {1, 10});
+        double lo = e[0];
+        double hi = e[1];
         double llo = Math.log10(lo);
         double lhi = Math.log10(hi);
         double span = Math.max(lhi - llo, 0.5);

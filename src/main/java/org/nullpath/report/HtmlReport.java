@@ -68,17 +68,14 @@ public final class HtmlReport {
     }
 
     private static void masthead(StringBuilder h, Mission s, PlanResult r) {
-        long stations = s.stations().size();
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
         String file = s.source().fileName();
         h.append("<header class=\"masthead\">\n<p class=\"kicker\">nullpath \u00b7 plan report</p>\n<h1 id=\"title\">")
                 .append(Html.escape(s.title())).append("</h1>\n<p class=\"meta\">scenario <code>")
-                .append(Html.escape(file)).append("</code> \u00b7 ").append(stations).append(" station")
-                .append(stations == 1 ? "" : "s").append(", ").append(s.craft().size()).append(" craft, ")
-                .append(s.links().size()).append(" link").append(s.links().size() == 1 ? "" : "s").append(" \u00b7 ")
-                .append(messages).append(" planned messages, ").append(messages - never).append(" delivered, ")
-                .append(never).append(" never arrive");
+                .append(Html.escape(file)).append("</code> \u00b7 ").append(Readable.bodies(s)).append(" \u00b7 ")
+                .append(Html.escape(Readable.planned(s, " (" + (messages - never) + " delivered, " + never
+                        + " never arrive)")));
         s.epoch().ifPresent(e -> h.append(" \u00b7 mission time 0 is ").append(Html.escape(e.toString())));
         h.append("</p>\n</header>\n");
     }
@@ -157,7 +154,7 @@ public final class HtmlReport {
             BudgetTally.Figures b = t.budget().get();
             row(h, "margin", shown(b.worstMarginDb()) + " to " + shown(b.bestMarginDb()) + " dB; "
                     + b.closing() + " of " + t.delivered() + " delivered messages close");
-            Scales.Unit f = Scales.frequency(ls.terms().carrierHz());
+            Scales.Unit f = Scales.frequency(ls.terms().orElseThrow().carrierHz());
             row(h, "received frequency", shown(f.of(b.minRxFrequencyHz())) + " to "
                     + shown(f.of(b.maxRxFrequencyHz())) + " " + f.symbol() + (b.extremeShift()
                     ? " (leaves [carrier / 2, 2 \u00d7 carrier]: another band entirely)" : ""));

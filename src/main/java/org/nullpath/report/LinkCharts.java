@@ -138,11 +138,11 @@ final class LinkCharts {
                                 Charts.Dash.SOLID), Charts.Key.line("equal readings", Palette.MUTED,
                                 Charts.Dash.DASHED)), horizonKey), Charts.WIDTH, 340));
 
-        LinkTerms terms = ls.terms();
-        if (terms == null) {
+        if (ls.terms().isEmpty()) {
             out.add(clockImage);
             return out;
         }
+        LinkTerms terms = ls.terms().get();
         // received (and transmitted) frequency with the tuning range
         double[] rx = budgetColumn(samples, Budget::rxFrequencyHz);
         double[] tx = budgetColumn(samples, Budget::txFrequencyHz);
@@ -264,7 +264,6 @@ final class LinkCharts {
 
     /** {min, max} of the finite values; {0, 0} when there are none. */
     private static double[] finiteExtent(double[] v) {
-        double[] e = Axes.extent(v);
-        return e == null ? new double[] {0, 0} : e;
+        return Axes.extent(v).orElse(new double[] {0, 0});
     }
 }

@@ -6,9 +6,10 @@ import java.math.RoundingMode;
 import java.time.Instant;
 import java.util.Locale;
 
+import org.nullpath.mission.Mission;
 import org.nullpath.units.Constants;
 
-/** Short human-readable forms of times for terminal and report text (never for data files). */
+/** Short human-readable forms of times and counts for terminal and report text (never for data files). */
 public final class Readable {
     private Readable() {
     }
@@ -117,5 +118,30 @@ public final class Readable {
 
     private static String fmt(double v) {
         return String.format(Locale.ROOT, "%.4g", v);
+    }
+
+    /** "1 station", "2 stations". */
+    public static String count(long n, String noun) {
+        return n + " " + noun + (n == 1 ? "" : "s");
+    }
+
+    /**
+     * What a scenario plans, in the same words for check and plan: "182 messages planned: 156 on links, 26 in
+     * 13 round trips"; {@code onLinks} is put after the links' count ("156 on links (...)").
+     */
+    public static String planned(Mission s, String onLinks) {
+        long trips = s.plannedRoundTrips();
+        String head = count(s.plannedMessages(), "message") + " planned";
+        if (trips == 0) {
+            return head + onLinks;
+        }
+        return head + ": " + s.plannedOnLinks() + " on links" + onLinks + ", " + (2 * trips) + " in "
+                + count(trips, "round trip");
+    }
+
+    /** "2 stations, 1 craft, 3 links". */
+    public static String bodies(Mission s) {
+        return count(s.stations().size(), "station") + ", " + s.craft().size() + " craft, "
+                + count(s.links().size(), "link");
     }
 }

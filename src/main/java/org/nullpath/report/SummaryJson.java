@@ -72,9 +72,9 @@ final class SummaryJson {
         root.put("craft", craft);
         List<Object> links = new ArrayList<>();
         for (LinkTally t : r.links()) {
-            Link l = s.links().get(t.link());
+            Link l = t.link();
             Map<String, Object> m = new LinkedHashMap<>();
-            m.put("name", t.link());
+            m.put("name", l.name());
             m.put("from", l.from().name());
             m.put("to", l.to().name());
             m.put("messages", t.messages());

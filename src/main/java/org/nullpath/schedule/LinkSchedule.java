@@ -137,7 +137,7 @@ public final class LinkSchedule {
             }
             sink.accept(new MessageRow(index, clock, p.send().timeSeconds(), delivery));
         }
-        return new LinkTally(link.name(), index, delivered, index - delivered, minD, maxD, minT, maxT,
+        return new LinkTally(link, index, delivered, index - delivered, minD, maxD, minT, maxT,
                 lastArrivalClock, budgets.map(BudgetTally::snapshot), illConditioned);
     }
 }

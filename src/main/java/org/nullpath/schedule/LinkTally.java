@@ -2,10 +2,12 @@ package org.nullpath.schedule;
 
 import java.util.Optional;
 
+import org.nullpath.mission.Link;
+
 /**
  * What a link's schedule came to, for summaries.
  *
- * @param link           link name
+ * @param link           the link
  * @param messages       messages planned
  * @param delivered      messages that arrive
  * @param never          messages that never arrive
@@ -18,7 +20,7 @@ import java.util.Optional;
  * @param illConditioned delivered messages whose light time is known to worse than 1e-12 relative because
  *                       the problem itself is ill-conditioned (condition number times 1.1e-16)
  */
-public record LinkTally(String link, long messages, long delivered, long never, double minDoppler,
+public record LinkTally(Link link, long messages, long delivered, long never, double minDoppler,
                         double maxDoppler, double minLightTime, double maxLightTime, double lastArrivalClock,
                         Optional<BudgetTally.Figures> budget, long illConditioned) {
 }

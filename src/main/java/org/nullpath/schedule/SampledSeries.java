@@ -81,9 +81,9 @@ public final class SampledSeries {
             return route.to().name();
         }
 
-        /** The link's terms, null when it has none. */
-        public LinkTerms terms() {
-            return route.terms().orElse(null);
+        /** The link's terms, when it has them. */
+        public Optional<LinkTerms> terms() {
+            return route.terms();
         }
 
         /** True when sends late in the planned range never arrive (the horizon falls inside it). */
@@ -109,12 +109,12 @@ public final class SampledSeries {
         Worldline sender = link.sender();
         Worldline receiver = link.receiver();
         HorizonRow horizon = Deadlines.horizonRow(link.name(), sender, receiver);
-        double[] range = plannedRange(mission, link);
-        if (range == null) {
+        Optional<double[]> range = plannedRange(mission, link);
+        if (range.isEmpty()) {
             return new LinkSeries(link, false, Double.NaN, Double.NaN, horizon, 0, List.of());
         }
-        double lo = range[0];
-        double hi = range[1];
+        double lo = range.get()[0];
+        double hi = range.get()[1];
         double[] clocks;
         if (horizon.hasHorizon() && horizon.lastSendClock() <= hi) {
             double end = horizon.lastSendClock();
@@ -172,9 +172,9 @@ public final class SampledSeries {
 
     /**
      * Earliest and latest planned send clock on {@code link}: its message plans, or else the exchange
-     * queries it carries; null when nothing is planned on it.
+     * queries it carries ({lo, hi}); empty when nothing is planned on it.
      */
-    static double[] plannedRange(Mission mission, Link link) {
+    static Optional<double[]> plannedRange(Mission mission, Link link) {
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (MessagePlan p : mission.plansOn(link)) {
@@ -187,15 +187,15 @@ public final class SampledSeries {
             hi = Math.max(hi, p.sendClock(n - 1));
         }
         if (lo <= hi) {
-            return new double[] {lo, hi};
+            return Optional.of(new double[] {lo, hi});
         }
         for (Exchange e : mission.exchanges()) {
             long n = e.count();
-            if (e.query().name().equals(link.name()) && n > 0) {
+            if (e.query() == link && n > 0) {
                 lo = Math.min(lo, e.first());
                 hi = Math.max(hi, e.sendClock(n - 1));
             }
         }
-        return lo <= hi ? new double[] {lo, hi} : null;
+        return lo <= hi ? Optional.of(new double[] {lo, hi}) : Optional.empty();
     }
 }
