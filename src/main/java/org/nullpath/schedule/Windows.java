@@ -36,7 +36,7 @@ public final class Windows {
 
     /**
      * A window whose other conditions fail only within this relative distance of the horizon is
-     * reported as closed by the horizon (the contract's edge tolerance).
+     * reported as closed by the horizon (the 1e-9 edge tolerance of docs/output-files.md).
      */
     public static final double HORIZON_SNAP = 1e-9;
 
