@@ -1,18 +1,37 @@
 package org.nullpath.mission;
 
 import java.nio.file.Path;
+import java.util.Collections;
+import java.util.LinkedHashMap;
+import java.util.Map;
 import java.util.Objects;
 
 /**
- * The scenario as it was loaded: where it came from and its text, for the report's echo.
+ * The scenario as it was loaded: where it came from, its text, and the values replaced in it for this run
+ * (a study resolves one scenario many times with one value changed), for the report's echo.
  *
- * @param file where it was read from (or the name it was given)
- * @param text the text read, byte order mark removed
+ * @param file     where it was read from (or the name it was given)
+ * @param text     the text read, byte order mark removed
+ * @param replaced key path to the value that replaced the one written there, in the order replaced
  */
-public record ScenarioText(Path file, String text) {
+public record ScenarioText(Path file, String text, Map<String, String> replaced) {
     public ScenarioText {
         Objects.requireNonNull(file, "file");
         Objects.requireNonNull(text, "text");
+        replaced = Collections.unmodifiableMap(new LinkedHashMap<>(replaced));
+    }
+
+    /** The text as read, nothing replaced. */
+    public ScenarioText(Path file, String text) {
+        this(file, text, Map.of());
+    }
+
+    /** The same text with one more value replaced. */
+    public ScenarioText replacing(String keyPath, String value) {
+        Map<String, String> r = new LinkedHashMap<>(replaced);
+        r.remove(keyPath);
+        r.put(keyPath, value);
+        return new ScenarioText(file, text, r);
     }
 
     /** The file's own name, without folders. */

@@ -301,8 +301,15 @@ public final class HtmlReport {
 
     private static void scenarioSection(StringBuilder h, Mission s) {
         h.append("<section id=\"scenario\">\n<h2>The scenario as read</h2>\n");
-        h.append("<p>The file exactly as planned, with its units.</p>\n<pre class=\"scenario\">")
-                .append(Html.escape(s.source().text())).append("</pre>\n");
+        if (s.source().replaced().isEmpty()) {
+            h.append("<p>The file exactly as planned, with its units.</p>\n");
+        } else {
+            h.append("<p>The file as read, with these values replaced for this plan:</p>\n<ul>\n");
+            s.source().replaced().forEach((k, v) -> h.append("<li><code>").append(Html.escape(k)).append(": ")
+                    .append(Html.escape(v)).append("</code></li>\n"));
+            h.append("</ul>\n");
+        }
+        h.append("<pre class=\"scenario\">").append(Html.escape(s.source().text())).append("</pre>\n");
         h.append("</section>\n");
     }
 }

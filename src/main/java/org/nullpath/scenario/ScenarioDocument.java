@@ -60,7 +60,7 @@ public final class ScenarioDocument {
         return new ScenarioDocument(new ScenarioText(path, text), problems, root);
     }
 
-    /** The scenario as read (the original text, whatever values were replaced). */
+    /** The scenario as read: the original text, and the values replaced in it. */
     public ScenarioText source() {
         return source;
     }
@@ -84,7 +84,7 @@ public final class ScenarioDocument {
      */
     public ScenarioDocument with(String keyPath, String value) throws ScenarioException {
         Scalar parsedValue = scalar(value, keyPath);
-        return new ScenarioDocument(source, parsed, replace(root, keyPath, "", parsedValue));
+        return new ScenarioDocument(source.replacing(keyPath, value), parsed, replace(root, keyPath, "", parsedValue));
     }
 
     /** True when {@code keyPath} names a value written in this document. */

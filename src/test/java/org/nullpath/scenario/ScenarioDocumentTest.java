@@ -42,6 +42,18 @@ class ScenarioDocumentTest {
     }
 
     @Test
+    void theMissionSaysWhichValuesWereReplaced() throws Exception {
+        ScenarioDocument doc = ScenarioDocument.of(TEXT, "wren.yaml");
+        Mission m = doc.with("messages[0].last", "20 d").with("craft.wren.2.start-speed", "0.1 c")
+                .with("messages[0].last", "30 d").resolve();
+        assertEquals(java.util.List.of("messages[0].last", "craft.wren.2.start-speed"),
+                java.util.List.copyOf(m.source().replaced().keySet()));
+        assertEquals("30 d", m.source().replaced().get("messages[0].last"));
+        assertTrue(doc.resolve().source().replaced().isEmpty());
+        assertEquals(TEXT, m.source().text());
+    }
+
+    @Test
     void aKeyMissingFromAnExistingMappingIsAdded() throws Exception {
         ScenarioDocument doc = ScenarioDocument.of(TEXT, "wren.yaml");
         assertFalse(doc.has("craft.wren.2.start-speed"));
