@@ -12,7 +12,7 @@ import java.util.Objects;
  *
  * @param file     where it was read from (or the name it was given)
  * @param text     the text read, byte order mark removed
- * @param replaced key path to the value that replaced the one written there, in the order replaced
+ * @param replaced key path to the value that replaced the one written there, in the order first replaced
  */
 public record ScenarioText(Path file, String text, Map<String, String> replaced) {
     public ScenarioText {
@@ -29,8 +29,7 @@ public record ScenarioText(Path file, String text, Map<String, String> replaced)
     /** The same text with one more value replaced. */
     public ScenarioText replacing(String keyPath, String value) {
         Map<String, String> r = new LinkedHashMap<>(replaced);
-        r.remove(keyPath);
-        r.put(keyPath, value);
+        r.put(keyPath, value); // a key replaced again keeps its place
         return new ScenarioText(file, text, r);
     }
 
