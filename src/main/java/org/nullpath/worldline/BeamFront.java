@@ -15,7 +15,7 @@ import org.nullpath.units.Constants;
 record BeamFront(double stationRapidity, double switchOffU) {
 
     /**
-     * @throws WorldlineException naming the leg when the station is off the flight line, not behind the
+     * @throws WorldlineException naming the leg when the station is off the flight line, ahead of the
      *                            craft, or switches off before its light reaches the sail
      */
     static BeamFront of(LegStart start, InertialWorldline station, double beamOffClock) {
@@ -31,8 +31,10 @@ record BeamFront(double stationRapidity, double switchOffU) {
         if (perpendicular.norm() > 1e-12 * scale || v.cross(n).norm() > 1e-12 * Math.max(v.norm(), 1)) {
             throw new WorldlineException(i, "the beam station must sit (and move, if it moves) on the craft's flight line");
         }
-        if (!(along < lo.along())) {
-            throw new WorldlineException(i, "the beam station must be behind the craft on its flight line at the start of the leg");
+        // at the station itself (distance 0, a launch from the array) the beam is a plane wave along the line
+        if (!(along <= lo.along() + 1e-12 * scale)) {
+            throw new WorldlineException(i, "the beam station must be behind the craft (or where it is) on its flight line"
+                    + " at the start of the leg; it is " + Math.abs(along - lo.along()) + " m ahead");
         }
         double c = Constants.C;
         State off = station.atClock(beamOffClock);
