@@ -25,7 +25,7 @@ final class PlanCommand implements Callable<Integer> {
     @Mixin
     ScenarioInput input;
 
-    @Option(names = "--out", required = true, paramLabel = "DIR", description = "folder to write into (created if missing)")
+    @Option(names = {"-o", "--out"}, required = true, paramLabel = "DIR", description = "folder to write into (created if missing)")
     Path out;
 
     @Option(names = "--no-report", description = "do not write report.html")

@@ -60,6 +60,47 @@ public final class Units {
         return Map.entry(symbol, factor);
     }
 
+    /**
+     * What people often type for a unit of each kind, and the unit nullpath spells it as: hints only, never
+     * accepted silently (a scenario says exactly what it means).
+     */
+    private static final Map<Dimension, Map<String, String>> COMMON = Map.of(
+            Dimension.TIME, Map.ofEntries(Map.entry("sec", "s"), Map.entry("secs", "s"), Map.entry("second", "s"),
+                    Map.entry("seconds", "s"), Map.entry("mins", "min"), Map.entry("minute", "min"),
+                    Map.entry("minutes", "min"), Map.entry("hr", "h"), Map.entry("hrs", "h"), Map.entry("hour", "h"),
+                    Map.entry("hours", "h"), Map.entry("day", "d"), Map.entry("days", "d"), Map.entry("y", "yr"),
+                    Map.entry("yrs", "yr"), Map.entry("year", "yr"), Map.entry("years", "yr")),
+            Dimension.DATA_RATE, Map.ofEntries(Map.entry("bps", "bit/s"), Map.entry("b/s", "bit/s"),
+                    Map.entry("kbps", "kbit/s"), Map.entry("kb/s", "kbit/s"), Map.entry("Mbps", "Mbit/s"),
+                    Map.entry("Mb/s", "Mbit/s"), Map.entry("Gbps", "Gbit/s"), Map.entry("Gb/s", "Gbit/s")),
+            Dimension.ACCELERATION, Map.of("g", "g0", "G", "g0", "gee", "g0", "m/s2", "m/s^2", "m/s/s", "m/s^2"),
+            Dimension.SPEED, Map.of("C", "c", "kms", "km/s", "mps", "m/s"),
+            Dimension.LENGTH, Map.of("AU", "au", "LY", "ly", "lyr", "ly", "parsec", "pc", "pcs", "pc"),
+            Dimension.TEMPERATURE, Map.of("C", "K", "degC", "K", "\u00b0C", "K", "F", "K", "degF", "K"));
+
+    /** The hint for a unit typed in a common but wrong way, or null. */
+    private static String commonHint(String symbol, Dimension expected) {
+        Map<String, String> m = COMMON.getOrDefault(expected, Map.of());
+        String hint = m.get(symbol);
+        if (hint == null) {
+            hint = m.get(symbol.toLowerCase(Locale.ROOT));
+        }
+        return hint;
+    }
+
+    /** " (did you mean 'K'?)", with a word on absolute temperatures where they are asked for; "" for null. */
+    private static String didYouMean(String hint, Dimension expected) {
+        if (hint == null) {
+            return "";
+        }
+        return " (did you mean '" + hint + "'?" + (expected == Dimension.TEMPERATURE
+                ? " noise temperatures are absolute, in kelvin: 20 \u00b0C is 293.15 K)" : ")");
+    }
+
+    /** Celsius or Fahrenheit written with a space ("20 deg C"), which the 'NUMBER UNIT' form cannot read. */
+    private static final Pattern RELATIVE_TEMPERATURE = Pattern.compile(
+            "(?i)\\s*[+-]?[0-9.]+(e[+-]?[0-9]+)?\\s*(deg|\u00b0|degrees)\\s*[cf]\\s*");
+
     private static final Pattern FORM = Pattern.compile(
             "\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(\\S*)\\s*");
 
@@ -78,6 +119,10 @@ public final class Units {
             if (lower.startsWith("nan") || lower.contains("inf")) {
                 throw new UnitException("expected " + expected.description() + ", got a non-finite number '" + text.trim() + "'");
             }
+            if (RELATIVE_TEMPERATURE.matcher(text).matches()) {
+                throw new UnitException("expected " + expected.description() + " in K, got '" + text.trim()
+                        + "': noise temperatures are absolute, in kelvin (e.g. 20 \u00b0C is 293.15 K)");
+            }
             throw new UnitException("expected " + expected.description() + " as 'NUMBER UNIT' (e.g. "
                     + example(expected) + "), got '" + text.trim() + "'");
         }
@@ -91,14 +136,15 @@ public final class Units {
                     + example(expected) + "), got the plain number '" + text.trim() + "'");
         }
         Unit unit = UNITS.get(symbol);
+        String common = commonHint(symbol, expected);
         if (unit == null) {
-            String hint = closestSymbol(symbol, expected);
-            throw new UnitException("expected " + expected.description() + ", got unknown unit '" + symbol + "'"
-                    + (hint == null ? "" : " (did you mean '" + hint + "'?)"));
+            String hint = common != null ? common : closestSymbol(symbol, expected);
+            throw new UnitException("expected " + expected.description() + ", got unknown unit '" + symbol + "' in '"
+                    + text.trim() + "'" + didYouMean(hint, expected));
         }
         if (unit.dimension() != expected) {
             throw new UnitException("expected " + expected.description() + ", got " + unit.dimension().description()
-                    + " ('" + text.trim() + "')");
+                    + " ('" + text.trim() + "')" + didYouMean(common, expected));
         }
         double si = unit.decibel() ? Math.pow(10.0, (number + unit.decibelOffset()) / 10.0) : number * unit.factor();
         return checked(si, expected, text);
