@@ -7,6 +7,7 @@ import org.nullpath.report.PlanOutput;
 import org.nullpath.report.OutputFolder;
 import org.nullpath.report.PlanResult;
 import org.nullpath.report.Readable;
+import org.nullpath.mission.Craft;
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
 import org.nullpath.schedule.ExchangeTally;
@@ -33,6 +34,9 @@ final class TerminalSummary {
                     l.name(), l.from().name(), l.to().name(), t.messages(), t.delivered(), Readable.time(t.minLightTime()),
                     Readable.time(t.maxLightTime()), Readable.number(t.minDoppler()), Readable.number(t.maxDoppler()));
         }
+        for (Craft c : s.craft()) {
+            out.printf("  craft %-11s %s%n", c.name(), Readable.flightEnd(c, s.epoch()));
+        }
         for (LinkTally t : r.links()) {
             if (t.illConditioned() > 0) {
                 out.printf("  NOTE %s: %d light times are ill-conditioned (known to worse than 1e-12 relative; see the"
@@ -54,7 +58,10 @@ final class TerminalSummary {
             }
         }
         for (ExchangeTally e : r.exchanges()) {
-            out.printf("  exchange %-10s %d of %d round trips complete%n", e.name(), e.complete(), e.roundTrips());
+            out.printf("  exchange %-10s %d of %d round trips complete%s%n", e.name(), e.complete(), e.roundTrips(),
+                    e.complete() == 0 ? "" : "; round trip " + Readable.time(e.minRoundTrip()) + " to "
+                    + Readable.time(e.maxRoundTrip()) + (Double.isNaN(e.medianRoundTrip()) ? ""
+                    : ", median " + Readable.time(e.medianRoundTrip())) + " on the querier's clock");
         }
         double worst = Double.NaN;
         String worstLink = null;
@@ -63,15 +70,17 @@ final class TerminalSummary {
                 continue;
             }
             BudgetTally.Figures b = t.budget().get();
-            out.printf("  budget %-12s margin %s to %s dB; %d of %d delivered close; received %s to %s Hz;"
-                            + " Doppler rate up to %s Hz/s; rate that closes for all: %s bit/s%n",
+            out.printf("  budget %-12s margin %s to %s dB; %d of %d delivered close (%d outside the tuning range, %d over"
+                            + " the Doppler-rate limit); received %s to %s; Doppler rate up to %s Hz/s; rate that closes"
+                            + " for all: %s bit/s%n",
                     t.link().name(), Readable.number(b.worstMarginDb()), Readable.number(b.bestMarginDb()), b.closing(),
-                    t.delivered(), Readable.number(b.minRxFrequencyHz()), Readable.number(b.maxRxFrequencyHz()),
-                    Readable.number(b.maxAbsDopplerRateHzPerS()), Readable.number(b.minMaxDataRateBps()));
+                    t.delivered(), b.outOfTuning(), b.overDopplerRate(), Readable.frequency(b.minRxFrequencyHz()),
+                    Readable.frequency(b.maxRxFrequencyHz()), Readable.number(b.maxAbsDopplerRateHzPerS()),
+                    Readable.number(b.minMaxDataRateBps()));
             if (b.extremeShift()) {
-                out.printf("  NOTE %s: the received frequency leaves [carrier/2, 2 x carrier] (%s to %s Hz):"
-                        + " another band entirely%n", t.link().name(), Readable.number(b.minRxFrequencyHz()),
-                        Readable.number(b.maxRxFrequencyHz()));
+                out.printf("  NOTE %s: the received frequency leaves [carrier/2, 2 x carrier] (%s to %s):"
+                        + " another band entirely%n", t.link().name(), Readable.frequency(b.minRxFrequencyHz()),
+                        Readable.frequency(b.maxRxFrequencyHz()));
             }
             if (!Double.isNaN(b.worstMarginDb()) && (Double.isNaN(worst) || b.worstMarginDb() < worst)) {
                 worst = b.worstMarginDb();

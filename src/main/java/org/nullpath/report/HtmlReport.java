@@ -295,7 +295,10 @@ public final class HtmlReport {
                 new Shown<>("exchange", e -> cell(e.name())),
                 new Shown<>("planned", e -> cell(Long.toString(e.roundTrips()))),
                 new Shown<>("complete", e -> cell(Long.toString(e.complete()))),
-                new Shown<>("never complete", e -> cell(Long.toString(e.roundTrips() - e.complete())))));
+                new Shown<>("never complete", e -> cell(Long.toString(e.roundTrips() - e.complete()))),
+                new Shown<>("shortest (querier's clock)", e -> time(e.minRoundTrip())),
+                new Shown<>("median", e -> time(e.medianRoundTrip())),
+                new Shown<>("longest", e -> time(e.maxRoundTrip()))));
         h.append("</section>\n");
     }
 

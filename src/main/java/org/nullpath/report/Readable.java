@@ -4,9 +4,14 @@ import java.math.BigDecimal;
 import java.math.MathContext;
 import java.math.RoundingMode;
 import java.time.Instant;
+import java.util.List;
 import java.util.Locale;
+import java.util.Optional;
 
+import org.nullpath.mission.Craft;
 import org.nullpath.mission.Mission;
+import org.nullpath.worldline.LegSpan;
+import org.nullpath.worldline.LineState;
 import org.nullpath.units.Constants;
 
 /** Short human-readable forms of times and counts for terminal and report text (never for data files). */
@@ -106,6 +111,36 @@ public final class Readable {
         } catch (ArithmeticException | java.time.DateTimeException e) {
             return "beyond the calendar";
         }
+    }
+
+    /**
+     * Where a craft's flight plan ends: "last leg ends at 1.234 yr on its clock, 2.345 yr mission time", with
+     * the calendar instant when there is an epoch, and its speed then; or that its last leg is open-ended.
+     */
+    public static String flightEnd(Craft c, Optional<Instant> epoch) {
+        List<LegSpan> legs = c.worldline().legs();
+        if (legs.isEmpty()) {
+            return "no legs: it coasts at its start speed";
+        }
+        LegSpan last = legs.get(legs.size() - 1);
+        if (last.openEnded()) {
+            return "its last leg, an open-ended burn, starts at " + time(last.start().clock()) + " on its clock ("
+                    + time(last.start().timeSeconds()) + " mission time) and never ends";
+        }
+        LineState end = last.end();
+        return "last leg ends at " + time(end.clock()) + " on its clock, " + time(end.timeSeconds()) + " mission time"
+                + epoch.map(e -> " (" + instantNotBefore(e, end.timeSeconds()) + ")").orElse("")
+                + (Math.abs(end.rapidity()) < 1e-9 ? ", at rest in the mission frame; then it stays there"
+                : ", at " + number(Math.tanh(end.rapidity())) + " c; then it coasts");
+    }
+
+    /** A frequency in the SI-prefixed unit that puts it between 1 and 1000, 7 significant digits: "5.856910 GHz". */
+    public static String frequency(double hz) {
+        if (Double.isNaN(hz)) {
+            return "-";
+        }
+        Scales.Unit u = Scales.frequency(hz);
+        return String.format(Locale.ROOT, "%.7g", u.of(hz)) + " " + u.symbol();
     }
 
     /** A plain number to 6 significant digits. */

@@ -18,6 +18,7 @@ import org.nullpath.mission.Station;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.LinkTally;
+import org.nullpath.worldline.AccelerationRange;
 import org.nullpath.worldline.LegSpan;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.LineState;
@@ -52,7 +53,13 @@ final class SummaryJson {
                 Map<String, Object> leg = new LinkedHashMap<>();
                 leg.put("leg", span.index() + 1);
                 leg.put("kind", kind(span.spec()));
-                leg.put("acceleration_m_s2", nan(span.spec().accelerationMetresPerSecond2()));
+                AccelerationRange a = span.acceleration();
+                boolean constant = a.atStart() == a.atEnd() && a.atStart() == a.largestMagnitude();
+                // one number only where the acceleration is one number; a profiled leg gives its range
+                leg.put("acceleration_m_s2", constant ? nan(a.atStart()) : null);
+                leg.put("acceleration_start_m_s2", nan(a.atStart()));
+                leg.put("acceleration_end_m_s2", nan(a.atEnd()));
+                leg.put("acceleration_largest_m_s2", nan(a.largestMagnitude()));
                 leg.put("start", event(span.start()));
                 leg.put("end", span.end() == null ? null : event(span.end()));
                 leg.put("rapidity_gained", span.end() == null ? null : span.end().rapidity() - span.start().rapidity());
@@ -112,6 +119,9 @@ final class SummaryJson {
             m.put("name", e.name());
             m.put("round_trips", e.roundTrips());
             m.put("complete", e.complete());
+            m.put("min_round_trip_clock_s", nan(e.minRoundTrip()));
+            m.put("median_round_trip_clock_s", nan(e.medianRoundTrip()));
+            m.put("max_round_trip_clock_s", nan(e.maxRoundTrip()));
             exchanges.add(m);
         }
         root.put("exchanges", exchanges);

@@ -69,16 +69,23 @@ public final class Deadlines {
         Worldline responder = e.query().receiver();
         long n = e.count();
         long complete = 0;
+        RoundTrips trips = new RoundTrips();
+        Consumer<ExchangeRow> tally = row -> {
+            if (row.complete()) {
+                trips.add(row.roundTripClock());
+            }
+            sink.accept(row);
+        };
         for (long k = 0; k < n; k++) {
             double sendClock = e.sendClock(k);
             try {
-                complete += roundTrip(querier, responder, e, k, sendClock, sink) ? 1 : 0;
+                complete += roundTrip(querier, responder, e, k, sendClock, tally) ? 1 : 0;
             } catch (ArithmeticException x) {
                 throw new RangeException("exchanges." + e.name(), "round trip " + (k + 1) + " (query clock " + sendClock
                         + " s): " + x.getMessage(), x);
             }
         }
-        return new ExchangeTally(e.name(), n, complete);
+        return new ExchangeTally(e.name(), n, complete, trips.min(), trips.median(), trips.max());
     }
 
     private static boolean roundTrip(Worldline querier, Worldline responder, Exchange e, long k,

@@ -17,6 +17,11 @@ record ConstantPiece(double a) implements Piece {
     }
 
     @Override
+    public AccelerationRange accelerationRange(LineState lo, double du) {
+        return new AccelerationRange(a, a, a);
+    }
+
+    @Override
     public double rapidityAfter(LineState cur, double du) {
         return cur.rapidity() + a * du / Constants.C;
     }

@@ -59,8 +59,9 @@ final class FlightPlan {
             LegFlight flight = leg.fly(new LegStart(i, lo, startPosition, n));
             double du = leg.end().properTime(flight);
             if (openEnded) {
-                segs.add(new Segment(flight.piece(du), lo, lo, null));
-                spans.add(new LegSpan(i, leg, lo, null));
+                Piece forever = flight.piece(du);
+                segs.add(new Segment(forever, lo, lo, null));
+                spans.add(new LegSpan(i, leg, lo, null, forever.accelerationRange(lo, 0)));
                 open = true;
                 continue;
             }
@@ -73,7 +74,7 @@ final class FlightPlan {
                     cur.along() + piece.offset(Measure.DISTANCE, lo, du),
                     piece.rapidityAfter(lo, du), segs.size(), du);
             checkRepresentable(i, hi);
-            spans.add(new LegSpan(i, leg, lo, hi));
+            spans.add(new LegSpan(i, leg, lo, hi, piece.accelerationRange(lo, du)));
             if (du > 0) {
                 segs.add(new Segment(piece, lo, lo, hi));
             }

@@ -316,6 +316,27 @@ final class IntegratedPiece implements Piece {
         return Double.NaN;
     }
 
+    /**
+     * Exact for every law nullpath integrates: between knots the acceleration is linear in the leg clock (a
+     * profile) or monotone (constant thrust: |F| / m(u) grows; a sail: D^2 falls as the rapidity grows), so its
+     * extremes lie at the knots and the ends.
+     */
+    @Override
+    public AccelerationRange accelerationRange(LineState lo, double du) {
+        double u0 = local(lo);
+        double u1 = u0 + du;
+        double first = law.at(u0, y(u0)[ETA]);
+        double last = law.at(u1, y(u1)[ETA]);
+        double largest = Math.abs(last) > Math.abs(first) ? last : first;
+        for (double k : knots) {
+            if (k > u0 && k < u1) {
+                double a = law.at(k, y(k)[ETA]);
+                largest = Math.abs(a) > Math.abs(largest) ? a : largest;
+            }
+        }
+        return new AccelerationRange(first, last, largest);
+    }
+
     @Override
     public double rapidityAfter(LineState cur, double du) {
         return y(local(cur) + du)[ETA];

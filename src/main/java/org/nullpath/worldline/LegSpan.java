@@ -7,8 +7,9 @@ package org.nullpath.worldline;
  * @param spec         the leg as planned
  * @param start        the state at its start
  * @param end          the state at its end; null for an open-ended leg
+ * @param acceleration the proper acceleration over the leg as flown
  */
-public record LegSpan(int index, LegSpec spec, LineState start, LineState end) {
+public record LegSpan(int index, LegSpec spec, LineState start, LineState end, AccelerationRange acceleration) {
     public boolean openEnded() {
         return end == null;
     }

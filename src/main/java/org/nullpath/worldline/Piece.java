@@ -14,6 +14,12 @@ interface Piece {
     /** The constant proper acceleration of this piece, or NaN when it varies. */
     double constantAcceleration();
 
+    /**
+     * The proper acceleration over the piece from its start {@code lo} for proper time {@code du}: at the
+     * start, at the end, and the one of largest size, m/s^2.
+     */
+    AccelerationRange accelerationRange(LineState lo, double du);
+
     double rapidityAfter(LineState cur, double du);
 
     /** The change of {@code m} over proper time {@code du} (any sign) from {@code cur}. */

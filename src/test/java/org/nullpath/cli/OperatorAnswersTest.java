@@ -98,6 +98,67 @@ class OperatorAnswersTest {
     }
 
     @Test
+    void theTerminalGivesTimesWherePeopleNeedTimes() throws IOException {
+        Path file = tmp.resolve("osprey.yaml");
+        Files.writeString(file, SHIP);
+        Outcome o = run("plan", file.toString(), "--out", tmp.resolve("out").toString(), "--no-report");
+        // hyperbolic motion (Rindler 2006): after 1 yr at g0 the rapidity is g0 yr / c = 1.0322953, mission time
+        // (c / g0) sinh(1.0322953) = 1.187312 yr, speed tanh(1.0322953) = 0.774827 c; computed in Python
+        assertTrue(o.out().contains("craft osprey      last leg ends at 1.000 yr on its clock, 1.187 yr mission time"
+                + " (2072-07-07T15:58:"), o.out());
+        assertTrue(o.out().contains("at 0.774827 c; then it coasts"), o.out());
+        // 4 round trips, each on the querier's clock; their extremes and median are read back from the CSV
+        List<CSVRecord> trips = csv(tmp.resolve("out").resolve("exchanges-ping.csv"));
+        double[] t = trips.stream().mapToDouble(r -> Double.parseDouble(r.get("round_trip_clock_s"))).sorted().toArray();
+        String line = "exchange ping       4 of 4 round trips complete; round trip "
+                + org.nullpath.report.Readable.time(t[0]) + " to " + org.nullpath.report.Readable.time(t[3])
+                + ", median " + org.nullpath.report.Readable.time((t[1] + t[2]) / 2) + " on the querier's clock";
+        assertTrue(o.out().contains(line), line + " in\n" + o.out());
+    }
+
+    @Test
+    void profiledLegsGiveTheirAccelerationRangeInTheSummary() throws IOException {
+        Files.writeString(tmp.resolve("steps.csv"), "clock_s,acceleration_m_s2\n0,0\n50,12\n100,-3\n");
+        Path file = tmp.resolve("kite.yaml");
+        Files.writeString(file, """
+                title: Kite profiled legs
+                stations:
+                  mast: {}
+                craft:
+                  kite:
+                    heading: [1, 0, 0]
+                    legs:
+                      - sail: {beam-from: mast, beam-power: 1 GW, mass: 1 kg, reflectivity: 1, beam-off: 60 s}
+                      - rocket: {thrust: 2 MN, initial-mass: 100 t, burnout-mass: 20 t, exhaust-speed: 0.1 c}
+                      - profile: {file: steps.csv}
+                links:
+                  down: {from: kite, to: mast}
+                messages:
+                  - {link: down, at: [0 s]}
+                """);
+        Path dir = tmp.resolve("out");
+        assertEquals(0, run("plan", file.toString(), "--out", dir.toString(), "--no-report").code());
+        com.fasterxml.jackson.databind.JsonNode legs = new com.fasterxml.jackson.databind.ObjectMapper()
+                .readTree(dir.resolve("summary.json").toFile()).get("craft").get(0).get("legs");
+        double c = 299_792_458.0; // SI 2019
+        // sail (Kulkarni, Lubin & Zhang 2018): a = (1 + R) P D^2 / (m c), D = exp(-eta) for a station at rest
+        double a0 = 2 * 1e9 / (1.0 * c);
+        double etaEnd = legs.get(0).get("end").get("rapidity").asDouble();
+        assertTrue(legs.get(0).get("acceleration_m_s2").isNull());
+        assertEquals(a0, legs.get(0).get("acceleration_start_m_s2").asDouble(), 1e-12 * a0);
+        assertEquals(a0 * Math.exp(-2 * etaEnd), legs.get(0).get("acceleration_end_m_s2").asDouble(), 1e-9 * a0);
+        assertEquals(a0, legs.get(0).get("acceleration_largest_m_s2").asDouble(), 1e-12 * a0);
+        // constant thrust: a = F / m, from 2 MN / 100 t = 20 m/s^2 to 2 MN / 20 t = 100 m/s^2
+        assertEquals(20, legs.get(1).get("acceleration_start_m_s2").asDouble(), 1e-12 * 20);
+        assertEquals(100, legs.get(1).get("acceleration_end_m_s2").asDouble(), 1e-12 * 100);
+        assertEquals(100, legs.get(1).get("acceleration_largest_m_s2").asDouble(), 1e-12 * 100);
+        // the table: 0 at the start, -3 at the end, 12 the largest (linear between samples)
+        assertEquals(0, legs.get(2).get("acceleration_start_m_s2").asDouble());
+        assertEquals(-3, legs.get(2).get("acceleration_end_m_s2").asDouble());
+        assertEquals(12, legs.get(2).get("acceleration_largest_m_s2").asDouble());
+    }
+
+    @Test
     void checkAndPlanCountThePlannedMessagesInTheSameWords() throws IOException {
         Path file = tmp.resolve("osprey.yaml");
         Files.writeString(file, SHIP);
