@@ -96,7 +96,7 @@ final class MissionReader implements References {
         for (Entry e : section(top, "links", "link names, each with its link")) {
             link(e, lowerCaseLinks);
         }
-        PlanReader plans = new PlanReader(values, this);
+        PlanReader plans = new PlanReader(values, this, epoch);
         List<MessagePlan> messages = plans.all(list(top, "messages", "message plans"), "messages",
                 "a message plan", PlanReader.MESSAGE_KEYS, plans::message);
         List<Cutoff> cutoffs = plans.all(list(top, "cutoffs", "cut-offs"), "cutoffs", "a cut-off",
@@ -250,8 +250,8 @@ final class MissionReader implements References {
         return null;
     }
 
-    /** The station or craft of that name, null when it has problems. */
-    private org.nullpath.mission.Node node(String name) {
+    @Override
+    public org.nullpath.mission.Node node(String name) {
         Station s = stations.get(name);
         return s != null ? s : craft.get(name);
     }

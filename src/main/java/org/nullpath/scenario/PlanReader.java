@@ -1,10 +1,12 @@
 package org.nullpath.scenario;
 
+import java.time.Instant;
 import java.util.ArrayList;
 import java.util.HashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Optional;
 
 import org.nullpath.mission.Craft;
 import org.nullpath.mission.Cutoff;
@@ -35,12 +37,14 @@ final class PlanReader {
 
     private final Values values;
     private final References reader;
+    private final ClockTimes clocks;
     private final Map<String, Node> cutoffNames = new HashMap<>();
     private final Map<String, Node> exchangeNames = new HashMap<>();
 
-    PlanReader(Values values, References reader) {
+    PlanReader(Values values, References reader, Optional<Instant> epoch) {
         this.values = values;
         this.reader = reader;
+        this.clocks = new ClockTimes(values, epoch, reader);
     }
 
     /**
@@ -76,7 +80,7 @@ final class PlanReader {
             return null;
         }
         if (f.has("at")) {
-            List<Double> at = values.quantities(f.get("at"), f.path("at"), Dimension.TIME, "send times");
+            List<Double> at = clocks.list(f, "at", link == null ? null : link.from(), "send times");
             if (link == null || at == null || !within(f, "at", link.from(),
                     at.stream().mapToDouble(Double::doubleValue).max().orElse(0), "the last send")) {
                 return null;
@@ -88,8 +92,9 @@ final class PlanReader {
             f.problemHere("a message plan needs 'at: [times]', or 'first', 'last' and 'every'");
             return null;
         }
-        double first = f.quantity("first", Dimension.TIME);
-        double last = f.quantity("last", Dimension.TIME);
+        String sender = link == null ? null : link.from();
+        double first = clocks.at(f, "first", sender);
+        double last = clocks.at(f, "last", sender);
         double every = every(f);
         if (link == null || Double.isNaN(first) || Double.isNaN(last) || Double.isNaN(every)) {
             return null;
@@ -137,7 +142,7 @@ final class PlanReader {
             name = null;
         }
         LinkRef link = reader.linkRef(f, "link");
-        double arriveBy = f.quantity("arrive-by", Dimension.TIME);
+        double arriveBy = clocks.at(f, "arrive-by", link == null ? null : link.to());
         if (name == null || link == null || Double.isNaN(arriveBy)
                 || !within(f, "arrive-by", link.to(), arriveBy, "the deadline")) {
             return null;
@@ -185,8 +190,8 @@ final class PlanReader {
             f.problemAt("turnaround", "the turnaround must not be negative, got " + Values.format(turnaround) + " s");
             turnaround = Double.NaN;
         }
-        double first = f.quantity("first", Dimension.TIME);
-        double last = f.quantity("last", Dimension.TIME);
+        double first = clocks.at(f, "first", query == null ? null : query.from());
+        double last = clocks.at(f, "last", query == null ? null : query.from());
         double every = every(f);
         if (name == null || !linksOk || Double.isNaN(turnaround) || Double.isNaN(first) || Double.isNaN(last)
                 || Double.isNaN(every)) {
@@ -208,8 +213,8 @@ final class PlanReader {
                     + " scan; give it carrier, transmitter, receiver, data-rate and a requirement");
             link = null;
         }
-        double from = f.quantity("from", Dimension.TIME);
-        double to = f.quantity("to", Dimension.TIME);
+        double from = clocks.at(f, "from", link == null ? null : link.from());
+        double to = clocks.at(f, "to", link == null ? null : link.from());
         if (!Double.isNaN(from) && !Double.isNaN(to) && to < from) {
             f.problemAt("to", "the scan ends before it starts: to (" + Values.format(to) + " s) is before from ("
                     + Values.format(from) + " s)");

@@ -2,6 +2,7 @@ package org.nullpath.scenario;
 
 import org.nullpath.mission.Craft;
 import org.nullpath.mission.Link;
+import org.nullpath.mission.Node;
 
 /** What readers of the plans need of the nodes and links read before them. */
 interface References {
@@ -13,4 +14,7 @@ interface References {
 
     /** The craft of that name, null when there is none (or it has problems). */
     Craft craft(String name);
+
+    /** The station or craft of that name, null when there is none (or it has problems). */
+    Node node(String name);
 }
