@@ -240,6 +240,68 @@ class LinkBudgetMatchesReferenceTest {
         assertTrue(seen.inRange == 3 && seen.rate == 3, "the scenario exercises both sides: " + seen);
     }
 
+    /**
+     * summary.json's budget figures of every link are the extremes and counts of that link's budget columns,
+     * whose every value the tests above hold to the reference: the same doubles, so compared exactly.
+     */
+    @org.junit.jupiter.params.ParameterizedTest(name = "{0}")
+    @org.junit.jupiter.params.provider.CsvSource({"up, 7.2e9", "up-pre, 7.2e9", "down, 8.4e9", "laser, NaN",
+        "cross, 2.2e9", "aside, 8.4e9"})
+    void summaryBudgetFiguresAreTheExtremesAndCountsOfTheLinkFile(String link, double carrierHz) throws IOException {
+        if (Double.isNaN(carrierHz)) {
+            carrierHz = C / (1064 * 1e-9); // the laser's carrier, from its wavelength as the scenario converts it
+        }
+        List<CSVRecord> rows = PlanRun.csv(out.resolve(link + ".csv"));
+        double worst = Double.POSITIVE_INFINITY;
+        double best = Double.NEGATIVE_INFINITY;
+        double minRx = Double.POSITIVE_INFINITY;
+        double maxRx = Double.NEGATIVE_INFINITY;
+        double maxRate = 0;
+        double minMax = Double.POSITIVE_INFINITY;
+        double maxMax = Double.NEGATIVE_INFINITY;
+        long closing = 0;
+        long outOfTuning = 0;
+        long overRate = 0;
+        for (CSVRecord r : rows) {
+            double margin = num(r, "margin_db");
+            worst = Math.min(worst, margin);
+            best = Math.max(best, margin);
+            minRx = Math.min(minRx, num(r, "rx_frequency_hz"));
+            maxRx = Math.max(maxRx, num(r, "rx_frequency_hz"));
+            maxRate = Math.max(maxRate, Math.abs(num(r, "doppler_rate_hz_per_s")));
+            minMax = Math.min(minMax, num(r, "max_data_rate_bps"));
+            maxMax = Math.max(maxMax, num(r, "max_data_rate_bps"));
+            boolean inRange = Boolean.parseBoolean(r.get("in_tuning_range"));
+            boolean withinRate = Boolean.parseBoolean(r.get("within_doppler_rate"));
+            // a message closes when its margin is not negative, it is in the tuning range and within the rate
+            closing += margin >= 0 && inRange && withinRate ? 1 : 0;
+            outOfTuning += inRange ? 0 : 1;
+            overRate += withinRate ? 0 : 1;
+        }
+        com.fasterxml.jackson.databind.JsonNode b = null;
+        for (com.fasterxml.jackson.databind.JsonNode l : new com.fasterxml.jackson.databind.ObjectMapper()
+                .readTree(out.resolve("summary.json").toFile()).get("links")) {
+            if (l.get("name").asText().equals(link)) {
+                assertEquals(rows.size(), l.get("delivered").asLong(), link + ": every message delivered");
+                b = l.get("budget");
+            }
+        }
+        assertTrue(b != null && b.isObject(), link + ": summary.json has the link's budget figures");
+        assertEquals(worst, b.get("worst_margin_db").asDouble(), 0.0, link + " worst_margin_db");
+        assertEquals(best, b.get("best_margin_db").asDouble(), 0.0, link + " best_margin_db");
+        assertEquals(minRx, b.get("min_rx_frequency_hz").asDouble(), 0.0, link + " min_rx_frequency_hz");
+        assertEquals(maxRx, b.get("max_rx_frequency_hz").asDouble(), 0.0, link + " max_rx_frequency_hz");
+        assertEquals(maxRate, b.get("max_abs_doppler_rate_hz_per_s").asDouble(), 0.0, link + " max |rate|");
+        assertEquals(minMax, b.get("max_data_rate_closing_all_bps").asDouble(), 0.0, link + " closing all");
+        assertEquals(maxMax, b.get("max_data_rate_closing_any_bps").asDouble(), 0.0, link + " closing any");
+        assertEquals(closing, b.get("messages_closing").asLong(), link + " messages_closing");
+        assertEquals(outOfTuning, b.get("outside_tuning_range").asLong(), link + " outside_tuning_range");
+        assertEquals(overRate, b.get("over_doppler_rate").asLong(), link + " over_doppler_rate");
+        // extreme: some received frequency outside [carrier / 2, 2 carrier] (docs/link-budget.md)
+        assertEquals(minRx < carrierHz / 2 || maxRx > 2 * carrierHz, b.get("extreme_shift").asBoolean(),
+                link + " extreme_shift");
+    }
+
     @Test
     void machinPiAgreesWithTheDoubleNearestPi() {
         assertEquals(Math.PI, BudgetReference.PI.doubleValue(), 0.0);
