@@ -25,7 +25,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 /**
- * End to end: {@code plan} on one scenario per profiled leg kind of contract.md ("Profiled legs"), every
+ * End to end: {@code plan} on one scenario per profiled leg kind (docs/legs.md), every
  * message of a downlink sent during and after the leg (and a few uplinks received during and after it)
  * compared with the independent high-precision reference in {@code org.nullpath.reference}, which shares no
  * code with src/main:
@@ -57,6 +57,8 @@ class ProfiledLegsMatchReferenceTest {
     static final double INTEGRATED_TOL = 1e-10;
     /** Frequency offsets, every leg kind. */
     static final double OFFSET_TOL = 1e-9;
+    /** Doppler rates: the product's tolerance (as in LinkBudgetMatchesReferenceTest). */
+    static final double RATE_REL = 1e-6;
     static final List<String> COLUMNS = List.of("send_time_s", "receive_time_s", "receive_clock_s", "light_time_s",
             "doppler", "frequency_offset", "receive_interval_s");
 
@@ -285,5 +287,108 @@ class ProfiledLegsMatchReferenceTest {
         List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
         assertLinkMatches("profile up", up, home(), reed, INTEGRATED_TOL);
         assertStraddles("profile up", up.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray(), end);
+    }
+
+    // ---------------------------------------------------------------- 5. seen from ahead and from off the line
+
+    /**
+     * The thrust leg of test 2 seen by stations AHEAD of the craft on its line (signals against the heading,
+     * which the solver follows in the null coordinate V = c t + s across the leg's end) and OFF the line (the
+     * general cone, which sums the null offsets over the legs it crosses); uplinks from both carry link terms,
+     * so their Doppler rates are compared mid-leg with the reference's central difference of full solutions
+     * (RefSolver.dopplerRate, times the carrier).
+     */
+    @Test
+    void aProfiledLegSeenFromAheadAndFromOffTheLineMatchesQuadratureReference() throws IOException {
+        String terms = """
+                carrier: 8.4 GHz
+                transmitter: {power: 20 kW, antenna: {gain: 60 dBi}}
+                receiver: {antenna: {gain: 40 dBi}, noise-temperature: 100 K}
+                data-rate: 1 kbit/s
+                required-eb-n0: 3 dB
+                """;
+        Path out = PlanRun.plan(tmp, "thrust-ahead", org.nullpath.testkit.ScenarioText
+                .titled("constant-thrust rocket seen from ahead and aside")
+                .station("ahead", "{position: [1e14 m, 0 m, 0 m]}")
+                .station("aside", "{position: [5e13 m, 2e13 m, 0 m]}")
+                .craft("mule", "heading: [1, 0, 0]\nstart-time: 1 d\nstart-clock: 100 s\nstart-speed: 0.01 c",
+                        "rocket: {thrust: 2 MN, initial-mass: 100 t, burnout-mass: 20 t, exhaust-speed: 0.1 c}")
+                .link("toward", "ahead", "mule", terms)
+                .link("across", "aside", "mule", terms)
+                .link("forward", "mule", "ahead")
+                .message("{link: toward, first: 0 d, last: 30 d, every: 1 d}")
+                .message("{link: across, first: 0 d, last: 30 d, every: 1 d}")
+                .message("{link: forward, first: 0 d, last: 30 d, every: 2 d}")
+                .yaml());
+        RefStation ahead = RefStation.of(new double[] {1e14, 0, 0}, null, 0);
+        RefStation aside = RefStation.of(new double[] {5e13, 2e13, 0}, null, 0);
+        RefProfiledCraft mule = RefProfiledCraft.thrust(ORIGIN, X, 1 * DAY, 100, 0.01 * C, 2 * 1e6, 100 * 1e3,
+                20 * 1e3, 0.1 * C);
+        double end = mule.legEndClockDouble();
+        double legStartTime = mule.legStart()[0].doubleValue();
+        double legEndTime = mule.legEnd()[0].doubleValue();
+        for (String[] l : new String[][] {{"toward", "ahead"}, {"across", "aside"}}) {
+            RefStation from = l[1].equals("ahead") ? ahead : aside;
+            List<CSVRecord> rows = PlanRun.csv(out.resolve(l[0] + ".csv"));
+            assertEquals(31, rows.size(), l[0] + ": one row per planned send");
+            assertLinkMatches("rocket (thrust) " + l[0], rows, from, mule, INTEGRATED_TOL);
+            double[] received = rows.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray();
+            assertStraddles("rocket (thrust) " + l[0], received, end);
+            // some sends leave while the leg is flown and arrive after its end: the walk crosses the boundary
+            long crossing = rows.stream().filter(r -> {
+                double sent = num(r, "send_time_s");
+                return sent > legStartTime && sent < legEndTime && num(r, "receive_time_s") > legEndTime;
+            }).count();
+            assertTrue(crossing >= 1, l[0] + ": sends that cross the leg's end in flight: " + crossing);
+            int rates = 0;
+            for (CSVRecord r : rows) {
+                double arrival = num(r, "receive_time_s");
+                if (arrival < legStartTime + DAY || arrival > legEndTime - DAY) {
+                    continue; // mid-leg only: the rate jumps at the leg's ends
+                }
+                BigDecimal expected = RefSolver.dopplerRate(from, RefMath.bd(num(r, "send_clock_s")), mule)
+                        .multiply(RefMath.bd(8.4e9), RefMath.mc());
+                close("rocket (thrust) " + l[0], "doppler_rate_hz_per_s", Long.parseLong(r.get("message")),
+                        num(r, "doppler_rate_hz_per_s"), expected, RATE_REL);
+                rates++;
+            }
+            assertTrue(rates >= 5, l[0] + ": Doppler rates compared mid-leg: " + rates);
+        }
+        double[] forward = assertLinkMatches("rocket (thrust) forward", PlanRun.csv(out.resolve("forward.csv")), mule,
+                ahead, INTEGRATED_TOL);
+        assertStraddles("rocket (thrust) forward", forward, end);
+    }
+
+    // ---------------------------------------------------------------- 6. a sail that is not the first leg
+
+    @Test
+    void aSailAfterACoastMatchesQuadratureReference() throws IOException {
+        // the craft coasts 100 s of mission time at 0.001 c from 1000 km out, then sails; the reference flies one
+        // profiled leg from the coast's end (it coasts at its start speed before that), which is the same craft
+        Path out = PlanRun.plan(tmp, "late-sail", org.nullpath.testkit.ScenarioText.titled("sail as a second leg")
+                .station("home", "{}")
+                .craft("gust", "start-position: [1000 km, 0 km, 0 km]\nheading: [1, 0, 0]\nstart-speed: 0.001 c",
+                        "coast: {duration-mission: 100 s}",
+                        "sail: {beam-from: home, beam-power: 100 GW, mass: 10 g, reflectivity: 0.9, beam-off: 700 s}")
+                .link("down", "gust", "home")
+                .link("up", "home", "gust")
+                .message("{link: down, first: 10 s, last: 1410 s, every: 50 s}")
+                .message("{link: up, at: [150 s, 500 s, 800 s, 1000 s]}")
+                .yaml());
+        double v = 0.001 * C;
+        double startAlong = 1000 * 1e3 + v * 100;
+        double startClock = 100 * Math.sqrt(1 - 1e-6);
+        RefProfiledCraft gust = RefProfiledCraft.sail(new double[] {startAlong, 0, 0}, X, 100, startClock, v,
+                -startAlong, 100 * 1e9, 10 * 1e-3, 0.9, 700);
+        double end = gust.legEndClockDouble();
+        List<CSVRecord> down = PlanRun.csv(out.resolve("down.csv"));
+        assertEquals(29, down.size(), "one row per planned send");
+        double[] clocks = assertLinkMatches("sail (second leg) down", down, gust, home(), INTEGRATED_TOL);
+        assertStraddles("sail (second leg) down", clocks, end);
+        long beforeSail = java.util.Arrays.stream(clocks).filter(c -> c < startClock).count();
+        assertTrue(beforeSail >= 2, "some sends during the coast: " + beforeSail);
+        List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
+        assertEquals(4, up.size());
+        assertLinkMatches("sail (second leg) up", up, home(), gust, INTEGRATED_TOL);
     }
 }
