@@ -17,6 +17,7 @@ import org.nullpath.cli.BudgetReference.Terms;
 import org.nullpath.reference.RefCraft;
 import org.nullpath.reference.RefStation;
 import org.nullpath.reference.RefWorldline;
+import org.nullpath.testkit.PlanRun;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;

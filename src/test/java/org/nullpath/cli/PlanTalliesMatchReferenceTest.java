@@ -24,6 +24,7 @@ import org.nullpath.reference.RefState;
 import org.nullpath.reference.RefStation;
 import org.nullpath.reference.RefWorldline;
 import org.nullpath.testkit.ScenarioText;
+import org.nullpath.testkit.PlanRun;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;

@@ -20,6 +20,7 @@ import org.nullpath.reference.RefSignal;
 import org.nullpath.reference.RefSolver;
 import org.nullpath.reference.RefStation;
 import org.nullpath.reference.RefWorldline;
+import org.nullpath.testkit.PlanRun;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;

@@ -21,7 +21,7 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-import org.nullpath.cli.Main;
+import org.nullpath.testkit.PlanRun;
 import org.nullpath.scenario.Scenario;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
@@ -43,16 +43,7 @@ class HtmlReportTest {
 
     /** Runs {@code nullpath plan} in-process with its output captured; returns the exit code. */
     private static int plan(String... args) {
-        PrintStream oldOut = System.out;
-        PrintStream oldErr = System.err;
-        try {
-            System.setOut(new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8));
-            System.setErr(new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8));
-            return Main.run(args);
-        } finally {
-            System.setOut(oldOut);
-            System.setErr(oldErr);
-        }
+        return PlanRun.run(args).exitCode();
     }
 
     private String report(String scenario, String outName) throws IOException, ScenarioException {
