@@ -18,9 +18,11 @@ import org.nullpath.reference.RefCraft;
 import org.nullpath.reference.RefStation;
 import org.nullpath.reference.RefWorldline;
 import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.SendClocks;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.nullpath.testkit.SendClocks.series;
 
 /**
  * End to end: {@code plan} on scenarios with radio and optical link terms (invented craft and stations),
@@ -327,16 +329,33 @@ class LinkBudgetMatchesReferenceTest {
         }
     }
 
+    /** The send clocks of each link's one series in {@link #SCENARIO} ({@link SendClocks}). */
+    private static double[] clocksOf(String link) {
+        return switch (link) {
+            case "up", "up-pre" -> series(5 * DAY, 2.5 * YR, 45 * DAY);
+            case "down" -> series(5 * DAY, 1.5 * YR, 40 * DAY);
+            case "laser" -> series(5 * DAY, 2.5 * YR, 50 * DAY);
+            case "cross" -> series(0 * DAY, 2 * YR, 30 * DAY);
+            case "aside" -> series(5 * DAY, 2.2 * YR, 60 * DAY);
+            default -> throw new IllegalArgumentException(link);
+        };
+    }
+
     private static Seen assertBudgetsMatch(String link, Terms t, RefWorldline sender, RefWorldline receiver)
             throws IOException {
         List<CSVRecord> rows = PlanRun.csv(out.resolve(link + ".csv"));
-        assertTrue(rows.size() >= 10, link + ": rows " + rows.size());
+        double[] clocks = clocksOf(link);
+        assertTrue(clocks.length >= 10, link + ": planned sends " + clocks.length);
+        assertEquals(clocks.length, rows.size(), link + ": one row per planned send");
         List<BigDecimal> senderEdges = boundaries(sender);
         List<BigDecimal> receiverEdges = boundaries(receiver);
         Seen seen = new Seen();
-        for (CSVRecord r : rows) {
-            String at = link + " row " + r.get("message");
-            BigDecimal sendClock = new BigDecimal(num(r, "send_clock_s"));
+        for (int i = 0; i < rows.size(); i++) {
+            CSVRecord r = rows.get(i);
+            String at = link + " row " + (i + 1);
+            assertEquals(Integer.toString(i + 1), r.get("message"), at + " message number");
+            assertEquals(clocks[i], num(r, "send_clock_s"), 0.0, at + " send_clock_s");
+            BigDecimal sendClock = new BigDecimal(clocks[i]);
             BigDecimal sendTime = new BigDecimal(num(r, "send_time_s"));
             BigDecimal receiveTime = new BigDecimal(num(r, "receive_time_s"));
             boolean withRate = !near(sendTime, senderEdges) && !near(receiveTime, receiverEdges);

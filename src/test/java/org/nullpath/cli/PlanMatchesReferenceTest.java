@@ -17,17 +17,20 @@ import org.nullpath.reference.RefStation;
 import org.nullpath.reference.RefWorldline;
 import org.nullpath.reference.RefEvent;
 import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.SendClocks;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
-import static org.junit.jupiter.api.Assertions.fail;
+import static org.nullpath.testkit.SendClocks.merged;
+import static org.nullpath.testkit.SendClocks.series;
 
 /**
  * End to end: {@code plan} on scenarios of four kinds, every CSV value compared with the independent
  * 50-digit reference in {@code org.nullpath.reference} (BigDecimal, root finding in mission time; it
  * shares no code with src/main). Inputs reach the reference as the very doubles the scenario's
  * quantities convert to (number times unit factor: c from the SI Brochure 2019, g0 from the 3rd CGPM
- * 1901, Julian year and light year from the IAU).
+ * 1901, Julian year and light year from the IAU), and send clocks as the scenario's plans define them
+ * ({@link SendClocks}), never read back from the tool's output.
  *
  * <p>Tolerances are the product's: 1e-12 relative for times, clocks, light times, intervals and
  * Doppler factors; 1e-9 relative for frequency offsets (even when they are ~1e-13).
@@ -38,6 +41,7 @@ class PlanMatchesReferenceTest {
     static final double YR = 31_557_600.0;
     static final double DAY = 86_400.0;
     static final double LY = 9_460_730_472_580_800.0;
+    static final double HOUR = 3_600.0;
     static final double TIME_TOL = 1e-12;
     static final double OFFSET_TOL = 1e-9;
 
@@ -62,13 +66,21 @@ class PlanMatchesReferenceTest {
         return Double.parseDouble(r.get(column));
     }
 
-    /** Compares every row of a link CSV with the reference; returns the number of never rows. */
-    private static int assertLinkMatches(List<CSVRecord> rows, RefWorldline sender, RefWorldline receiver) {
+    /**
+     * Compares every row of a link CSV with the reference, which is fed the send clocks computed from the
+     * scenario's plans ({@link SendClocks}); one row per planned send; returns the number of never rows.
+     */
+    private static int assertLinkMatches(List<CSVRecord> rows, double[] clocks, RefWorldline sender,
+                                         RefWorldline receiver) {
+        assertEquals(clocks.length, rows.size(), "one row per planned send");
         BigDecimal previousArrival = null;
         int never = 0;
-        for (CSVRecord r : rows) {
-            long row = Long.parseLong(r.get("message"));
-            double clock = num(r, "send_clock_s");
+        for (int i = 0; i < rows.size(); i++) {
+            CSVRecord r = rows.get(i);
+            long row = i + 1;
+            assertEquals(Long.toString(row), r.get("message"), "message number");
+            double clock = clocks[i];
+            assertEquals(clock, num(r, "send_clock_s"), 0.0, "send_clock_s row " + row);
             RefSignal ref = RefSolver.send(sender, clock, receiver);
             close("send_time_s", row, num(r, "send_time_s"), ref.sender().t(), TIME_TOL);
             if (ref.never()) {
@@ -125,9 +137,9 @@ class PlanMatchesReferenceTest {
         RefStation home = RefStation.of(new double[] {0, 0, 0}, null, 0);
         RefStation aside = RefStation.of(new double[] {0.3 * LY, 0.2 * LY, 0}, null, 0);
         RefCraft probe = RefCraft.start(new double[] {0, 0, 0}, new double[] {1, 0, 0}, 0, 0, 0).burnForever(1 * G0);
-        int neverUp = assertLinkMatches(PlanRun.csv(out.resolve("up.csv")), home, probe);
-        assertLinkMatches(PlanRun.csv(out.resolve("down.csv")), probe, home);
-        int neverSide = assertLinkMatches(PlanRun.csv(out.resolve("side.csv")), aside, probe);
+        int neverUp = assertLinkMatches(PlanRun.csv(out.resolve("up.csv")), series(1 * DAY, 1.2 * YR, 20 * DAY), home, probe);
+        assertLinkMatches(PlanRun.csv(out.resolve("down.csv")), series(1 * HOUR, 4 * YR, 60 * DAY), probe, home);
+        int neverSide = assertLinkMatches(PlanRun.csv(out.resolve("side.csv")), series(0 * DAY, 1.6 * YR, 40 * DAY), aside, probe);
         assertTrue(neverUp > 0 && neverSide > 0, "the scenario reaches past the horizon");
 
         List<CSVRecord> horizons = PlanRun.csv(out.resolve("horizons.csv"));
@@ -190,21 +202,25 @@ class PlanMatchesReferenceTest {
                 .burnUntilDistance(1.5 * G0, 2 * LY)
                 .coastForMissionTime(0.5 * YR)
                 .burnUntilSpeed(-1.5 * G0, 0 * C);
-        assertLinkMatches(PlanRun.csv(out.resolve("up.csv")), port, ferry);
-        assertLinkMatches(PlanRun.csv(out.resolve("down.csv")), ferry, port);
-        assertLinkMatches(PlanRun.csv(out.resolve("ahead.csv")), ferry, haven);
-        assertLinkMatches(PlanRun.csv(out.resolve("greet.csv")), haven, ferry);
+        assertLinkMatches(PlanRun.csv(out.resolve("up.csv")), series(0 * DAY, 8 * YR, 73 * DAY), port, ferry);
+        assertLinkMatches(PlanRun.csv(out.resolve("down.csv")), series(0 * DAY, 5 * YR, 61 * DAY), ferry, port);
+        assertLinkMatches(PlanRun.csv(out.resolve("ahead.csv")), series(0 * DAY, 5 * YR, 97 * DAY), ferry, haven);
+        assertLinkMatches(PlanRun.csv(out.resolve("greet.csv")), series(0 * DAY, 6 * YR, 83 * DAY), haven, ferry);
 
         CSVRecord cut = PlanRun.csv(out.resolve("cutoffs.csv")).get(0);
         RefEvent latest = RefSolver.latestSendArrivingBy(port, ferry, new BigDecimal(2.5 * YR));
         close("cutoff latest_send_clock_s", 1, num(cut, "latest_send_clock_s"), latest.clock(), TIME_TOL);
 
         List<CSVRecord> trips = PlanRun.csv(out.resolve("exchanges-ping.csv"));
-        assertEquals(8, trips.size());
-        for (CSVRecord r : trips) {
-            BigDecimal[] ref = RefSolver.exchange(port, ferry, new BigDecimal(num(r, "query_send_clock_s")),
-                    new BigDecimal(3600.0));
-            long row = Long.parseLong(r.get("exchange"));
+        double[] queries = series(0 * DAY, 3 * YR, 150 * DAY);
+        assertEquals(8, queries.length);
+        assertEquals(queries.length, trips.size(), "one row per query");
+        for (int i = 0; i < trips.size(); i++) {
+            CSVRecord r = trips.get(i);
+            long row = i + 1;
+            assertEquals(Long.toString(row), r.get("exchange"));
+            assertEquals(queries[i], num(r, "query_send_clock_s"), 0.0, "query_send_clock_s row " + row);
+            BigDecimal[] ref = RefSolver.exchange(port, ferry, new BigDecimal(queries[i]), new BigDecimal(3600.0));
             assertEquals("complete", r.get("status"));
             close("query_receive_clock_s", row, num(r, "query_receive_clock_s"), ref[0], TIME_TOL);
             close("reply_receive_clock_s", row, num(r, "reply_receive_clock_s"), ref[2], TIME_TOL);
@@ -249,11 +265,11 @@ class PlanMatchesReferenceTest {
         RefCraft dart = RefCraft.start(new double[] {0, 0, 0}, n, 0, 0, 0.2 * C)
                 .coastForClock(1 * YR)
                 .burnForClock(0.3 * G0, 2 * YR);
-        assertLinkMatches(PlanRun.csv(out.resolve("to-relay.csv")), dart, relay);
-        assertLinkMatches(PlanRun.csv(out.resolve("from-relay.csv")), relay, dart);
-        assertLinkMatches(PlanRun.csv(out.resolve("home.csv")), dart, base);
-        assertLinkMatches(PlanRun.csv(out.resolve("base-up.csv")), base, dart);
-        assertLinkMatches(PlanRun.csv(out.resolve("relay-base.csv")), relay, base);
+        assertLinkMatches(PlanRun.csv(out.resolve("to-relay.csv")), series(0 * DAY, 3 * YR, 37 * DAY), dart, relay);
+        assertLinkMatches(PlanRun.csv(out.resolve("from-relay.csv")), series(0 * DAY, 3 * YR, 41 * DAY), relay, dart);
+        assertLinkMatches(PlanRun.csv(out.resolve("home.csv")), series(0 * DAY, 3 * YR, 53 * DAY), dart, base);
+        assertLinkMatches(PlanRun.csv(out.resolve("base-up.csv")), series(0 * DAY, 3 * YR, 59 * DAY), base, dart);
+        assertLinkMatches(PlanRun.csv(out.resolve("relay-base.csv")), new double[] {0, 1 * YR, 2 * YR}, relay, base);
     }
 
     // ---------------------------------------------------------------- 4. the precise regime
@@ -286,16 +302,16 @@ class PlanMatchesReferenceTest {
         RefCraft drifter = RefCraft.start(new double[] {0, 0, 0}, new double[] {1, 0, 0}, 0, 0, 0)
                 .burnForClock(1e-9, 40 * YR);
         List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
-        assertLinkMatches(up, home, drifter);
-        assertLinkMatches(PlanRun.csv(out.resolve("down.csv")), drifter, home);
-        assertLinkMatches(PlanRun.csv(out.resolve("side-up.csv")), side, drifter);
+        assertLinkMatches(up, merged(series(1 * HOUR, 12 * HOUR, 1 * HOUR), series(29.9 * YR, 30 * YR, 5 * DAY)), home,
+                drifter);
+        assertLinkMatches(PlanRun.csv(out.resolve("down.csv")),
+                merged(series(1 * HOUR, 6 * HOUR, 1 * HOUR), series(30 * YR, 30.05 * YR, 3 * DAY)), drifter, home);
+        assertLinkMatches(PlanRun.csv(out.resolve("side-up.csv")), series(30 * YR, 30.02 * YR, 2 * DAY), side,
+                drifter);
         // the regime really is the precise one: offsets ~1e-13 early, light times of a second 30 years in
         double earlyOffset = num(up.get(0), "frequency_offset");
         assertTrue(Math.abs(earlyOffset) < 1e-12 && Math.abs(earlyOffset) > 1e-14, "offset " + earlyOffset);
         double lateLight = num(up.get(up.size() - 1), "light_time_s");
         assertTrue(lateLight > 0.5 && lateLight < 5, "light time " + lateLight);
-        if (up.isEmpty()) {
-            fail("no rows");
-        }
     }
 }

@@ -29,13 +29,14 @@ import org.nullpath.testkit.PlanRun;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.nullpath.testkit.SendClocks.merged;
+import static org.nullpath.testkit.SendClocks.series;
 
 /**
  * End to end: what a plan counts and numbers, against the independent 50-digit reference in
- * {@code org.nullpath.reference} (it shares no code with src/main). Send clocks are computed here from the
- * scenario's series by their definition in docs/scenario-format.md ({@code first + k every} while not after
- * {@code last}, several plans of one link merged in send order), never read from the tool's output, and each
- * file's row count is asserted against them.
+ * {@code org.nullpath.reference} (it shares no code with src/main). Send clocks are computed from the
+ * scenario's plans by their definition ({@link org.nullpath.testkit.SendClocks}), never read from the tool's
+ * output, and each file's row count is asserted against them.
  *
  * <p>Covered: message numbers 1..n in every link file; summary.json's per-link tallies (messages, delivered,
  * never, least and greatest Doppler factor and light time); round trips numbered 1..n, the incomplete ones
@@ -122,21 +123,8 @@ class PlanTalliesMatchReferenceTest {
 
     // ---------------------------------------------------------------- independent send clocks
 
-    /** {@code first + k every} while not after {@code last} (tolerance 1e-9 every), docs/scenario-format.md. */
-    static List<Double> series(double first, double last, double every) {
-        List<Double> c = new ArrayList<>();
-        for (long k = 0; first + k * every <= last + 1e-9 * every; k++) {
-            c.add(first + k * every);
-        }
-        return c;
-    }
-
-    static double[] merged(List<Double>... plans) {
-        return Arrays.stream(plans).flatMap(List::stream).mapToDouble(Double::doubleValue).sorted().toArray();
-    }
-
     static double[] upClocks() {
-        return merged(series(1 * DAY, 1.3 * YR, 30 * DAY), List.of(10 * DAY, 0.5 * YR));
+        return merged(series(1 * DAY, 1.3 * YR, 30 * DAY), new double[] {10 * DAY, 0.5 * YR});
     }
 
     static double[] downClocks() {
@@ -144,7 +132,7 @@ class PlanTalliesMatchReferenceTest {
     }
 
     static double[] chaseClocks() {
-        return merged(series(5 * DAY, 1.5 * YR, 45 * DAY), List.of(0.5 * YR, 1 * YR));
+        return merged(series(5 * DAY, 1.5 * YR, 45 * DAY), new double[] {0.5 * YR, 1 * YR});
     }
 
     // ---------------------------------------------------------------- message numbers and tallies
@@ -214,17 +202,17 @@ class PlanTalliesMatchReferenceTest {
 
     @Test
     void roundTripsAreNumberedAndThoseThatNeverCompleteAreMarkedNever() throws IOException {
-        List<Double> queries = series(1 * DAY, 1.2 * YR, 60 * DAY);
+        double[] queries = series(1 * DAY, 1.2 * YR, 60 * DAY);
         List<CSVRecord> rows = PlanRun.csv(out.resolve("exchanges-ping.csv"));
-        assertEquals(queries.size(), rows.size(), "one row per query");
+        assertEquals(queries.length, rows.size(), "one row per query");
         int complete = 0;
         int never = 0;
         for (int i = 0; i < rows.size(); i++) {
             CSVRecord r = rows.get(i);
             String at = "round trip " + (i + 1);
             assertEquals(Integer.toString(i + 1), r.get("exchange"), at + ": number");
-            assertEquals(queries.get(i), Double.parseDouble(r.get("query_send_clock_s")), 0.0, at + ": query clock");
-            BigDecimal[] ref = RefSolver.exchange(HOME, PROBE, RefMath.bd(queries.get(i)), new BigDecimal(3600));
+            assertEquals(queries[i], Double.parseDouble(r.get("query_send_clock_s")), 0.0, at + ": query clock");
+            BigDecimal[] ref = RefSolver.exchange(HOME, PROBE, RefMath.bd(queries[i]), new BigDecimal(3600));
             if (ref == null) {
                 never++;
                 assertEquals("never", r.get("status"), at);
@@ -243,7 +231,7 @@ class PlanTalliesMatchReferenceTest {
         assertTrue(complete > 0 && never > 0, "both kinds of round trip: " + complete + " complete, " + never + " never");
         JsonNode ping = summary.get("exchanges").get(0);
         assertEquals("ping", ping.get("name").asText());
-        assertEquals(queries.size(), ping.get("round_trips").asLong());
+        assertEquals(queries.length, ping.get("round_trips").asLong());
         assertEquals(complete, ping.get("complete").asLong());
     }
 

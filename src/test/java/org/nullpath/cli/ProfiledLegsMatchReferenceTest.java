@@ -21,9 +21,11 @@ import org.nullpath.reference.RefSolver;
 import org.nullpath.reference.RefStation;
 import org.nullpath.reference.RefWorldline;
 import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.SendClocks;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.nullpath.testkit.SendClocks.series;
 
 /**
  * End to end: {@code plan} on one scenario per profiled leg kind (docs/legs.md), every
@@ -96,19 +98,20 @@ class ProfiledLegsMatchReferenceTest {
     }
 
     /**
-     * Compares every row of a link CSV with the reference (every message must be delivered: no horizons here);
-     * returns the send clocks.
+     * Compares every row of a link CSV with the reference, fed the send clocks computed from the scenario's plans
+     * ({@link SendClocks}); every message must be delivered (no horizons here); returns the send clocks.
      */
-    private static double[] assertLinkMatches(String kind, List<CSVRecord> rows, RefWorldline sender,
+    private static double[] assertLinkMatches(String kind, List<CSVRecord> rows, double[] clocks, RefWorldline sender,
                                               RefWorldline receiver, double tol) {
-        assertTrue(rows.size() >= 2, kind + ": rows");
-        double[] clocks = new double[rows.size()];
+        assertTrue(clocks.length >= 2, kind + ": planned sends");
+        assertEquals(clocks.length, rows.size(), kind + ": one row per planned send");
         BigDecimal previousArrival = null;
-        int i = 0;
-        for (CSVRecord r : rows) {
-            long row = Long.parseLong(r.get("message"));
-            double clock = num(r, "send_clock_s");
-            clocks[i++] = clock;
+        for (int i = 0; i < rows.size(); i++) {
+            CSVRecord r = rows.get(i);
+            long row = i + 1;
+            assertEquals(Long.toString(row), r.get("message"), kind + " message number");
+            double clock = clocks[i];
+            assertEquals(clock, num(r, "send_clock_s"), 0.0, kind + " send_clock_s row " + row);
             RefSignal ref = RefSolver.send(sender, clock, receiver);
             assertEquals(false, ref.never(), kind + " row " + row + " arrives");
             assertEquals("delivered", r.get("status"), kind + " status row " + row);
@@ -171,11 +174,12 @@ class ProfiledLegsMatchReferenceTest {
                 .divide(RefMath.bd(a), RefMath.mc());
         assertTrue(exact.subtract(RefMath.bd(duration)).abs().compareTo(exact.multiply(new BigDecimal("2e-16"))) < 0);
         RefCraft kite = RefCraft.start(ORIGIN, X, 0, 0, 0).burnForClock(a, duration);
-        double[] down = assertLinkMatches("rocket (propellant) down", PlanRun.csv(out.resolve("down.csv")), kite, home(),
+        double[] down = assertLinkMatches("rocket (propellant) down", PlanRun.csv(out.resolve("down.csv")),
+                series(10 * DAY, 3 * YR, 50 * DAY), kite, home(),
                 CLOSED_TOL);
         assertStraddles("rocket (propellant) down", down, duration);
         List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
-        assertLinkMatches("rocket (propellant) up", up, home(), kite, CLOSED_TOL);
+        assertLinkMatches("rocket (propellant) up", up, series(1 * DAY, 2 * YR, 60 * DAY), home(), kite, CLOSED_TOL);
         assertStraddles("rocket (propellant) up", up.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray(),
                 duration);
         // the burn reaches the budgeted speed (Ackeret, from rest): v/c = (MR^(2 v_ex/c) - 1) / (MR^(2 v_ex/c) + 1),
@@ -209,11 +213,13 @@ class ProfiledLegsMatchReferenceTest {
         RefProfiledCraft mule = RefProfiledCraft.thrust(ORIGIN, X, 1 * DAY, 100, 0.01 * C, 2 * 1e6, 100 * 1e3,
                 20 * 1e3, 0.1 * C);
         double end = mule.legEndClockDouble();
-        double[] down = assertLinkMatches("rocket (thrust) down", PlanRun.csv(out.resolve("down.csv")), mule, home(),
+        double[] down = assertLinkMatches("rocket (thrust) down", PlanRun.csv(out.resolve("down.csv")),
+                series(0 * DAY, 40 * DAY, 2 * DAY), mule, home(),
                 INTEGRATED_TOL);
         assertStraddles("rocket (thrust) down", down, end);
         List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
-        assertLinkMatches("rocket (thrust) up", up, home(), mule, INTEGRATED_TOL);
+        assertLinkMatches("rocket (thrust) up", up, new double[] {2 * DAY, 11 * DAY, 20 * DAY, 32 * DAY}, home(), mule,
+                INTEGRATED_TOL);
         assertStraddles("rocket (thrust) up", up.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray(), end);
     }
 
@@ -242,10 +248,11 @@ class ProfiledLegsMatchReferenceTest {
         RefProfiledCraft wisp = RefProfiledCraft.sail(new double[] {1000 * 1e3, 0, 0}, X, 0, 0, 0, -1000 * 1e3,
                 100 * 1e9, 10 * 1e-3, 1, 600);
         double end = wisp.legEndClockDouble();
-        double[] down = assertLinkMatches("sail down", PlanRun.csv(out.resolve("down.csv")), wisp, home(), INTEGRATED_TOL);
+        double[] down = assertLinkMatches("sail down", PlanRun.csv(out.resolve("down.csv")), series(0, 1200, 40), wisp,
+                home(), INTEGRATED_TOL);
         assertStraddles("sail down", down, end);
         List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
-        assertLinkMatches("sail up", up, home(), wisp, INTEGRATED_TOL);
+        assertLinkMatches("sail up", up, new double[] {100, 500, 700, 900}, home(), wisp, INTEGRATED_TOL);
         assertStraddles("sail up", up.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray(), end);
     }
 
@@ -282,11 +289,13 @@ class ProfiledLegsMatchReferenceTest {
         RefProfiledCraft reed = RefProfiledCraft.profile(ORIGIN, new double[] {3, 4, 0}, 0, 50, 0,
                 new double[] {0, 1e6, 4e6, 5e6, 6e6}, new double[] {0, 50, 50, -20, -20});
         double end = reed.legEndClockDouble();
-        double[] down = assertLinkMatches("profile down", PlanRun.csv(out.resolve("down.csv")), reed, home(),
+        double[] down = assertLinkMatches("profile down", PlanRun.csv(out.resolve("down.csv")),
+                series(1 * DAY, 120 * DAY, 4 * DAY), reed, home(),
                 INTEGRATED_TOL);
         assertStraddles("profile down", down, end);
         List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
-        assertLinkMatches("profile up", up, home(), reed, INTEGRATED_TOL);
+        assertLinkMatches("profile up", up, new double[] {5 * DAY, 20 * DAY, 150 * DAY, 400 * DAY}, home(), reed,
+                INTEGRATED_TOL);
         assertStraddles("profile up", up.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray(), end);
     }
 
@@ -331,8 +340,7 @@ class ProfiledLegsMatchReferenceTest {
         for (String[] l : new String[][] {{"toward", "ahead"}, {"across", "aside"}}) {
             RefStation from = l[1].equals("ahead") ? ahead : aside;
             List<CSVRecord> rows = PlanRun.csv(out.resolve(l[0] + ".csv"));
-            assertEquals(31, rows.size(), l[0] + ": one row per planned send");
-            assertLinkMatches("rocket (thrust) " + l[0], rows, from, mule, INTEGRATED_TOL);
+            assertLinkMatches("rocket (thrust) " + l[0], rows, series(0, 30 * DAY, 1 * DAY), from, mule, INTEGRATED_TOL);
             double[] received = rows.stream().mapToDouble(r -> num(r, "receive_clock_s")).toArray();
             assertStraddles("rocket (thrust) " + l[0], received, end);
             // some sends leave while the leg is flown and arrive after its end: the walk crosses the boundary
@@ -355,8 +363,8 @@ class ProfiledLegsMatchReferenceTest {
             }
             assertTrue(rates >= 5, l[0] + ": Doppler rates compared mid-leg: " + rates);
         }
-        double[] forward = assertLinkMatches("rocket (thrust) forward", PlanRun.csv(out.resolve("forward.csv")), mule,
-                ahead, INTEGRATED_TOL);
+        double[] forward = assertLinkMatches("rocket (thrust) forward", PlanRun.csv(out.resolve("forward.csv")),
+                series(0, 30 * DAY, 2 * DAY), mule, ahead, INTEGRATED_TOL);
         assertStraddles("rocket (thrust) forward", forward, end);
     }
 
@@ -383,13 +391,12 @@ class ProfiledLegsMatchReferenceTest {
                 -startAlong, 100 * 1e9, 10 * 1e-3, 0.9, 700);
         double end = gust.legEndClockDouble();
         List<CSVRecord> down = PlanRun.csv(out.resolve("down.csv"));
-        assertEquals(29, down.size(), "one row per planned send");
-        double[] clocks = assertLinkMatches("sail (second leg) down", down, gust, home(), INTEGRATED_TOL);
+        double[] clocks = assertLinkMatches("sail (second leg) down", down, series(10, 1410, 50), gust, home(),
+                INTEGRATED_TOL);
         assertStraddles("sail (second leg) down", clocks, end);
         long beforeSail = java.util.Arrays.stream(clocks).filter(c -> c < startClock).count();
         assertTrue(beforeSail >= 2, "some sends during the coast: " + beforeSail);
         List<CSVRecord> up = PlanRun.csv(out.resolve("up.csv"));
-        assertEquals(4, up.size());
-        assertLinkMatches("sail (second leg) up", up, home(), gust, INTEGRATED_TOL);
+        assertLinkMatches("sail (second leg) up", up, new double[] {150, 500, 800, 1000}, home(), gust, INTEGRATED_TOL);
     }
 }
