@@ -27,7 +27,7 @@ import static org.nullpath.testkit.SendClocks.series;
 /**
  * End to end: {@code plan} on scenarios with radio and optical link terms (invented craft and stations),
  * every budget column of every message compared with {@link BudgetReference}: an independent 100-digit
- * BigDecimal budget in the receiver-frame form (physics.md, "Relativistic link budget"; Friis, Proc. IRE 34,
+ * BigDecimal budget in the receiver-frame form (docs/link-budget.md, rx_power_dbw; Friis, Proc. IRE 34,
  * 1946; Rybicki &amp; Lightman 1979, ch. 4) built on the states of the independent reference solver
  * {@code org.nullpath.reference} (it shares no code with src/main). N0 = k_B T with k_B exact (SI 2019);
  * photon rate P_rx / (h f_rx) with h exact (SI 2019); aperture gains e (pi d f / c)^2 (Balanis, <i>Antenna
@@ -201,7 +201,7 @@ class LinkBudgetMatchesReferenceTest {
         List<CSVRecord> rows = PlanRun.csv(out.resolve("up-pre.csv"));
         assertBudgetsMatch("up-pre", t, HOME, KESTREL);
         for (CSVRecord r : rows) {
-            // physics.md: a pre-compensating sender transmits f_nom / D, so the receiver sees the carrier itself
+            // docs/link-budget.md: a pre-compensating sender transmits f_nom / D, so the receiver sees the carrier itself
             assertEquals(7.2e9, num(r, "rx_frequency_hz"), REL * 7.2e9, "rx frequency, row " + r.get("message"));
             assertEquals(7.2e9 / num(r, "doppler"), num(r, "tx_frequency_hz"), REL * num(r, "tx_frequency_hz"));
         }

@@ -9,7 +9,7 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 
-/** Link budget terms (contract.md, "Link budget additions") that are incomplete or inconsistent. */
+/** Link budget terms (docs/scenario-format.md and docs/link-budget.md) that are incomplete or inconsistent. */
 class LinkTermsProblemsTest {
 
     /** Lines 1-6; the link's own keys follow from line 7, indented by four spaces. */

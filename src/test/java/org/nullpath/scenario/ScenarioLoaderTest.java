@@ -41,7 +41,7 @@ class ScenarioLoaderTest {
     /** Light year, m: IAU, c x Julian year, exact. */
     private static final double LY = 9_460_730_472_580_800.0;
 
-    /** A scenario written after the example in contract.md, with radio and optical link terms. */
+    /** A full scenario (invented craft and stations) with radio and optical link terms. */
     static final String FULL = """
             title: Lark outbound trial
             epoch: 2061-03-01T00:00:00Z
@@ -157,7 +157,8 @@ class ScenarioLoaderTest {
         // The heading [2, 0, 0] is normalised.
         assertEquals(1.0, lark.heading().x());
         // Hyperbolic motion from rest (Rindler 2006): v = c tanh(a tau / c). After 1 yr of craft clock at
-        // 1 g0 the speed is 0.774 827 c (physics.md check value, computed from that formula).
+        // 1 g0 the speed is 0.774 827 c (docs/physics.md, check values: computed there
+        // from that formula at 50 digits).
         assertEquals(0.774_827, lark.atClock(YR).beta(), 5e-7);
         // The open-ended last burn gives the craft a horizon.
         assertTrue(lark.asymptote().isPresent());
