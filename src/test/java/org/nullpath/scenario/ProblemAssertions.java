@@ -46,4 +46,45 @@ final class ProblemAssertions {
                     }
                 });
     }
+
+    /** Lines 1-6 of the leg tables: station home, craft lark heading +x, its legs on line 7 on. */
+    static final String LEGS = """
+            stations:
+              home: {}
+            craft:
+              lark:
+                heading: [1, 0, 0]
+                legs:
+            """;
+
+    /** Lines 1-7 of the reference tables: two nodes and one link 'up' from home to lark. */
+    static final String LINKED = """
+            stations:
+              home: {}
+            craft:
+              lark:
+                heading: [1, 0, 0]
+            links:
+              up: {from: home, to: lark}
+            """;
+
+    /**
+     * A scenario from a table row: {@code text} with its {@code \n} escapes made new lines, after the lines of
+     * {@code base}: {@code file} (nothing before it), {@code legs} ({@link #LEGS}, each line of the text a leg
+     * item) or {@code linked} ({@link #LINKED}).
+     */
+    static String scenario(String base, String text) {
+        String body = text.replace("\\n", "\n");
+        return switch (base) {
+            case "file" -> body + "\n";
+            case "legs" -> LEGS + body.lines().map(l -> "      - " + l + "\n").reduce("", String::concat);
+            case "linked" -> LINKED + body + "\n";
+            default -> throw new IllegalArgumentException("unknown base " + base);
+        };
+    }
+
+    /** A table row with one problem: where it is and what its message contains ({@code gists} split at " ~ "). */
+    static void assertOnlyProblem(String yaml, int line, int column, String key, String gists) {
+        assertProblem(onlyProblemOf(yaml), line, column, key, gists.split(" ~ "));
+    }
 }
