@@ -23,6 +23,11 @@ import org.nullpath.testkit.SendClocks;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.nullpath.testkit.SendClocks.series;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.DAY;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * End to end: {@code plan} on scenarios with radio and optical link terms (invented craft and stations),
@@ -39,11 +44,6 @@ import static org.nullpath.testkit.SendClocks.series;
  * booleans exact.
  */
 class LinkBudgetMatchesReferenceTest {
-    static final double C = 299_792_458.0;
-    static final double G0 = 9.80665;
-    static final double YR = 31_557_600.0;
-    static final double DAY = 86_400.0;
-    static final double LY = 9_460_730_472_580_800.0;
     static final double REL = 1e-12;
     static final double DB = 1e-9;
     static final double RATE_REL = 1e-6;

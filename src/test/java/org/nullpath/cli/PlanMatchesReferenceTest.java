@@ -23,6 +23,12 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.nullpath.testkit.SendClocks.merged;
 import static org.nullpath.testkit.SendClocks.series;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.DAY;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.HOUR;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * End to end: {@code plan} on scenarios of four kinds, every CSV value compared with the independent
@@ -36,12 +42,6 @@ import static org.nullpath.testkit.SendClocks.series;
  * Doppler factors; 1e-9 relative for frequency offsets (even when they are ~1e-13).
  */
 class PlanMatchesReferenceTest {
-    static final double C = 299_792_458.0;
-    static final double G0 = 9.80665;
-    static final double YR = 31_557_600.0;
-    static final double DAY = 86_400.0;
-    static final double LY = 9_460_730_472_580_800.0;
-    static final double HOUR = 3_600.0;
     static final double TIME_TOL = 1e-12;
     static final double OFFSET_TOL = 1e-9;
 

@@ -31,6 +31,11 @@ import static org.junit.jupiter.api.Assertions.assertNotNull;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.nullpath.testkit.SendClocks.merged;
 import static org.nullpath.testkit.SendClocks.series;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.DAY;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * End to end: what a plan counts and numbers, against the independent 50-digit reference in
@@ -50,11 +55,6 @@ import static org.nullpath.testkit.SendClocks.series;
  * Brochure 2019), g0 = 9.806 65 m/s^2 (3rd CGPM 1901). Craft and stations are invented.
  */
 class PlanTalliesMatchReferenceTest {
-    static final double C = 299_792_458.0;
-    static final double G0 = 9.80665;
-    static final double DAY = 86_400.0;
-    static final double YR = 31_557_600.0;
-    static final double LY = 9_460_730_472_580_800.0;
     /** The product's tolerance for times, light times and Doppler factors. */
     static final double TIME_TOL = 1e-12;
     /** The product's tolerance for Doppler rates (as in LinkBudgetMatchesReferenceTest). */

@@ -26,6 +26,10 @@ import org.nullpath.testkit.SendClocks;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.nullpath.testkit.SendClocks.series;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.DAY;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * End to end: {@code plan} on one scenario per profiled leg kind (docs/legs.md), every
@@ -48,10 +52,6 @@ import static org.nullpath.testkit.SendClocks.series;
  * MN = 1e6 N, GW = 1e9 W, km = 1e3 m). Craft and station names are invented.
  */
 class ProfiledLegsMatchReferenceTest {
-    static final double C = 299_792_458.0;
-    static final double G0 = 9.80665;
-    static final double DAY = 86_400.0;
-    static final double YR = 31_557_600.0;
     static final double[] ORIGIN = {0, 0, 0};
     static final double[] X = {1, 0, 0};
     /** Closed-form legs: the product's tolerance for times, clocks, light times, intervals, Doppler factors. */

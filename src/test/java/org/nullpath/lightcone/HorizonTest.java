@@ -15,6 +15,10 @@ import org.nullpath.worldline.InertialWorldline;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.State;
 import org.nullpath.worldline.StraightLineCraft;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * Horizons of craft on open-ended burns. Source: Rindler, <i>Relativity: Special, General, and
@@ -23,11 +27,6 @@ import org.nullpath.worldline.StraightLineCraft;
  * t >= c/a never reaches it (docs/physics.md, check values). The sign of a flips the direction of escape.
  */
 class HorizonTest {
-    private static final double C = 299_792_458.0;
-    private static final double G0 = 9.80665;
-    private static final double YR = 31_557_600.0;
-    private static final double LY = 9_460_730_472_580_800.0;
-
     private static StraightLineCraft openBurnFromRest(double a) {
         return StraightLineCraft.of(Vec3.ZERO, Vec3.of(1, 0, 0), 0, 0, 0,
                 List.of(new LegSpec.Burn(a, new LegSpec.Forever())));

@@ -18,6 +18,9 @@ import org.nullpath.worldline.InertialWorldline;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.State;
 import org.nullpath.worldline.StraightLineCraft;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * Signals between stations and craft against closed forms of special relativity (Rindler, <i>Relativity:
@@ -27,9 +30,6 @@ import org.nullpath.worldline.StraightLineCraft;
  */
 class LightConeTest {
     private static final double C_MS = 299_792_458.0;
-    private static final double G0 = 9.80665;
-    private static final double YR = 31_557_600.0;
-    private static final double LY = 9_460_730_472_580_800.0;
     private static final double TOL = 1e-12;
 
     private static StraightLineCraft fromRest(double a, LegSpec... legs) {

@@ -11,6 +11,11 @@ import org.nullpath.worldline.InertialWorldline;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.nullpath.testkit.Si.AU;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.H;
+import static org.nullpath.testkit.Si.K_B;
+import static org.nullpath.testkit.Si.LY;
 
 /**
  * Link-budget checks that need no relativity: two stations at rest, so D = 1 and the budget must reduce
@@ -22,12 +27,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * redefinition, exact).
  */
 class LinkBudgetStandardsTest {
-    static final double C = 299_792_458.0;
-    static final double AU = 149_597_870_700.0;
-    static final double LY = 9_460_730_472_580_800.0;
-    static final double K_B = 1.380_649e-23;
-    static final double H = 6.626_070_15e-34;
-
     /** dB columns against an exact formula: the product's bar for dB values. */
     static final double EXACT_DB = 1e-9;
     /** Against ITU-R P.525's rounded constant 92.45 and the rounded -228.6 dBW/K/Hz. */

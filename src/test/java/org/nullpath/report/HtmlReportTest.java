@@ -27,6 +27,8 @@ import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
 import org.nullpath.schedule.DiagramTraces;
 import org.nullpath.schedule.SampledSeries;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
 
 /**
  * report.html as a reader gets it: one self-contained page with the title, the caution, the spacetime
@@ -35,9 +37,6 @@ import org.nullpath.schedule.SampledSeries;
  * closed forms of hyperbolic motion, not against nullpath itself).
  */
 class HtmlReportTest {
-    private static final double C = 299_792_458.0; // SI definition of the metre (exact)
-    private static final double G0 = 9.80665;      // standard gravity, CGPM 1901 (exact)
-
     @TempDir
     Path tmp;
 

@@ -14,6 +14,8 @@ import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
 import org.nullpath.schedule.DiagramTraces;
 import org.nullpath.schedule.SampledSeries;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
 
 /**
  * The spacetime diagram's worldlines and light rays for the open-burn demo (station cinder at rest at the
@@ -24,8 +26,6 @@ import org.nullpath.schedule.SampledSeries;
  * e)) (derived from the two, as in HtmlReportTest); nothing sent at e &gt;= 1 arrives.
  */
 class SpacetimeDiagramTracesTest {
-    private static final double C = 299_792_458.0; // SI definition of the metre (exact)
-    private static final double G0 = 9.80665;      // standard gravity, CGPM 1901 (exact)
     private static final double T = C / G0;
 
     static DiagramTraces.Diagram d;

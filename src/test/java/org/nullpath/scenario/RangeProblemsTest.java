@@ -13,6 +13,8 @@ import org.nullpath.testkit.PlanRun;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.nullpath.scenario.ProblemAssertions.assertProblem;
 import static org.nullpath.scenario.ProblemAssertions.onlyProblemOf;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
 
 /**
  * Requests beyond what double precision can hold: a craft on an open-ended burn at 1 g0 from rest passes
@@ -20,8 +22,6 @@ import static org.nullpath.scenario.ProblemAssertions.onlyProblemOf;
  * deadlines, queries and scans past that are refused at their place in the file.
  */
 class RangeProblemsTest {
-    private static final double C = 299_792_458.0; // SI 2019, exact
-    private static final double G0 = 9.80665;      // 3rd CGPM 1901, exact
     private static final String BASE = """
             stations:
               home: {}

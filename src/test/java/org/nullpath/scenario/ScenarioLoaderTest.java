@@ -18,6 +18,10 @@ import org.nullpath.link.LinkTerms;
 import org.nullpath.worldline.InertialWorldline;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.StraightLineCraft;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * Valid scenarios load with every value converted to SI.
@@ -32,15 +36,6 @@ import org.nullpath.worldline.StraightLineCraft;
  * written as the same single product.
  */
 class ScenarioLoaderTest {
-    /** Speed of light, m/s: SI Brochure, 9th ed. (2019), exact. */
-    private static final double C = 299_792_458.0;
-    /** Standard gravity, m/s^2: 3rd CGPM (1901), exact. */
-    private static final double G0 = 9.806_65;
-    /** Julian year, s: IAU, exact. */
-    private static final double YR = 365.25 * 86_400.0;
-    /** Light year, m: IAU, c x Julian year, exact. */
-    private static final double LY = 9_460_730_472_580_800.0;
-
     /** A full scenario (invented craft and stations) with radio and optical link terms. */
     static final String FULL = """
             title: Lark outbound trial

@@ -9,6 +9,9 @@ import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.K_B;
 
 /**
  * Window edges against independent closed forms and independent root finding (Apache Commons Math's
@@ -19,11 +22,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
  * rate on the craft's clock is dD/d(tau) = -D a / c.
  */
 class WindowsTest {
-    static final double C = 299_792_458.0;
-    static final double G0 = 9.80665;
     static final double A = 0.5 * G0;
     static final double F = 7.2e9;
-    static final double K_B = 1.380649e-23;
 
     private static String scenario(String receiverExtras, String transmitterPower, String window) {
         return """

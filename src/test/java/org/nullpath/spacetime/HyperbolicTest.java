@@ -13,6 +13,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * The stable offsets of hyperbolic motion against the textbook difference forms of Rindler,
@@ -25,8 +27,6 @@ import org.junit.jupiter.params.provider.MethodSource;
  * harm. Required agreement: 1e-12 relative, from a u / c ~ 3e-18 (1e-9 m/s^2 for 1 s) to rapidity 50.
  */
 class HyperbolicTest {
-    private static final double G0 = 9.80665;
-    private static final double YR = 31_557_600.0;
     private static final double TOL = 1e-12;
 
     /** (eta0, a, u) combinations spanning the regimes, with |eta0| + |a u / c| <= 50. */

@@ -12,11 +12,6 @@ import java.util.List;
  * unit factor), e.g. {@code 1.2 * YR}.
  */
 public final class SendClocks {
-    /** Unit factors as the scenario converts them: Julian year (IAU), day and hour. */
-    public static final double YR = 31_557_600.0;
-    public static final double DAY = 86_400.0;
-    public static final double HOUR = 3_600.0;
-
     private SendClocks() {
     }
 

@@ -9,6 +9,8 @@ import org.nullpath.spacetime.Vec3;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
 
 /**
  * Profiled legs against closed forms where they exist and against an independent integration with
@@ -17,9 +19,6 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
  * d(eta)/du = a/c, dt/du = cosh(eta), ds/du = c sinh(eta).
  */
 class ProfiledLegsAgainstCommonsMathTest {
-    static final double C = 299_792_458.0;
-    static final double G0 = 9.80665;
-
     /** A proper acceleration law a(u, eta). */
     interface Law {
         double at(double u, double eta);

@@ -11,6 +11,10 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.nullpath.spacetime.Vec3;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * The check values of docs/physics.md ("Check values") for hyperbolic motion from rest, computed there at 50
@@ -21,11 +25,6 @@ import org.nullpath.spacetime.Vec3;
  * checked to the digits given (half a unit in the last quoted digit).
  */
 class PublishedHyperbolicMotionTest {
-    private static final double C = 299_792_458.0;
-    private static final double G0 = 9.80665;
-    private static final double YR = 31_557_600.0;
-    private static final double LY = 9_460_730_472_580_800.0;
-
     private static StraightLineCraft fromRest(LegSpec... legs) {
         return StraightLineCraft.of(Vec3.ZERO, Vec3.of(1, 0, 0), 0, 0, 0, List.of(legs));
     }
