@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.nullpath.scenario.ProblemAssertions.LEGS;
 import static org.nullpath.scenario.ProblemAssertions.assertOnlyProblem;
 import static org.nullpath.scenario.ProblemAssertions.assertProblem;
+import static org.nullpath.scenario.ProblemAssertions.assertProblems;
+import static org.nullpath.scenario.ProblemAssertions.at;
 import static org.nullpath.scenario.ProblemAssertions.onlyProblemOf;
 import static org.nullpath.scenario.ProblemAssertions.problemsOf;
 import static org.nullpath.scenario.ProblemAssertions.scenario;
@@ -71,30 +73,28 @@ class ScenarioProblemsTest {
 
     @Test
     void nanNumbersAreRejected() {
-        List<Problem> all = problemsOf("""
+        assertProblems("""
                 stations:
                   home:
                     clock-offset: NaN s
                 craft:
                   lark:
                     heading: [.nan, 0, 0]
-                """);
-        assertEquals(2, all.size(), () -> ProblemAssertions.rendered(all));
-        assertProblem(all.get(0), 3, 19, "stations.home.clock-offset", "non-finite number 'NaN s'");
-        assertProblem(all.get(1), 6, 15, "craft.lark.heading[0]", "non-finite number '.nan'");
+                """,
+                at(3, 19, "stations.home.clock-offset", "non-finite number 'NaN s'"),
+                at(6, 15, "craft.lark.heading[0]", "non-finite number '.nan'"));
     }
 
     @Test
     void infiniteNumbersAreRejected() {
-        List<Problem> all = problemsOf("""
+        assertProblems("""
                 stations:
                   home:
                     clock-offset: .inf
                     position: [1e400 km, 0 km, 0 km]
-                """);
-        assertEquals(2, all.size(), () -> ProblemAssertions.rendered(all));
-        assertProblem(all.get(0), 3, 19, "stations.home.clock-offset", "non-finite number '.inf'");
-        assertProblem(all.get(1), 4, 16, "stations.home.position[0]", "too large to hold", "'1e400 km'");
+                """,
+                at(3, 19, "stations.home.clock-offset", "non-finite number '.inf'"),
+                at(4, 16, "stations.home.position[0]", "too large to hold", "'1e400 km'"));
     }
 
     @Test
@@ -111,7 +111,7 @@ class ScenarioProblemsTest {
 
     @Test
     void manyProblemsAreCollectedInOnePassInFileOrder() {
-        List<Problem> all = problemsOf("""
+        assertProblems("""
                 stations:
                   home:
                     velocity: [2 c, 0 c, 0 c]
@@ -123,11 +123,10 @@ class ScenarioProblemsTest {
                       - burn: {acceleration: 1 ly, duration: 1 yr}
                 links:
                   up: {from: home, to: lark, extra: 1}
-                """);
-        assertEquals(4, all.size(), () -> ProblemAssertions.rendered(all));
-        assertProblem(all.get(0), 3, 15, "stations.home.velocity", "below c");
-        assertProblem(all.get(1), 7, 17, "craft.lark.start-time", "unknown unit 'parsecs'");
-        assertProblem(all.get(2), 9, 30, "craft.lark.legs[0].burn.acceleration", "got a length");
-        assertProblem(all.get(3), 11, 30, "links.up.extra", "unknown key 'extra'");
+                """,
+                at(3, 15, "stations.home.velocity", "below c"),
+                at(7, 17, "craft.lark.start-time", "unknown unit 'parsecs'"),
+                at(9, 30, "craft.lark.legs[0].burn.acceleration", "got a length"),
+                at(11, 30, "links.up.extra", "unknown key 'extra'"));
     }
 }

@@ -4,6 +4,8 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.nullpath.scenario.ProblemAssertions.LINKED;
 import static org.nullpath.scenario.ProblemAssertions.assertOnlyProblem;
 import static org.nullpath.scenario.ProblemAssertions.assertProblem;
+import static org.nullpath.scenario.ProblemAssertions.assertProblems;
+import static org.nullpath.scenario.ProblemAssertions.at;
 import static org.nullpath.scenario.ProblemAssertions.problemsOf;
 import static org.nullpath.scenario.ProblemAssertions.scenario;
 
@@ -65,38 +67,34 @@ class ScenarioReferencesTest {
 
     @Test
     void aWindowScanThatEndsBeforeItStartsIsRejected() {
-        List<Problem> all = problemsOf(LINKED + "windows:\n  - {link: up, from: 2 yr, to: 1 yr}\n");
         // 'up' has no link terms either: that is the first problem on the line.
-        assertEquals(2, all.size(), () -> ProblemAssertions.rendered(all));
-        assertProblem(all.get(0), 9, 12, "windows[0].link", "no radio or optical terms");
-        assertProblem(all.get(1), 9, 32, "windows[0].to", "ends before it starts");
+        assertProblems(LINKED + "windows:\n  - {link: up, from: 2 yr, to: 1 yr}\n",
+                at(9, 12, "windows[0].link", "no radio or optical terms"),
+                at(9, 32, "windows[0].to", "ends before it starts"));
     }
 
     @Test
     void nodeNamesThatAreUnsafeInFileNamesAreRejected() {
-        List<Problem> all = problemsOf("""
+        assertProblems("""
                 stations:
                   home base: {}
                   .hidden: {}
-                """);
-        assertEquals(2, all.size(), () -> ProblemAssertions.rendered(all));
-        assertProblem(all.get(0), 2, 3, "stations.home base", "may use only letters", "'home base'");
-        assertProblem(all.get(1), 3, 3, "stations..hidden", "must start with a letter or digit");
+                """,
+                at(2, 3, "stations.home base", "may use only letters", "'home base'"),
+                at(3, 3, "stations..hidden", "must start with a letter or digit"));
     }
 
     @Test
     void linkNamesThatAreUnsafeInFileNamesAreRejected() {
-        List<Problem> all = problemsOf(LINKED + "  ../up: {from: home, to: lark}\n  CON: {from: lark, to: home}\n");
-        assertEquals(2, all.size(), () -> ProblemAssertions.rendered(all));
-        assertProblem(all.get(0), 8, 3, "links.../up", "may use only letters");
-        assertProblem(all.get(1), 9, 3, "links.CON", "reserved device name");
+        assertProblems(LINKED + "  ../up: {from: home, to: lark}\n  CON: {from: lark, to: home}\n",
+                at(8, 3, "links.../up", "may use only letters"),
+                at(9, 3, "links.CON", "reserved device name"));
     }
 
     @Test
     void linkNamesThatClashWithOutputFilesAreRejected() {
-        List<Problem> all = problemsOf(LINKED + "  horizons: {from: home, to: lark}\n  UP: {from: lark, to: home}\n");
-        assertEquals(2, all.size(), () -> ProblemAssertions.rendered(all));
-        assertProblem(all.get(0), 8, 3, "links.horizons", "taken by nullpath's own output file horizons.csv");
-        assertProblem(all.get(1), 9, 3, "links.UP", "'up' and 'UP' differ only in upper and lower case");
+        assertProblems(LINKED + "  horizons: {from: home, to: lark}\n  UP: {from: lark, to: home}\n",
+                at(8, 3, "links.horizons", "taken by nullpath's own output file horizons.csv"),
+                at(9, 3, "links.UP", "'up' and 'UP' differ only in upper and lower case"));
     }
 }

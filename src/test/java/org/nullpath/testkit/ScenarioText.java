@@ -82,18 +82,22 @@ public final class ScenarioText {
 
     /** A link without budget terms. */
     public ScenarioText link(String name, String from, String to) {
-        links.add("  " + name + ": {from: " + from + ", to: " + to + "}");
-        return this;
+        return link(name, from, to, null);
     }
 
-    /** A link with budget terms: each further line of {@code terms} is a key under the link, as block YAML. */
+    /**
+     * A link with budget terms ({@code terms}: one key a line, block YAML, written under the link), or without
+     * them ({@code terms} null).
+     */
     public ScenarioText link(String name, String from, String to, String terms) {
+        if (terms == null) {
+            links.add("  " + name + ": {from: " + from + ", to: " + to + "}");
+            return this;
+        }
         links.add("  " + name + ":");
         links.add("    from: " + from);
         links.add("    to: " + to);
-        for (String t : terms.strip().split("\n")) {
-            links.add("    " + t);
-        }
+        terms.strip().lines().forEach(t -> links.add("    " + t));
         return this;
     }
 
