@@ -18,6 +18,7 @@ import org.nullpath.reference.RefWorldline;
 import org.nullpath.reference.RefEvent;
 import org.nullpath.testkit.PlanRun;
 import org.nullpath.testkit.SendClocks;
+import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -113,27 +114,18 @@ class PlanMatchesReferenceTest {
 
     @Test
     void openEndedBurnMatchesReferenceIncludingTheHorizon() throws IOException {
-        Path out = PlanRun.plan(tmp, "open", """
-                title: open-ended burn check
-                stations:
-                  home: {}
-                  aside: {position: [0.3 ly, 0.2 ly, 0 ly]}
-                craft:
-                  probe:
-                    heading: [1, 0, 0]
-                    legs:
-                      - burn: {acceleration: 1 g0, duration: forever}
-                links:
-                  up: {from: home, to: probe}
-                  down: {from: probe, to: home}
-                  side: {from: aside, to: probe}
-                messages:
-                  - {link: up, first: 1 d, last: 1.2 yr, every: 20 d}
-                  - {link: down, first: 1 h, last: 4 yr, every: 60 d}
-                  - {link: side, first: 0 d, last: 1.6 yr, every: 40 d}
-                cutoffs:
-                  - {name: mid, link: up, arrive-by: 2 yr}
-                """);
+        Path out = PlanRun.plan(tmp, "open", ScenarioText.titled("open-ended burn check")
+                .station("home", "{}")
+                .station("aside", "{position: [0.3 ly, 0.2 ly, 0 ly]}")
+                .craft("probe", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: forever}")
+                .link("up", "home", "probe")
+                .link("down", "probe", "home")
+                .link("side", "aside", "probe")
+                .message("{link: up, first: 1 d, last: 1.2 yr, every: 20 d}")
+                .message("{link: down, first: 1 h, last: 4 yr, every: 60 d}")
+                .message("{link: side, first: 0 d, last: 1.6 yr, every: 40 d}")
+                .cutoff("{name: mid, link: up, arrive-by: 2 yr}")
+                .yaml());
         RefStation home = RefStation.of(new double[] {0, 0, 0}, null, 0);
         RefStation aside = RefStation.of(new double[] {0.3 * LY, 0.2 * LY, 0}, null, 0);
         RefCraft probe = RefCraft.start(new double[] {0, 0, 0}, new double[] {1, 0, 0}, 0, 0, 0).burnForever(1 * G0);
@@ -164,37 +156,29 @@ class PlanMatchesReferenceTest {
 
     @Test
     void launchAndLandingWithStartOffsetsMatchesReference() throws IOException {
-        Path out = PlanRun.plan(tmp, "landing", """
-                title: launch-landing check
-                stations:
-                  port: {clock-offset: 500 s}
-                  haven: {position: [5 ly, 0 ly, 0 ly], clock-offset: -2 d}
-                craft:
-                  ferry:
-                    start-position: [0.01 ly, 0 ly, 0 ly]
-                    heading: [1, 0, 0]
-                    start-time: 30 d
-                    start-clock: 1000 s
-                    start-speed: 0.001 c
-                    legs:
-                      - burn: {acceleration: 1.5 g0, until-distance: 2 ly}
-                      - coast: {duration-mission: 0.5 yr}
-                      - burn: {acceleration: -1.5 g0, until-speed: 0 c}
-                links:
-                  up: {from: port, to: ferry}
-                  down: {from: ferry, to: port}
-                  ahead: {from: ferry, to: haven}
-                  greet: {from: haven, to: ferry}
-                messages:
-                  - {link: up, first: 0 d, last: 8 yr, every: 73 d}
-                  - {link: down, first: 0 d, last: 5 yr, every: 61 d}
-                  - {link: ahead, first: 0 d, last: 5 yr, every: 97 d}
-                  - {link: greet, first: 0 d, last: 6 yr, every: 83 d}
-                cutoffs:
-                  - {name: before-braking, link: up, arrive-by: 2.5 yr}
-                exchanges:
-                  - {name: ping, query: up, reply: down, turnaround: 1 h, first: 0 d, last: 3 yr, every: 150 d}
-                """);
+        Path out = PlanRun.plan(tmp, "landing", ScenarioText.titled("launch-landing check")
+                .station("port", "{clock-offset: 500 s}")
+                .station("haven", "{position: [5 ly, 0 ly, 0 ly], clock-offset: -2 d}")
+                .craft("ferry", """
+                        start-position: [0.01 ly, 0 ly, 0 ly]
+                        heading: [1, 0, 0]
+                        start-time: 30 d
+                        start-clock: 1000 s
+                        start-speed: 0.001 c""",
+                        "burn: {acceleration: 1.5 g0, until-distance: 2 ly}",
+                        "coast: {duration-mission: 0.5 yr}",
+                        "burn: {acceleration: -1.5 g0, until-speed: 0 c}")
+                .link("up", "port", "ferry")
+                .link("down", "ferry", "port")
+                .link("ahead", "ferry", "haven")
+                .link("greet", "haven", "ferry")
+                .message("{link: up, first: 0 d, last: 8 yr, every: 73 d}")
+                .message("{link: down, first: 0 d, last: 5 yr, every: 61 d}")
+                .message("{link: ahead, first: 0 d, last: 5 yr, every: 97 d}")
+                .message("{link: greet, first: 0 d, last: 6 yr, every: 83 d}")
+                .cutoff("{name: before-braking, link: up, arrive-by: 2.5 yr}")
+                .exchange("{name: ping, query: up, reply: down, turnaround: 1 h, first: 0 d, last: 3 yr, every: 150 d}")
+                .yaml());
         RefStation port = RefStation.of(new double[] {0, 0, 0}, null, 500);
         RefStation haven = RefStation.of(new double[] {5 * LY, 0, 0}, null, -2 * DAY);
         RefCraft ferry = RefCraft.start(new double[] {0.01 * LY, 0, 0}, new double[] {1, 0, 0}, 30 * DAY, 1000,
@@ -232,32 +216,23 @@ class PlanMatchesReferenceTest {
 
     @Test
     void stationsOffTheFlightLineMatchReference() throws IOException {
-        Path out = PlanRun.plan(tmp, "offline", """
-                title: off-line check
-                stations:
-                  relay: {position: [0.4 ly, 0.03 ly, -0.01 ly], velocity: [0 c, 0.001 c, 0.002 c], clock-offset: 3600 s}
-                  base: {position: [0 ly, -0.2 ly, 0 ly]}
-                craft:
-                  dart:
-                    start-position: [0 ly, 0 ly, 0 ly]
-                    heading: [2, 1, 0]
-                    start-speed: 0.2 c
-                    legs:
-                      - coast: {duration: 1 yr}
-                      - burn: {acceleration: 0.3 g0, duration: 2 yr}
-                links:
-                  to-relay: {from: dart, to: relay}
-                  from-relay: {from: relay, to: dart}
-                  home: {from: dart, to: base}
-                  base-up: {from: base, to: dart}
-                  relay-base: {from: relay, to: base}
-                messages:
-                  - {link: to-relay, first: 0 d, last: 3 yr, every: 37 d}
-                  - {link: from-relay, first: 0 d, last: 3 yr, every: 41 d}
-                  - {link: home, first: 0 d, last: 3 yr, every: 53 d}
-                  - {link: base-up, first: 0 d, last: 3 yr, every: 59 d}
-                  - {link: relay-base, at: [0 s, 1 yr, 2 yr]}
-                """);
+        Path out = PlanRun.plan(tmp, "offline", ScenarioText.titled("off-line check")
+                .station("relay", "{position: [0.4 ly, 0.03 ly, -0.01 ly], velocity: [0 c, 0.001 c, 0.002 c],"
+                        + " clock-offset: 3600 s}")
+                .station("base", "{position: [0 ly, -0.2 ly, 0 ly]}")
+                .craft("dart", "start-position: [0 ly, 0 ly, 0 ly]\nheading: [2, 1, 0]\nstart-speed: 0.2 c",
+                        "coast: {duration: 1 yr}", "burn: {acceleration: 0.3 g0, duration: 2 yr}")
+                .link("to-relay", "dart", "relay")
+                .link("from-relay", "relay", "dart")
+                .link("home", "dart", "base")
+                .link("base-up", "base", "dart")
+                .link("relay-base", "relay", "base")
+                .message("{link: to-relay, first: 0 d, last: 3 yr, every: 37 d}")
+                .message("{link: from-relay, first: 0 d, last: 3 yr, every: 41 d}")
+                .message("{link: home, first: 0 d, last: 3 yr, every: 53 d}")
+                .message("{link: base-up, first: 0 d, last: 3 yr, every: 59 d}")
+                .message("{link: relay-base, at: [0 s, 1 yr, 2 yr]}")
+                .yaml());
         double[] n = {2, 1, 0};
         RefStation relay = RefStation.of(new double[] {0.4 * LY, 0.03 * LY, -0.01 * LY},
                 new double[] {0, 0.001 * C, 0.002 * C}, 3600);
@@ -276,27 +251,19 @@ class PlanMatchesReferenceTest {
 
     @Test
     void tinyAccelerationFarIntoTheMissionKeepsFullPrecision() throws IOException {
-        Path out = PlanRun.plan(tmp, "precise", """
-                title: precise regime check
-                stations:
-                  home: {}
-                  side: {position: [0 m, 3e8 m, 0 m]}
-                craft:
-                  drifter:
-                    heading: [1, 0, 0]
-                    legs:
-                      - burn: {acceleration: 1e-9 m/s^2, duration: 40 yr}
-                links:
-                  up: {from: home, to: drifter}
-                  down: {from: drifter, to: home}
-                  side-up: {from: side, to: drifter}
-                messages:
-                  - {link: up, first: 1 h, last: 12 h, every: 1 h}
-                  - {link: up, first: 29.9 yr, last: 30 yr, every: 5 d}
-                  - {link: down, first: 1 h, last: 6 h, every: 1 h}
-                  - {link: down, first: 30 yr, last: 30.05 yr, every: 3 d}
-                  - {link: side-up, first: 30 yr, last: 30.02 yr, every: 2 d}
-                """);
+        Path out = PlanRun.plan(tmp, "precise", ScenarioText.titled("precise regime check")
+                .station("home", "{}")
+                .station("side", "{position: [0 m, 3e8 m, 0 m]}")
+                .craft("drifter", "heading: [1, 0, 0]", "burn: {acceleration: 1e-9 m/s^2, duration: 40 yr}")
+                .link("up", "home", "drifter")
+                .link("down", "drifter", "home")
+                .link("side-up", "side", "drifter")
+                .message("{link: up, first: 1 h, last: 12 h, every: 1 h}")
+                .message("{link: up, first: 29.9 yr, last: 30 yr, every: 5 d}")
+                .message("{link: down, first: 1 h, last: 6 h, every: 1 h}")
+                .message("{link: down, first: 30 yr, last: 30.05 yr, every: 3 d}")
+                .message("{link: side-up, first: 30 yr, last: 30.02 yr, every: 2 d}")
+                .yaml());
         RefStation home = RefStation.of(new double[] {0, 0, 0}, null, 0);
         RefStation side = RefStation.of(new double[] {0, 3e8, 0}, null, 0);
         RefCraft drifter = RefCraft.start(new double[] {0, 0, 0}, new double[] {1, 0, 0}, 0, 0, 0)

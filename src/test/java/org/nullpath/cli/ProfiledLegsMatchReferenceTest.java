@@ -21,6 +21,7 @@ import org.nullpath.reference.RefSolver;
 import org.nullpath.reference.RefStation;
 import org.nullpath.reference.RefWorldline;
 import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.ScenarioText;
 import org.nullpath.testkit.SendClocks;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -147,22 +148,14 @@ class ProfiledLegsMatchReferenceTest {
 
     @Test
     void propellantLimitedRocketMatchesHyperbolicMotionToTheClosedFormTolerance() throws IOException {
-        Path out = PlanRun.plan(tmp, "rocket", """
-                title: propellant-limited rocket check
-                stations:
-                  home: {}
-                craft:
-                  kite:
-                    heading: [1, 0, 0]
-                    legs:
-                      - rocket: {acceleration: 1 g0, exhaust-speed: 0.5 c, mass-ratio: 10}
-                links:
-                  down: {from: kite, to: home}
-                  up: {from: home, to: kite}
-                messages:
-                  - {link: down, first: 10 d, last: 3 yr, every: 50 d}
-                  - {link: up, first: 1 d, last: 2 yr, every: 60 d}
-                """);
+        Path out = PlanRun.plan(tmp, "rocket", ScenarioText.titled("propellant-limited rocket check")
+                .station("home", "{}")
+                .craft("kite", "heading: [1, 0, 0]", "rocket: {acceleration: 1 g0, exhaust-speed: 0.5 c, mass-ratio: 10}")
+                .link("down", "kite", "home")
+                .link("up", "home", "kite")
+                .message("{link: down, first: 10 d, last: 3 yr, every: 50 d}")
+                .message("{link: up, first: 1 d, last: 2 yr, every: 60 d}")
+                .yaml());
         // Ackeret: the rapidity budget (v_ex / c) ln(MR) at constant proper acceleration a lasts v_ex ln(MR) / |a|
         // of craft clock. nullpath computes that duration in double; the reference is handed the very same double
         // (v_ex * Math.log(MR) / |a|, evaluated in that order), so both fly identical inputs. (The exact duration
@@ -189,27 +182,20 @@ class ProfiledLegsMatchReferenceTest {
 
     // ---------------------------------------------------------------- 2. constant thrust
 
+    /** Mule (tests 2 and 5): from 1 d at 0.01 c, 2 MN on 100 t down to 20 t at an exhaust speed of 0.1 c. */
+    static final String MULE_KEYS = "heading: [1, 0, 0]\nstart-time: 1 d\nstart-clock: 100 s\nstart-speed: 0.01 c";
+    static final String MULE_LEG = "rocket: {thrust: 2 MN, initial-mass: 100 t, burnout-mass: 20 t, exhaust-speed: 0.1 c}";
+
     @Test
     void constantThrustRocketMatchesQuadratureReference() throws IOException {
-        Path out = PlanRun.plan(tmp, "thrust", """
-                title: constant-thrust rocket check
-                stations:
-                  home: {}
-                craft:
-                  mule:
-                    heading: [1, 0, 0]
-                    start-time: 1 d
-                    start-clock: 100 s
-                    start-speed: 0.01 c
-                    legs:
-                      - rocket: {thrust: 2 MN, initial-mass: 100 t, burnout-mass: 20 t, exhaust-speed: 0.1 c}
-                links:
-                  down: {from: mule, to: home}
-                  up: {from: home, to: mule}
-                messages:
-                  - {link: down, first: 0 d, last: 40 d, every: 2 d}
-                  - {link: up, at: [2 d, 11 d, 20 d, 32 d]}
-                """);
+        Path out = PlanRun.plan(tmp, "thrust", ScenarioText.titled("constant-thrust rocket check")
+                .station("home", "{}")
+                .craft("mule", MULE_KEYS, MULE_LEG)
+                .link("down", "mule", "home")
+                .link("up", "home", "mule")
+                .message("{link: down, first: 0 d, last: 40 d, every: 2 d}")
+                .message("{link: up, at: [2 d, 11 d, 20 d, 32 d]}")
+                .yaml());
         RefProfiledCraft mule = RefProfiledCraft.thrust(ORIGIN, X, 1 * DAY, 100, 0.01 * C, 2 * 1e6, 100 * 1e3,
                 20 * 1e3, 0.1 * C);
         double end = mule.legEndClockDouble();
@@ -227,23 +213,15 @@ class ProfiledLegsMatchReferenceTest {
 
     @Test
     void beamPushedSailMatchesQuadratureReference() throws IOException {
-        Path out = PlanRun.plan(tmp, "sail", """
-                title: beam-pushed sail check
-                stations:
-                  home: {}
-                craft:
-                  wisp:
-                    start-position: [1000 km, 0 km, 0 km]
-                    heading: [1, 0, 0]
-                    legs:
-                      - sail: {beam-from: home, beam-power: 100 GW, mass: 10 g, reflectivity: 1, beam-off: 600 s}
-                links:
-                  down: {from: wisp, to: home}
-                  up: {from: home, to: wisp}
-                messages:
-                  - {link: down, first: 0 s, last: 1200 s, every: 40 s}
-                  - {link: up, at: [100 s, 500 s, 700 s, 900 s]}
-                """);
+        Path out = PlanRun.plan(tmp, "sail", ScenarioText.titled("beam-pushed sail check")
+                .station("home", "{}")
+                .craft("wisp", "start-position: [1000 km, 0 km, 0 km]\nheading: [1, 0, 0]",
+                        "sail: {beam-from: home, beam-power: 100 GW, mass: 10 g, reflectivity: 1, beam-off: 600 s}")
+                .link("down", "wisp", "home")
+                .link("up", "home", "wisp")
+                .message("{link: down, first: 0 s, last: 1200 s, every: 40 s}")
+                .message("{link: up, at: [100 s, 500 s, 700 s, 900 s]}")
+                .yaml());
         // the station sits at the origin, 1000 km behind the start: along-track coordinate b = -1000 km
         RefProfiledCraft wisp = RefProfiledCraft.sail(new double[] {1000 * 1e3, 0, 0}, X, 0, 0, 0, -1000 * 1e3,
                 100 * 1e9, 10 * 1e-3, 1, 600);
@@ -269,23 +247,14 @@ class ProfiledLegsMatchReferenceTest {
                 5e6,-20
                 6e6,-20
                 """);
-        Path out = PlanRun.plan(tmp, "profile", """
-                title: tabulated profile check
-                stations:
-                  home: {}
-                craft:
-                  reed:
-                    heading: [3, 4, 0]
-                    start-clock: 50 s
-                    legs:
-                      - profile: {file: ramp.csv}
-                links:
-                  down: {from: reed, to: home}
-                  up: {from: home, to: reed}
-                messages:
-                  - {link: down, first: 1 d, last: 120 d, every: 4 d}
-                  - {link: up, at: [5 d, 20 d, 150 d, 400 d]}
-                """);
+        Path out = PlanRun.plan(tmp, "profile", ScenarioText.titled("tabulated profile check")
+                .station("home", "{}")
+                .craft("reed", "heading: [3, 4, 0]\nstart-clock: 50 s", "profile: {file: ramp.csv}")
+                .link("down", "reed", "home")
+                .link("up", "home", "reed")
+                .message("{link: down, first: 1 d, last: 120 d, every: 4 d}")
+                .message("{link: up, at: [5 d, 20 d, 150 d, 400 d]}")
+                .yaml());
         RefProfiledCraft reed = RefProfiledCraft.profile(ORIGIN, new double[] {3, 4, 0}, 0, 50, 0,
                 new double[] {0, 1e6, 4e6, 5e6, 6e6}, new double[] {0, 50, 50, -20, -20});
         double end = reed.legEndClockDouble();
@@ -317,12 +286,10 @@ class ProfiledLegsMatchReferenceTest {
                 data-rate: 1 kbit/s
                 required-eb-n0: 3 dB
                 """;
-        Path out = PlanRun.plan(tmp, "thrust-ahead", org.nullpath.testkit.ScenarioText
-                .titled("constant-thrust rocket seen from ahead and aside")
+        Path out = PlanRun.plan(tmp, "thrust-ahead", ScenarioText.titled("constant-thrust rocket seen from ahead and aside")
                 .station("ahead", "{position: [1e14 m, 0 m, 0 m]}")
                 .station("aside", "{position: [5e13 m, 2e13 m, 0 m]}")
-                .craft("mule", "heading: [1, 0, 0]\nstart-time: 1 d\nstart-clock: 100 s\nstart-speed: 0.01 c",
-                        "rocket: {thrust: 2 MN, initial-mass: 100 t, burnout-mass: 20 t, exhaust-speed: 0.1 c}")
+                .craft("mule", MULE_KEYS, MULE_LEG)
                 .link("toward", "ahead", "mule", terms)
                 .link("across", "aside", "mule", terms)
                 .link("forward", "mule", "ahead")
@@ -374,7 +341,7 @@ class ProfiledLegsMatchReferenceTest {
     void aSailAfterACoastMatchesQuadratureReference() throws IOException {
         // the craft coasts 100 s of mission time at 0.001 c from 1000 km out, then sails; the reference flies one
         // profiled leg from the coast's end (it coasts at its start speed before that), which is the same craft
-        Path out = PlanRun.plan(tmp, "late-sail", org.nullpath.testkit.ScenarioText.titled("sail as a second leg")
+        Path out = PlanRun.plan(tmp, "late-sail", ScenarioText.titled("sail as a second leg")
                 .station("home", "{}")
                 .craft("gust", "start-position: [1000 km, 0 km, 0 km]\nheading: [1, 0, 0]\nstart-speed: 0.001 c",
                         "coast: {duration-mission: 100 s}",

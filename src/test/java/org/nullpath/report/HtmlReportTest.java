@@ -27,6 +27,7 @@ import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
 import org.nullpath.schedule.DiagramTraces;
 import org.nullpath.schedule.SampledSeries;
+import org.nullpath.testkit.ScenarioText;
 import static org.nullpath.testkit.Si.C;
 import static org.nullpath.testkit.Si.G0;
 
@@ -240,20 +241,12 @@ class HtmlReportTest {
     void aMillionPlannedMessagesStillGiveAtMostFourHundredPlottedSamples() throws IOException, ScenarioException {
         // memory must not grow with the plan: the plotted series is a fixed-size sample of the send range
         Path file = tmp.resolve("many.yaml");
-        Files.writeString(file, """
-                title: many messages
-                stations:
-                  home: {}
-                craft:
-                  probe:
-                    heading: [1, 0, 0]
-                    legs:
-                      - burn: {acceleration: 1 g0, duration: 1 yr}
-                links:
-                  down: {from: probe, to: home}
-                messages:
-                  - {link: down, first: 0 s, last: 999999 s, every: 1 s}
-                """);
+        Files.writeString(file, ScenarioText.titled("many messages")
+                .station("home", "{}")
+                .craft("probe", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: 1 yr}")
+                .link("down", "probe", "home")
+                .message("{link: down, first: 0 s, last: 999999 s, every: 1 s}")
+                .yaml());
         Scenario s = ScenarioLoader.load(file);
         assertEquals(1_000_000L, s.messages().get(0).count());
         SampledSeries.LinkSeries down = SampledSeries.of(s).get(0);

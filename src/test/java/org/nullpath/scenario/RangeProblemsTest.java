@@ -9,6 +9,7 @@ import org.junit.jupiter.api.Disabled;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.nullpath.scenario.ProblemAssertions.assertProblem;
@@ -22,18 +23,11 @@ import static org.nullpath.testkit.Si.G0;
  * deadlines, queries and scans past that are refused at their place in the file.
  */
 class RangeProblemsTest {
-    private static final String BASE = """
-            stations:
-              home: {}
-            craft:
-              kite:
-                heading: [1, 0, 0]
-                legs:
-                  - burn: {acceleration: 1 g0, duration: forever}
-            links:
-              down: {from: kite, to: home}
-              up: {from: home, to: kite}
-            """;
+    /** Lines 1-10: home, kite on an open-ended burn at 1 g0, links down and up; line 11 on follows. */
+    private static final String BASE = ScenarioText.homeAndCraft("kite", "burn: {acceleration: 1 g0, duration: forever}")
+            .link("down", "kite", "home")
+            .link("up", "home", "kite")
+            .yaml();
 
     @Test
     void aSendBeyondTheRangeOfDoublesIsRefusedAtItsValue() {

@@ -71,30 +71,16 @@ class ScenarioProblemsTest {
                 + " length ('4 ly')", p.render());
     }
 
-    @Test
-    void nanNumbersAreRejected() {
-        assertProblems("""
-                stations:
-                  home:
-                    clock-offset: NaN s
-                craft:
-                  lark:
-                    heading: [.nan, 0, 0]
-                """,
-                at(3, 19, "stations.home.clock-offset", "non-finite number 'NaN s'"),
-                at(6, 15, "craft.lark.heading[0]", "non-finite number '.nan'"));
-    }
-
-    @Test
-    void infiniteNumbersAreRejected() {
-        assertProblems("""
-                stations:
-                  home:
-                    clock-offset: .inf
-                    position: [1e400 km, 0 km, 0 km]
-                """,
-                at(3, 19, "stations.home.clock-offset", "non-finite number '.inf'"),
-                at(4, 16, "stations.home.position[0]", "too large to hold", "'1e400 km'"));
+    /** Non-finite numbers: each refused at its value. */
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', quoteCharacter = '"', textBlock = """
+        NaN numbers      | "stations:\n  home:\n    clock-offset: NaN s\ncraft:\n  lark:\n    heading: [.nan, 0, 0]" | 3 | 19 | stations.home.clock-offset | non-finite number 'NaN s' | 6 | 15 | craft.lark.heading[0] | non-finite number '.nan'
+        infinite numbers | "stations:\n  home:\n    clock-offset: .inf\n    position: [1e400 km, 0 km, 0 km]" | 3 | 19 | stations.home.clock-offset | non-finite number '.inf' | 4 | 16 | stations.home.position[0] | too large to hold ~ '1e400 km'
+        """)
+    void nonFiniteNumbersAreRejected(String numbers, String text, int line1, int column1, String key1, String gists1,
+                                     int line2, int column2, String key2, String gists2) {
+        assertProblems(scenario("file", text), at(line1, column1, key1, gists1.split(" ~ ")),
+                at(line2, column2, key2, gists2.split(" ~ ")));
     }
 
     @Test

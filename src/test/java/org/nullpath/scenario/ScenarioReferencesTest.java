@@ -65,36 +65,21 @@ class ScenarioReferencesTest {
         return b.toString();
     }
 
-    @Test
-    void aWindowScanThatEndsBeforeItStartsIsRejected() {
-        // 'up' has no link terms either: that is the first problem on the line.
-        assertProblems(LINKED + "windows:\n  - {link: up, from: 2 yr, to: 1 yr}\n",
-                at(9, 12, "windows[0].link", "no radio or optical terms"),
-                at(9, 32, "windows[0].to", "ends before it starts"));
-    }
-
-    @Test
-    void nodeNamesThatAreUnsafeInFileNamesAreRejected() {
-        assertProblems("""
-                stations:
-                  home base: {}
-                  .hidden: {}
-                """,
-                at(2, 3, "stations.home base", "may use only letters", "'home base'"),
-                at(3, 3, "stations..hidden", "must start with a letter or digit"));
-    }
-
-    @Test
-    void linkNamesThatAreUnsafeInFileNamesAreRejected() {
-        assertProblems(LINKED + "  ../up: {from: home, to: lark}\n  CON: {from: lark, to: home}\n",
-                at(8, 3, "links.../up", "may use only letters"),
-                at(9, 3, "links.CON", "reserved device name"));
-    }
-
-    @Test
-    void linkNamesThatClashWithOutputFilesAreRejected() {
-        assertProblems(LINKED + "  horizons: {from: home, to: lark}\n  UP: {from: lark, to: home}\n",
-                at(8, 3, "links.horizons", "taken by nullpath's own output file horizons.csv"),
-                at(9, 3, "links.UP", "'up' and 'UP' differ only in upper and lower case"));
+    /**
+     * Two problems, both reported in file order. The window scan on 'up' ending before it starts: 'up' has no link
+     * terms either, and that is the first problem on the line.
+     */
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', quoteCharacter = '"', textBlock = """
+        window ending before it starts  | linked | "windows:\n  - {link: up, from: 2 yr, to: 1 yr}" | 9 | 12 | windows[0].link | no radio or optical terms | 9 | 32 | windows[0].to | ends before it starts
+        node names unsafe in file names | file   | "stations:\n  home base: {}\n  .hidden: {}" | 2 | 3 | stations.home base | may use only letters ~ 'home base' | 3 | 3 | stations..hidden | must start with a letter or digit
+        link names unsafe in file names | linked | "  ../up: {from: home, to: lark}\n  CON: {from: lark, to: home}" | 8 | 3 | links.../up | may use only letters | 9 | 3 | links.CON | reserved device name
+        link names clashing with output | linked | "  horizons: {from: home, to: lark}\n  UP: {from: lark, to: home}" | 8 | 3 | links.horizons | taken by nullpath's own output file horizons.csv | 9 | 3 | links.UP | 'up' and 'UP' differ only in upper and lower case
+        """)
+    void twoMistakesGiveTwoProblemsInFileOrder(String mistakes, String base, String text, int line1, int column1,
+                                               String key1, String gists1, int line2, int column2, String key2,
+                                               String gists2) {
+        assertProblems(scenario(base, text), at(line1, column1, key1, gists1.split(" ~ ")),
+                at(line2, column2, key2, gists2.split(" ~ ")));
     }
 }

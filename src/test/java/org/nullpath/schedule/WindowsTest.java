@@ -7,6 +7,7 @@ import org.junit.jupiter.api.Test;
 import org.nullpath.scenario.Scenario;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
+import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.nullpath.testkit.Si.C;
@@ -26,15 +27,10 @@ class WindowsTest {
     static final double F = 7.2e9;
 
     private static String scenario(String receiverExtras, String transmitterPower, String window) {
-        return """
-                title: windows check
-                stations:
-                  home: {}
-                craft:
-                  probe:
-                    heading: [1, 0, 0]
-                    legs:
-                      - burn: {acceleration: 0.5 g0, duration: forever}
+        return ScenarioText.titled("windows check")
+                .station("home", "{}")
+                .craft("probe", "heading: [1, 0, 0]", "burn: {acceleration: 0.5 g0, duration: forever}")
+                .then("""
                 links:
                   up:
                     from: home
@@ -49,7 +45,8 @@ class WindowsTest {
                     required-eb-n0: 2.5 dB
                 windows:
                   - %s
-                """.formatted(transmitterPower, receiverExtras, window);
+                """.formatted(transmitterPower, receiverExtras, window))
+                .yaml();
     }
 
     private static List<WindowRow> windows(String yaml) throws ScenarioException {
