@@ -197,4 +197,23 @@ class HyperbolicTest {
         assertTrue(relativeError(Hyperbolic.deltaRapidity(beta1, beta0), ref) < TOL,
                 () -> Hyperbolic.deltaRapidity(beta1, beta0) + " expected " + ref);
     }
+
+    @ParameterizedTest(name = "x = {0}")
+    @org.junit.jupiter.params.provider.ValueSource(doubles = {1e-300, 1e-20, 1e-8, 0.5, 3, 1e8, 1e149, 1e151, 1e300, -1e300,
+        -2.5})
+    void asinhMatchesTheLogarithmFormFromTinyToHugeArguments(double x) {
+        // asinh(x) = ln(x + sqrt(1 + x^2)) (any calculus text), in 70 digits; beyond 1e150 the product switches to
+        // ln 2 + ln |x|, where x^2 would overflow a double
+        BigDecimal ref = asinh(of(x));
+        double got = Hyperbolic.asinh(x);
+        assertTrue(relativeError(got, ref) < 1e-15, () -> "asinh(" + x + ") = " + got + " expected " + ref);
+    }
+
+    @Test
+    void anEventKeepsItsTimeAndPosition() {
+        Event e = Event.of(12.5, Vec3.of(1, -2, 3));
+        assertEquals(new Event(12.5, Vec3.of(1, -2, 3)), e);
+        assertEquals(12.5, e.timeSeconds(), 0.0);
+        assertEquals(Vec3.of(1, -2, 3), e.position());
+    }
 }
