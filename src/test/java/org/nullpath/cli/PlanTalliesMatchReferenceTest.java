@@ -166,6 +166,21 @@ class PlanTalliesMatchReferenceTest {
         assertTrue(chase.never > 0 && chase.delivered > 0, "the chaser's sends reach past its horizon too");
     }
 
+    @Test
+    void illConditionedLightTimesAreCountedFromTheirConditionNumbers() throws IOException {
+        // docs/physics.md, "How well a light time is known": values with kappa x 2^-53 > 1e-12 are counted as
+        // ill-conditioned in the summary
+        long total = 0;
+        for (String link : new String[] {"up", "down", "chase", "rate"}) {
+            long ill = PlanRun.csv(out.resolve(link + ".csv")).stream()
+                    .filter(r -> !r.get("light_time_condition").isEmpty())
+                    .filter(r -> num(r, "light_time_condition") * 0x1.0p-53 > 1e-12).count();
+            assertEquals(ill, linkNode(link).get("ill_conditioned_light_times").asLong(), link);
+            total += ill;
+        }
+        assertTrue(total > 0, "some sends near the horizons are ill-conditioned");
+    }
+
     record Tally(long delivered, long never) {
     }
 
