@@ -15,14 +15,10 @@ import org.junit.jupiter.params.provider.CsvSource;
 class LinkTermsProblemsTest {
 
     /** Lines 1-6; the link's own keys follow from line 7, indented by four spaces. */
-    private static final String HEAD = """
-            stations:
-              home: {}
-              away: {position: [1 au, 0 au, 0 au]}
-            links:
-              out:
-                from: home
-            """;
+    private static final String HEAD = org.nullpath.testkit.ScenarioText.home()
+            .station("away", "{position: [1 au, 0 au, 0 au]}")
+            .then("links:\n  out:\n    from: home")
+            .yaml();
 
     /** The rest of a complete coherent link, lines 7-11 after {@code to}. */
     private static String coherent(String carrierLine) {
