@@ -116,6 +116,8 @@ class PlanTalliesMatchReferenceTest {
                 .message(String.format(Locale.ROOT, "{link: rate, at: [%s s, %s s]}",
                         Double.toString(rateClocks[0]), Double.toString(rateClocks[1])))
                 .exchange("{name: ping, query: up, reply: down, turnaround: 1 h, first: 1 d, last: 1.2 yr, every: 60 d}")
+                .cutoff("{name: relay-late, link: chase, arrive-by: 1 yr}")
+                .cutoff("{name: too-late, link: rate, arrive-by: 0.1 yr}")
                 .yaml();
         out = PlanRun.plan(tmp, "tallies", yaml);
         summary = new ObjectMapper().readTree(out.resolve("summary.json").toFile());
@@ -340,6 +342,34 @@ class PlanTalliesMatchReferenceTest {
             close(at + " send_time_s", num(r, "send_time_s"), s.sender().t(), TIME_TOL);
             close(at + " light_time_s", num(r, "light_time_s"), s.arrival().lightTime(), TIME_TOL);
             close(at + " doppler", num(r, "doppler"), s.doppler(), TIME_TOL);
+        }
+    }
+
+    // ---------------------------------------------------------------- cut-offs
+
+    @Test
+    void cutoffsMatchTheReferenceAndFlagALatestSendBeforeTheMissionStarts() throws IOException {
+        // relay-late: the chaser's last send that reaches the probe by its clock 1 yr; too-late: aside is 0.36 ly
+        // from the probe's start, so its last send arriving by 0.1 yr was sent before mission time 0
+        List<CSVRecord> rows = PlanRun.csv(out.resolve("cutoffs.csv"));
+        assertEquals(2, rows.size());
+        RefWorldline[][] ends = {{CHASER, PROBE}, {ASIDE, PROBE}};
+        double[] arriveBy = {1 * YR, 0.1 * YR};
+        String[] before = {"false", "true"};
+        for (int i = 0; i < 2; i++) {
+            CSVRecord r = rows.get(i);
+            String at = "cut-off " + r.get("name");
+            org.nullpath.reference.RefEvent latest = RefSolver.latestSendArrivingBy(ends[i][0], ends[i][1],
+                    RefMath.bd(arriveBy[i]));
+            assertEquals("ok", r.get("status"), at);
+            assertEquals(arriveBy[i], num(r, "arrive_by_clock_s"), 0.0, at);
+            close(at + " latest_send_clock_s", num(r, "latest_send_clock_s"), latest.clock(), TIME_TOL);
+            close(at + " latest_send_time_s", num(r, "latest_send_time_s"), latest.t(), TIME_TOL);
+            assertEquals(before[i], r.get("before_mission_start"), at);
+            JsonNode json = summary.get("cutoffs").get(i);
+            assertEquals(r.get("name"), json.get("name").asText());
+            assertEquals(num(r, "latest_send_clock_s"), json.get("latest_send_clock_s").asDouble(), 0.0, at);
+            assertEquals(Boolean.parseBoolean(before[i]), json.get("before_mission_start").asBoolean(), at);
         }
     }
 
