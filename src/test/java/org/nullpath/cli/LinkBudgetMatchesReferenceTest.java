@@ -8,7 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.apache.commons.csv.CSVRecord;
-import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.nullpath.cli.BudgetReference.Expected;
@@ -55,7 +55,7 @@ class LinkBudgetMatchesReferenceTest {
     static final BigDecimal NEAR_BOUNDARY = BigDecimal.valueOf(DAY);
 
     @TempDir
-    static Path tmp;
+    Path tmp;
     static Path out;
 
     // invented station and craft, built for the reference from the same doubles the scenario converts to
@@ -177,8 +177,9 @@ class LinkBudgetMatchesReferenceTest {
               - {link: aside, first: 5 d, last: 2.2 yr, every: 60 d}
             """;
 
-    @BeforeAll
-    static void plan() throws IOException {
+    /** Plans afresh for every test, so that a mutation tool running one test at a time sees its use of the product. */
+    @BeforeEach
+    void plan() throws IOException {
         out = PlanRun.plan(tmp, "budget", SCENARIO);
     }
 

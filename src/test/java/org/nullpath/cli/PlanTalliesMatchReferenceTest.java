@@ -12,7 +12,7 @@ import java.util.Locale;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import org.apache.commons.csv.CSVRecord;
-import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.nullpath.reference.RefCraft;
@@ -79,16 +79,22 @@ class PlanTalliesMatchReferenceTest {
     static final double CARRIER = 8.4e9;
 
     @TempDir
-    static Path tmp;
+    Path tmp;
     static Path out;
     static JsonNode summary;
     /** The off-line horizon of aside -> probe: the last send clock that still arrives. */
     static double asideHorizonClock;
     static double[] rateClocks;
 
-    @BeforeAll
-    static void plan() throws IOException {
-        asideHorizonClock = RefSolver.horizon(ASIDE, PROBE).clock().doubleValue();
+    /**
+     * Plans afresh for every test (not once for the class): a mutation tool that runs one test at a time then
+     * sees each test's own use of the product.
+     */
+    @BeforeEach
+    void plan() throws IOException {
+        if (asideHorizonClock == 0) {
+            asideHorizonClock = RefSolver.horizon(ASIDE, PROBE).clock().doubleValue();
+        }
         // 1500 s before the horizon (within two steps of the rate's stencil, 1e-4 c / g0 = 3057 s: one-sided)
         // and a third of a year (central difference)
         rateClocks = new double[] {asideHorizonClock - 1500, 0.3 * YR};

@@ -7,7 +7,7 @@ import java.io.IOException;
 import java.nio.file.Path;
 import java.util.List;
 
-import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.nullpath.scenario.Scenario;
 import org.nullpath.scenario.ScenarioException;
@@ -30,8 +30,9 @@ class SpacetimeDiagramTracesTest {
 
     static DiagramTraces.Diagram d;
 
-    @BeforeAll
-    static void layout() throws IOException, ScenarioException {
+    /** Laid out afresh for every test, so that a mutation tool running one test at a time sees its use of it. */
+    @BeforeEach
+    void layout() throws IOException, ScenarioException {
         Scenario s = ScenarioLoader.load(Path.of("link-scenarios", "open-burn-horizon.yaml"));
         d = SpacetimeChart.layout(s, SampledSeries.of(s));
     }
