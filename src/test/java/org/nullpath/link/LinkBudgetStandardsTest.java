@@ -278,4 +278,53 @@ class LinkBudgetStandardsTest {
         assertEquals(photons / required, b.maxDataRateBps(), 1e-12 * photons / required, "max rate");
         assertTrue(Double.isNaN(b.cn0DbHz()) && Double.isNaN(b.ebN0Db()), "photon counting: no C/N0, Eb/N0");
     }
+
+    // ---------------------------------------------------------------- edges (docs/link-budget.md)
+
+    private static LinkTerms withLimits(double tuningMin, double tuningMax, double maxRate, double requiredDb) {
+        return new LinkTerms(8.4e9, false, 20e3, new Antenna.FixedGain(74), 1, new Antenna.FixedGain(68), 300, 1,
+                tuningMin, tuningMax, maxRate, LinkTerms.Detection.COHERENT, 1000, requiredDb, Double.NaN);
+    }
+
+    @Test
+    void theTuningRangeAndTheRateLimitIncludeTheirEdges() {
+        // at rest D = 1 exactly, so the carrier itself is received and the Doppler rate is 0: a receiver whose range
+        // starts or ends at the carrier, or whose rate limit is 0 Hz/s, still takes it: the range and the limit are
+        // closed intervals (docs/link-budget.md says "inside" and "within"; edges included is nullpath's reading,
+        // recorded here so that it does not change unnoticed)
+        SignalPath p = atRest(AU);
+        assertTrue(evaluate(withLimits(8.4e9, 9e9, 0.0, 3), p).inTuningRange(), "at the low edge");
+        assertTrue(evaluate(withLimits(8e9, 8.4e9, 0.0, 3), p).inTuningRange(), "at the high edge");
+        assertTrue(evaluate(withLimits(8e9, 8.4e9, 0.0, 3), p).withinDopplerRate(), "at the rate limit");
+        assertTrue(!evaluate(withLimits(8.5e9, 9e9, 0.0, 3), p).inTuningRange(), "below the range");
+        assertTrue(!evaluate(withLimits(7e9, 8.3e9, 0.0, 3), p).inTuningRange(), "above the range");
+    }
+
+    @Test
+    void aMessageWithZeroMarginCloses() {
+        // margin = Eb/N0 - required; a link required exactly the Eb/N0 it gets has margin 0 and closes (>= 0)
+        SignalPath p = atRest(AU);
+        double ebn0 = evaluate(withLimits(Double.NaN, Double.NaN, Double.NaN, 3), p).ebN0Db();
+        Budget exact = evaluate(withLimits(Double.NaN, Double.NaN, Double.NaN, ebn0), p);
+        assertEquals(0.0, exact.marginDb(), 0.0);
+        assertTrue(exact.closes(), "zero margin closes");
+        assertTrue(!evaluate(withLimits(Double.NaN, Double.NaN, Double.NaN, Math.nextUp(ebn0)), p).closes(),
+                "a hair short does not");
+    }
+
+    @Test
+    void atZeroDistanceTheBudgetHasFrequenciesAndRatesButNoPowerFigures() {
+        // a far-field budget (Friis) has no value where sender and receiver are at one place (d = 0): the power
+        // columns are left empty, frequencies and the received data rate stay (Budget's contract)
+        InertialWorldline here = InertialWorldline.atRest(new Vec3(1e6, 2e6, 3e6));
+        SignalPath p = LightCone.future(here.atClock(50.0), InertialWorldline.atRest(new Vec3(1e6, 2e6, 3e6)));
+        assertEquals(0.0, p.lightTimeSeconds(), 0.0);
+        Budget b = LinkBudget.evaluate(withLimits(8e9, 9e9, 1.0, 3), p, Doppler.of(p), 0.0);
+        assertEquals(8.4e9, b.txFrequencyHz(), 0.0);
+        assertEquals(8.4e9, b.rxFrequencyHz(), 0.0);
+        assertEquals(1000.0, b.rxDataRateBps(), 0.0);
+        assertTrue(Double.isNaN(b.rxPowerDbw()) && Double.isNaN(b.cn0DbHz()) && Double.isNaN(b.ebN0Db())
+                && Double.isNaN(b.marginDb()) && Double.isNaN(b.maxDataRateBps()), b.toString());
+        assertTrue(b.closes(), "no far-field margin: it closes on frequency and rate alone");
+    }
 }
