@@ -1,17 +1,12 @@
 package org.nullpath.scenario;
 
-import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.nullpath.scenario.ProblemAssertions.LINKED;
 import static org.nullpath.scenario.ProblemAssertions.assertOnlyProblem;
-import static org.nullpath.scenario.ProblemAssertions.assertProblem;
 import static org.nullpath.scenario.ProblemAssertions.assertProblems;
 import static org.nullpath.scenario.ProblemAssertions.at;
-import static org.nullpath.scenario.ProblemAssertions.problemsOf;
 import static org.nullpath.scenario.ProblemAssertions.scenario;
 
-import java.util.List;
 
-import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
