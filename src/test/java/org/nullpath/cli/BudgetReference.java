@@ -12,8 +12,8 @@ import org.nullpath.reference.RefWorldline;
 
 /**
  * Test-only, independent link budget of one message in BigDecimal (100 digits, {@link RefMath}), from the
- * reference's send and arrival states. It uses the RECEIVER-frame form of physics.md, "Relativistic link
- * budget" (Friis, Proc. IRE 34, 1946; D^4 flux transformation of Rybicki &amp; Lightman, <i>Radiative
+ * reference's send and arrival states. It uses the RECEIVER-frame form that docs/link-budget.md names under
+ * {@code rx_power_dbw} (Friis, Proc. IRE 34, 1946; D^4 flux transformation of Rybicki &amp; Lightman, <i>Radiative
  * Processes in Astrophysics</i>, 1979, ch. 4):
  * <pre>
  *   P_rx = P_tx G_tx(f_tx) G_rx(f_rx) (lambda_rx / (4 pi R_rx))^2 D^4 / L,
@@ -126,7 +126,7 @@ final class BudgetReference {
         RefState tx = s.sender();
         RefState rx = s.arrival().state();
 
-        // frequency plan (physics.md: pre-compensation transmits f_nom / D)
+        // frequency plan (docs/link-budget.md, tx_frequency_hz: pre-compensation transmits f_nom / D)
         BigDecimal carrier = bd(t.carrierHz());
         BigDecimal fTx = t.precompensate() ? carrier.divide(d, MC) : carrier;
         BigDecimal fRx = t.precompensate() ? carrier : fTx.multiply(d, MC);

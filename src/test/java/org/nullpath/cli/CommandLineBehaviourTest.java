@@ -12,6 +12,8 @@ import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
+import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
@@ -23,26 +25,16 @@ class CommandLineBehaviourTest {
     @TempDir
     Path tmp;
 
-    static final String GOOD = """
-            title: command line check
-            stations:
-              home: {}
-            craft:
-              probe:
-                heading: [1, 0, 0]
-                legs:
-                  - burn: {acceleration: 1 g0, duration: forever}
-            links:
-              up: {from: home, to: probe}
-              down: {from: probe, to: home}
-            messages:
-              - {link: up, first: 0 d, last: 1.5 yr, every: 10 d}
-              - {link: down, at: [1 d, 1 yr, 5 yr]}
-            cutoffs:
-              - {name: early, link: up, arrive-by: 0.5 yr}
-            exchanges:
-              - {name: ping, query: up, reply: down, turnaround: 1 h, first: 0 d, last: 1 yr, every: 30 d}
-            """;
+    static final String GOOD = ScenarioText.titled("command line check")
+            .station("home", "{}")
+            .craft("probe", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: forever}")
+            .link("up", "home", "probe")
+            .link("down", "probe", "home")
+            .message("{link: up, first: 0 d, last: 1.5 yr, every: 10 d}")
+            .message("{link: down, at: [1 d, 1 yr, 5 yr]}")
+            .cutoff("{name: early, link: up, arrive-by: 0.5 yr}")
+            .exchange("{name: ping, query: up, reply: down, turnaround: 1 h, first: 0 d, last: 1 yr, every: 30 d}")
+            .yaml();
 
     private Path write(String name, String text) throws IOException {
         Path f = tmp.resolve(name);

@@ -8,7 +8,7 @@ import java.util.ArrayList;
 import java.util.List;
 
 import org.apache.commons.csv.CSVRecord;
-import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.nullpath.cli.BudgetReference.Expected;
@@ -17,14 +17,22 @@ import org.nullpath.cli.BudgetReference.Terms;
 import org.nullpath.reference.RefCraft;
 import org.nullpath.reference.RefStation;
 import org.nullpath.reference.RefWorldline;
+import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.SendClocks;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
+import static org.nullpath.testkit.SendClocks.series;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.DAY;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * End to end: {@code plan} on scenarios with radio and optical link terms (invented craft and stations),
  * every budget column of every message compared with {@link BudgetReference}: an independent 100-digit
- * BigDecimal budget in the receiver-frame form (physics.md, "Relativistic link budget"; Friis, Proc. IRE 34,
+ * BigDecimal budget in the receiver-frame form (docs/link-budget.md, rx_power_dbw; Friis, Proc. IRE 34,
  * 1946; Rybicki &amp; Lightman 1979, ch. 4) built on the states of the independent reference solver
  * {@code org.nullpath.reference} (it shares no code with src/main). N0 = k_B T with k_B exact (SI 2019);
  * photon rate P_rx / (h f_rx) with h exact (SI 2019); aperture gains e (pi d f / c)^2 (Balanis, <i>Antenna
@@ -36,11 +44,6 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * booleans exact.
  */
 class LinkBudgetMatchesReferenceTest {
-    static final double C = 299_792_458.0;
-    static final double G0 = 9.80665;
-    static final double YR = 31_557_600.0;
-    static final double DAY = 86_400.0;
-    static final double LY = 9_460_730_472_580_800.0;
     static final double REL = 1e-12;
     static final double DB = 1e-9;
     static final double RATE_REL = 1e-6;
@@ -52,7 +55,7 @@ class LinkBudgetMatchesReferenceTest {
     static final BigDecimal NEAR_BOUNDARY = BigDecimal.valueOf(DAY);
 
     @TempDir
-    static Path tmp;
+    Path tmp;
     static Path out;
 
     // invented station and craft, built for the reference from the same doubles the scenario converts to
@@ -174,8 +177,9 @@ class LinkBudgetMatchesReferenceTest {
               - {link: aside, first: 5 d, last: 2.2 yr, every: 60 d}
             """;
 
-    @BeforeAll
-    static void plan() throws IOException {
+    /** Plans afresh for every test, so that a mutation tool running one test at a time sees its use of the product. */
+    @BeforeEach
+    void plan() throws IOException {
         out = PlanRun.plan(tmp, "budget", SCENARIO);
     }
 
@@ -198,7 +202,7 @@ class LinkBudgetMatchesReferenceTest {
         List<CSVRecord> rows = PlanRun.csv(out.resolve("up-pre.csv"));
         assertBudgetsMatch("up-pre", t, HOME, KESTREL);
         for (CSVRecord r : rows) {
-            // physics.md: a pre-compensating sender transmits f_nom / D, so the receiver sees the carrier itself
+            // docs/link-budget.md: a pre-compensating sender transmits f_nom / D, so the receiver sees the carrier itself
             assertEquals(7.2e9, num(r, "rx_frequency_hz"), REL * 7.2e9, "rx frequency, row " + r.get("message"));
             assertEquals(7.2e9 / num(r, "doppler"), num(r, "tx_frequency_hz"), REL * num(r, "tx_frequency_hz"));
         }
@@ -240,6 +244,68 @@ class LinkBudgetMatchesReferenceTest {
         assertTrue(seen.inRange == 3 && seen.rate == 3, "the scenario exercises both sides: " + seen);
     }
 
+    /**
+     * summary.json's budget figures of every link are the extremes and counts of that link's budget columns,
+     * whose every value the tests above hold to the reference: the same doubles, so compared exactly.
+     */
+    @org.junit.jupiter.params.ParameterizedTest(name = "{0}")
+    @org.junit.jupiter.params.provider.CsvSource({"up, 7.2e9", "up-pre, 7.2e9", "down, 8.4e9", "laser, NaN",
+        "cross, 2.2e9", "aside, 8.4e9"})
+    void summaryBudgetFiguresAreTheExtremesAndCountsOfTheLinkFile(String link, double carrierHz) throws IOException {
+        if (Double.isNaN(carrierHz)) {
+            carrierHz = C / (1064 * 1e-9); // the laser's carrier, from its wavelength as the scenario converts it
+        }
+        List<CSVRecord> rows = PlanRun.csv(out.resolve(link + ".csv"));
+        double worst = Double.POSITIVE_INFINITY;
+        double best = Double.NEGATIVE_INFINITY;
+        double minRx = Double.POSITIVE_INFINITY;
+        double maxRx = Double.NEGATIVE_INFINITY;
+        double maxRate = 0;
+        double minMax = Double.POSITIVE_INFINITY;
+        double maxMax = Double.NEGATIVE_INFINITY;
+        long closing = 0;
+        long outOfTuning = 0;
+        long overRate = 0;
+        for (CSVRecord r : rows) {
+            double margin = num(r, "margin_db");
+            worst = Math.min(worst, margin);
+            best = Math.max(best, margin);
+            minRx = Math.min(minRx, num(r, "rx_frequency_hz"));
+            maxRx = Math.max(maxRx, num(r, "rx_frequency_hz"));
+            maxRate = Math.max(maxRate, Math.abs(num(r, "doppler_rate_hz_per_s")));
+            minMax = Math.min(minMax, num(r, "max_data_rate_bps"));
+            maxMax = Math.max(maxMax, num(r, "max_data_rate_bps"));
+            boolean inRange = Boolean.parseBoolean(r.get("in_tuning_range"));
+            boolean withinRate = Boolean.parseBoolean(r.get("within_doppler_rate"));
+            // a message closes when its margin is not negative, it is in the tuning range and within the rate
+            closing += margin >= 0 && inRange && withinRate ? 1 : 0;
+            outOfTuning += inRange ? 0 : 1;
+            overRate += withinRate ? 0 : 1;
+        }
+        com.fasterxml.jackson.databind.JsonNode b = null;
+        for (com.fasterxml.jackson.databind.JsonNode l : new com.fasterxml.jackson.databind.ObjectMapper()
+                .readTree(out.resolve("summary.json").toFile()).get("links")) {
+            if (l.get("name").asText().equals(link)) {
+                assertEquals(rows.size(), l.get("delivered").asLong(), link + ": every message delivered");
+                b = l.get("budget");
+            }
+        }
+        assertTrue(b != null && b.isObject(), link + ": summary.json has the link's budget figures");
+        assertEquals(worst, b.get("worst_margin_db").asDouble(), 0.0, link + " worst_margin_db");
+        assertEquals(best, b.get("best_margin_db").asDouble(), 0.0, link + " best_margin_db");
+        assertEquals(minRx, b.get("min_rx_frequency_hz").asDouble(), 0.0, link + " min_rx_frequency_hz");
+        assertEquals(maxRx, b.get("max_rx_frequency_hz").asDouble(), 0.0, link + " max_rx_frequency_hz");
+        assertEquals(maxRate, b.get("max_abs_doppler_rate_hz_per_s").asDouble(), 0.0, link + " max |rate|");
+        assertEquals(minMax, b.get("max_data_rate_closing_all_bps").asDouble(), 0.0, link + " closing all");
+        assertEquals(maxMax, b.get("max_data_rate_closing_any_bps").asDouble(), 0.0, link + " closing any");
+        assertEquals(closing, b.get("messages_closing").asLong(), link + " messages_closing");
+        assertEquals(outOfTuning, b.get("outside_tuning_range").asLong(), link + " outside_tuning_range");
+        assertEquals(overRate, b.get("over_doppler_rate").asLong(), link + " over_doppler_rate");
+        // extreme: some received frequency outside [carrier / 2, 2 carrier] (docs/link-budget.md)
+        assertEquals(minRx < carrierHz / 2 || maxRx > 2 * carrierHz, b.get("extreme_shift").asBoolean(),
+                link + " extreme_shift");
+    }
+
     @Test
     void machinPiAgreesWithTheDoubleNearestPi() {
         assertEquals(Math.PI, BudgetReference.PI.doubleValue(), 0.0);
@@ -264,16 +330,33 @@ class LinkBudgetMatchesReferenceTest {
         }
     }
 
+    /** The send clocks of each link's one series in {@link #SCENARIO} ({@link SendClocks}). */
+    private static double[] clocksOf(String link) {
+        return switch (link) {
+            case "up", "up-pre" -> series(5 * DAY, 2.5 * YR, 45 * DAY);
+            case "down" -> series(5 * DAY, 1.5 * YR, 40 * DAY);
+            case "laser" -> series(5 * DAY, 2.5 * YR, 50 * DAY);
+            case "cross" -> series(0 * DAY, 2 * YR, 30 * DAY);
+            case "aside" -> series(5 * DAY, 2.2 * YR, 60 * DAY);
+            default -> throw new IllegalArgumentException(link);
+        };
+    }
+
     private static Seen assertBudgetsMatch(String link, Terms t, RefWorldline sender, RefWorldline receiver)
             throws IOException {
         List<CSVRecord> rows = PlanRun.csv(out.resolve(link + ".csv"));
-        assertTrue(rows.size() >= 10, link + ": rows " + rows.size());
+        double[] clocks = clocksOf(link);
+        assertTrue(clocks.length >= 10, link + ": planned sends " + clocks.length);
+        assertEquals(clocks.length, rows.size(), link + ": one row per planned send");
         List<BigDecimal> senderEdges = boundaries(sender);
         List<BigDecimal> receiverEdges = boundaries(receiver);
         Seen seen = new Seen();
-        for (CSVRecord r : rows) {
-            String at = link + " row " + r.get("message");
-            BigDecimal sendClock = new BigDecimal(num(r, "send_clock_s"));
+        for (int i = 0; i < rows.size(); i++) {
+            CSVRecord r = rows.get(i);
+            String at = link + " row " + (i + 1);
+            assertEquals(Integer.toString(i + 1), r.get("message"), at + " message number");
+            assertEquals(clocks[i], num(r, "send_clock_s"), 0.0, at + " send_clock_s");
+            BigDecimal sendClock = new BigDecimal(clocks[i]);
             BigDecimal sendTime = new BigDecimal(num(r, "send_time_s"));
             BigDecimal receiveTime = new BigDecimal(num(r, "receive_time_s"));
             boolean withRate = !near(sendTime, senderEdges) && !near(receiveTime, receiverEdges);

@@ -20,10 +20,10 @@ import org.nullpath.worldline.StraightLineCraft;
  * towards zero), so that light times and distances are typical of real missions.
  */
 public final class Flights {
-    public static final double C = 299_792_458.0;
-    public static final double G0 = 9.80665;
-    public static final double YR = 31_557_600.0;
-    public static final double LY = 9_460_730_472_580_800.0;
+    public static final double C = org.nullpath.testkit.Si.C;
+    public static final double G0 = org.nullpath.testkit.Si.G0;
+    public static final double YR = org.nullpath.testkit.Si.YR;
+    public static final double LY = org.nullpath.testkit.Si.LY;
 
     private Flights() {
     }

@@ -15,19 +15,18 @@ import org.nullpath.worldline.InertialWorldline;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.State;
 import org.nullpath.worldline.StraightLineCraft;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * Horizons of craft on open-ended burns. Source: Rindler, <i>Relativity: Special, General, and
  * Cosmological</i> (2nd ed., 2006), hyperbolic motion: a body at constant proper acceleration a from rest
  * at the origin at t = 0 approaches the null line c t - x = c^2/a, so a signal sent from the origin at
- * t >= c/a never reaches it (physics.md check value). The sign of a flips the direction of escape.
+ * t >= c/a never reaches it (docs/physics.md, check values). The sign of a flips the direction of escape.
  */
 class HorizonTest {
-    private static final double C = 299_792_458.0;
-    private static final double G0 = 9.80665;
-    private static final double YR = 31_557_600.0;
-    private static final double LY = 9_460_730_472_580_800.0;
-
     private static StraightLineCraft openBurnFromRest(double a) {
         return StraightLineCraft.of(Vec3.ZERO, Vec3.of(1, 0, 0), 0, 0, 0,
                 List.of(new LegSpec.Burn(a, new LegSpec.Forever())));
@@ -46,7 +45,7 @@ class HorizonTest {
 
     @Test
     void atOneGeeTheHorizonFromHomeIs0_968715YearsAfterDeparture() {
-        // physics.md check value c/g0 = 0.968 715 yr (same digits as c^2/g0 in ly)
+        // docs/physics.md check value c/g0 = 0.968 715 yr (same digits as c^2/g0 in ly)
         Horizon h = LightCone.horizon(InertialWorldline.atRest(Vec3.ZERO), openBurnFromRest(G0));
         assertEquals(0.968715, h.lastSend().timeSeconds() / YR, 5e-7);
     }

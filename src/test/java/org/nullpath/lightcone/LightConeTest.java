@@ -18,6 +18,9 @@ import org.nullpath.worldline.InertialWorldline;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.State;
 import org.nullpath.worldline.StraightLineCraft;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * Signals between stations and craft against closed forms of special relativity (Rindler, <i>Relativity:
@@ -27,9 +30,6 @@ import org.nullpath.worldline.StraightLineCraft;
  */
 class LightConeTest {
     private static final double C_MS = 299_792_458.0;
-    private static final double G0 = 9.80665;
-    private static final double YR = 31_557_600.0;
-    private static final double LY = 9_460_730_472_580_800.0;
     private static final double TOL = 1e-12;
 
     private static StraightLineCraft fromRest(double a, LegSpec... legs) {
@@ -42,7 +42,7 @@ class LightConeTest {
             "9.80665, 86400",
             "9.80665, 3155760",
             "9.80665, 15778800",
-            "9.80665, 30000000",      // just short of the horizon c/a = 30 570 323.8 s
+            "9.80665, 30000000",      // just short of the horizon c/a = 30 570 322.995 s (physics.md, check values)
             "1e-9, 3600",
             "1e-9, 31557600",
             "9806650, 10",
@@ -86,7 +86,7 @@ class LightConeTest {
         assertTrue(back.onFlightLine());
     }
 
-    @ParameterizedTest(name = "send at t = {0} yr")
+    @ParameterizedTest(name = "a = {0} m/s^2, send at t = {1} s")
     @CsvSource({"0.1", "0.5", "0.9", "1.0", "3.0", "10.0"})
     void anUplinkReachesACraftAfterItsBurnHasEnded(double teYears) {
         // craft: 1 yr of craft clock at 1 g0 from rest, then a coast for ever. Closed forms (Rindler 2006):
@@ -118,7 +118,7 @@ class LightConeTest {
                 () -> "light time " + p.lightTimeSeconds() + " s, expected " + lightTime + " s");
     }
 
-    @ParameterizedTest(name = "send at t = {0} yr")
+    @ParameterizedTest(name = "a = {0} m/s^2, send at t = {1} s")
     @CsvSource({"0.05", "0.3", "0.6", "0.9"})
     void anUplinkFromOffTheFlightLineMatchesAnIndependentRootFinder(double teYears) {
         // station at rest 1 ly off the line; the photon meets the craft where

@@ -189,7 +189,7 @@ public final class RefCraft implements RefWorldline {
     /**
      * The asymptote of an open-ended final burn with a != 0: the unit direction of travel u = sign(a) n,
      * and L = lim (c t - (r - r0).u) = c t0 - s0' + (c^2/|a|) exp(-eta0') with s0' = sign(a) s0 and
-     * eta0' = sign(a) eta0 at the start of that burn (physics.md, "Light cones and horizons").
+     * eta0' = sign(a) eta0 at the start of that burn (docs/physics.md, "Light cones" and "Horizons").
      */
     record Asymptote(BigDecimal[] direction, BigDecimal[] rawDirection, BigDecimal[] origin, BigDecimal limit,
                      BigDecimal accelerationAbs, BigDecimal burnStartTime) {

@@ -8,8 +8,7 @@ import java.util.concurrent.ConcurrentHashMap;
 
 /**
  * A craft on a straight flight line r = r0 + s n (n the unit heading, normalised at the working precision)
- * that coasts at its start speed until its start, flies ONE profiled leg from there (contract.md, "Profiled
- * legs") and coasts for ever after it. Test-only reference, independent of the production code.
+ * that coasts at its start speed until its start, flies ONE profiled leg from there (docs/legs.md) and coasts for ever after it. Test-only reference, independent of the production code.
  *
  * <p>The leg's proper acceleration a(u, eta), u the craft-clock time since the leg start, is one of:
  * <ul>
@@ -33,8 +32,8 @@ import java.util.concurrent.ConcurrentHashMap;
  *       eta_{i+1} = eta_i + (a_i + a_{i+1}) h_i / (2c) (exact integration of a piecewise linear function).</li>
  * </ul>
  *
- * <p>Mission time and position follow from dt/du = cosh eta, ds/du = c sinh eta (physics.md, "Frames and
- * clocks"), integrated here by composite Gauss–Legendre quadrature ({@link RefProfiledQuadrature}) at the
+ * <p>Mission time and position follow from dt/du = cosh eta, ds/du = c sinh eta (docs/physics.md, "Craft on a
+ * straight line"), integrated here by composite Gauss–Legendre quadrature ({@link RefProfiledQuadrature}) at the
  * working precision: the leg is cut into panels (at the profile's samples, and graded geometrically in
  * mass for the rocket and in e^{2 eta} for the sail so that every panel keeps the same ratio of width to
  * distance from the integrand's branch point), the integrals at the panel edges are accumulated once per

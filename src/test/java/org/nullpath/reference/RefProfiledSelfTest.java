@@ -27,7 +27,7 @@ import org.junit.jupiter.api.Test;
  * profile; refinement (twice the panels and a higher order change nothing in the first 45 digits); the leg ends
  * (Ackeret's rapidity budget at burnout, the beam-off light condition, the trapezoid sum of a profile); the
  * closed-form rapidity laws against an outside ODE integrator (Hipparchus DormandPrince853) fed only the
- * acceleration laws of contract.md; and atTime/atClock as inverses. All at the default working precision of
+ * acceleration laws of docs/legs.md; and atTime/atClock as inverses. All at the default working precision of
  * {@value RefMath#DEFAULT_DIGITS} digits.
  */
 class RefProfiledSelfTest {
@@ -422,7 +422,7 @@ class RefProfiledSelfTest {
 
     @Test
     void closedFormRapidityLawsAgreeWithAnOutsideOdeIntegrator() {
-        // contract.md laws fed to the integrator as accelerations only; the reference uses its closed forms
+        // docs/legs.md laws fed to the integrator as accelerations only; the reference uses its closed forms
         double f = 2e6;
         double m0 = 100e3;
         double vex = 0.1 * C;

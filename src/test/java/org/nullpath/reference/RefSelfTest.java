@@ -153,7 +153,7 @@ class RefSelfTest {
     @Test
     void checkValuesOfHyperbolicMotion() {
         // Rindler, Relativity: Special, General, and Cosmological (2nd ed., 2006), hyperbolic motion; the
-        // check values are those listed in the project's physics.md (computed there from these formulas with
+        // check values are those of docs/physics.md, "Check values" (computed there from these formulas with
         // g0 of the 3rd CGPM, 1901, and the IAU Julian year).
         MathContext six = new MathContext(20);
         RefCraft oneYearClock = fromRest(X).burnForClock(G0, YR);
@@ -183,7 +183,7 @@ class RefSelfTest {
 
     @Test
     void lastSendFromOriginIsCOverA() {
-        // physics.md, "Light cones and horizons" (Rindler 2006): from rest at the origin at t = 0, an
+        // docs/physics.md, "Horizons" (Rindler 2006): from rest at the origin at t = 0, an
         // open-ended burn a has the last arriving send from the origin at t = c/a; headings and signs varied.
         RefStation home = RefStation.atRest(ORIGIN);
         double[][] headings = {X, {0, 1, 0}, {1, 2, 2}, {-3, 0, 4}};

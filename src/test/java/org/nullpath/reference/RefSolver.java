@@ -13,7 +13,7 @@ import java.math.MathContext;
  * <pre>
  *   g(T) = c T - |r(t_e + T) - r_e| = 0,   g'(T) = c - v . k &gt;= c (1 - |beta|) &gt; 0
  * </pre>
- * (physics.md, "Light cones and horizons"), bracketed by doubling T and solved by safeguarded Newton
+ * (docs/physics.md, "Light cones" and "Horizons"), bracketed by doubling T and solved by safeguarded Newton
  * iteration ({@link RefRoots}); because T itself is the unknown it keeps its own relative precision even
  * when the mission times are far larger. Past cones solve c T = |r_r - r(t_r - T)| the same way.
  *
@@ -126,7 +126,7 @@ public final class RefSolver {
     }
 
     /**
-     * The horizon criterion of physics.md for a receiver craft with an open-ended burn: TRUE if the signal
+     * The horizon criterion of docs/physics.md ("Horizons") for a receiver craft with an open-ended burn: TRUE if the signal
      * arrives, FALSE if it never does, null when the receiver has no horizon (then it always arrives).
      */
     public static Boolean arrivesByCriterion(RefEvent emission, RefWorldline receiver) {

@@ -6,9 +6,7 @@ import static org.junit.jupiter.api.Assertions.assertFalse;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.awt.geom.Rectangle2D;
-import java.io.ByteArrayOutputStream;
 import java.io.IOException;
-import java.io.PrintStream;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -21,13 +19,16 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
-import org.nullpath.cli.Main;
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
+import org.nullpath.testkit.PlanRun;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
 import org.nullpath.schedule.DiagramTraces;
 import org.nullpath.schedule.SampledSeries;
+import org.nullpath.testkit.ScenarioText;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
 
 /**
  * report.html as a reader gets it: one self-contained page with the title, the caution, the spacetime
@@ -36,24 +37,12 @@ import org.nullpath.schedule.SampledSeries;
  * closed forms of hyperbolic motion, not against nullpath itself).
  */
 class HtmlReportTest {
-    private static final double C = 299_792_458.0; // SI definition of the metre (exact)
-    private static final double G0 = 9.80665;      // standard gravity, CGPM 1901 (exact)
-
     @TempDir
     Path tmp;
 
     /** Runs {@code nullpath plan} in-process with its output captured; returns the exit code. */
     private static int plan(String... args) {
-        PrintStream oldOut = System.out;
-        PrintStream oldErr = System.err;
-        try {
-            System.setOut(new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8));
-            System.setErr(new PrintStream(new ByteArrayOutputStream(), true, StandardCharsets.UTF_8));
-            return Main.run(args);
-        } finally {
-            System.setOut(oldOut);
-            System.setErr(oldErr);
-        }
+        return PlanRun.run(args).exitCode();
     }
 
     private String report(String scenario, String outName) throws IOException, ScenarioException {
@@ -251,20 +240,12 @@ class HtmlReportTest {
     void aMillionPlannedMessagesStillGiveAtMostFourHundredPlottedSamples() throws IOException, ScenarioException {
         // memory must not grow with the plan: the plotted series is a fixed-size sample of the send range
         Path file = tmp.resolve("many.yaml");
-        Files.writeString(file, """
-                title: many messages
-                stations:
-                  home: {}
-                craft:
-                  probe:
-                    heading: [1, 0, 0]
-                    legs:
-                      - burn: {acceleration: 1 g0, duration: 1 yr}
-                links:
-                  down: {from: probe, to: home}
-                messages:
-                  - {link: down, first: 0 s, last: 999999 s, every: 1 s}
-                """);
+        Files.writeString(file, ScenarioText.titled("many messages")
+                .station("home", "{}")
+                .craft("probe", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: 1 yr}")
+                .link("down", "probe", "home")
+                .message("{link: down, first: 0 s, last: 999999 s, every: 1 s}")
+                .yaml());
         Mission s = ScenarioLoader.load(file);
         assertEquals(1_000_000L, s.messages().get(0).count());
         SampledSeries.LinkSeries down = SampledSeries.of(s).get(0);

@@ -46,4 +46,57 @@ final class ProblemAssertions {
                     }
                 });
     }
+
+    /** Lines 1-5 of the tables: station home at the origin, craft lark heading +x. */
+    static final String NODES = """
+            stations:
+              home: {}
+            craft:
+              lark:
+                heading: [1, 0, 0]
+            """;
+
+    /** Lines 1-6 of the leg tables: {@link #NODES}, then lark's legs from line 7 on. */
+    static final String LEGS = NODES + "    legs:\n";
+
+    /** Lines 1-7 of the reference tables: {@link #NODES} and one link 'up' from home to lark. */
+    static final String LINKED = NODES + "links:\n  up: {from: home, to: lark}\n";
+
+    /**
+     * A scenario from a table row: {@code text} with its {@code \n} escapes made new lines, after the lines of
+     * {@code base}: {@code file} (nothing before it), {@code legs} ({@link #LEGS}, each line of the text a leg
+     * item) or {@code linked} ({@link #LINKED}).
+     */
+    static String scenario(String base, String text) {
+        String body = text.replace("\\n", "\n");
+        return switch (base) {
+            case "file" -> body + "\n";
+            case "legs" -> LEGS + body.lines().map(l -> "      - " + l + "\n").reduce("", String::concat);
+            case "linked" -> LINKED + body + "\n";
+            default -> throw new IllegalArgumentException("unknown base " + base);
+        };
+    }
+
+    /** A table row with one problem: where it is and what its message contains ({@code gists} split at " ~ "). */
+    static void assertOnlyProblem(String yaml, int line, int column, String key, String gists) {
+        assertProblem(onlyProblemOf(yaml), line, column, key, gists.split(" ~ "));
+    }
+
+    /** Where one of several expected problems is, and what its message contains. */
+    record At(int line, int column, String key, String... gist) {
+    }
+
+    static At at(int line, int column, String key, String... gist) {
+        return new At(line, column, key, gist);
+    }
+
+    /** Exactly these problems, in this order. */
+    static void assertProblems(String yaml, At... expected) {
+        List<Problem> all = problemsOf(yaml);
+        assertEquals(expected.length, all.size(), () -> rendered(all));
+        for (int i = 0; i < expected.length; i++) {
+            At e = expected[i];
+            assertProblem(all.get(i), e.line(), e.column(), e.key(), e.gist());
+        }
+    }
 }

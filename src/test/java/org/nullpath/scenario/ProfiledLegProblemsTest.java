@@ -8,6 +8,8 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -17,50 +19,27 @@ import static org.nullpath.scenario.ProblemAssertions.onlyProblemOf;
 
 /** Bad profiled legs (rocket, sail, profile) each give one located problem. */
 class ProfiledLegProblemsTest {
-    /** Lines 1-7; a leg follows on line 8. */
-    private static final String CRAFT = """
-            stations:
-              home: {}
-              aside: {position: [0 m, 1e9 m, 0 m]}
-            craft:
-              lark:
-                heading: [1, 0, 0]
-                legs:
-            """;
+    /** Lines 1-7 (home, a station off lark's line, lark's legs); a leg follows on line 8. */
+    private static final String CRAFT = ProblemAssertions.LEGS.replace("  home: {}\n",
+            "  home: {}\n  aside: {position: [0 m, 1e9 m, 0 m]}\n");
 
     @TempDir
     Path tmp;
 
-    @Test
-    void aMassRatioOfOneOrLessIsRejected() {
-        Problem p = onlyProblemOf(CRAFT + "      - rocket: {acceleration: 1 g0, exhaust-speed: 0.5 c, mass-ratio: 1}\n");
-        assertProblem(p, 8, 72, "craft.lark.legs[0].rocket.mass-ratio", "greater than 1");
-    }
-
-    @Test
-    void aBurnoutMassAtOrAboveTheInitialMassIsRejected() {
-        Problem p = onlyProblemOf(CRAFT + "      - rocket: {thrust: 2 MN, initial-mass: 20 t, burnout-mass: 20 t,"
-                + " exhaust-speed: 0.1 c}\n");
-        assertEquals("craft.lark.legs[0].rocket.burnout-mass", p.key(), p.render());
-        assertTrue(p.message().contains("below the initial mass"), p.render());
-    }
-
-    @Test
-    void anExhaustSpeedAboveLightIsRejected() {
-        Problem p = onlyProblemOf(CRAFT + "      - rocket: {acceleration: 1 g0, exhaust-speed: 1.5 c, mass-ratio: 4}\n");
-        assertEquals("craft.lark.legs[0].rocket.exhaust-speed", p.key(), p.render());
-    }
-
-    @Test
-    void mixingTheTwoRocketFormsIsRejected() {
-        Problem p = onlyProblemOf(CRAFT + "      - rocket: {acceleration: 1 g0, thrust: 2 MN, exhaust-speed: 0.1 c}\n");
-        assertEquals("craft.lark.legs[0].rocket.thrust", p.key(), p.render());
-    }
-
-    @Test
-    void aBeamStationOffTheFlightLineIsRejected() {
-        Problem p = onlyProblemOf(CRAFT + "      - sail: {beam-from: aside, beam-power: 100 GW, mass: 10 g, beam-off: 600 s}\n");
-        assertProblem(p, 8, 27, "craft.lark.legs[0].sail.beam-from", "flight line");
+    /** One thing wrong in a rocket or sail leg (line 8), one problem at its value. */
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', quoteCharacter = '"', textBlock = """
+        mass ratio of one           | "rocket: {acceleration: 1 g0, exhaust-speed: 0.5 c, mass-ratio: 1}" | 72 | rocket.mass-ratio | greater than 1
+        burnout mass not below      | "rocket: {thrust: 2 MN, initial-mass: 20 t, burnout-mass: 20 t, exhaust-speed: 0.1 c}" | 66 | rocket.burnout-mass | below the initial mass
+        exhaust speed above light   | "rocket: {acceleration: 1 g0, exhaust-speed: 1.5 c, mass-ratio: 4}" | 53 | rocket.exhaust-speed | ""
+        two rocket forms mixed      | "rocket: {acceleration: 1 g0, thrust: 2 MN, exhaust-speed: 0.1 c}" | 46 | rocket.thrust | ""
+        beam station off the line   | "sail: {beam-from: aside, beam-power: 100 GW, mass: 10 g, beam-off: 600 s}" | 27 | sail.beam-from | flight line
+        unknown beam station        | "sail: {beam-from: hme, beam-power: 100 GW, mass: 10 g, beam-off: 600 s}" | 27 | sail.beam-from | not a station ~ did you mean 'home'?
+        reflectivity above one      | "sail: {beam-from: home, beam-power: 1 GW, mass: 1 g, reflectivity: 1.5, beam-off: 60 s}" | 76 | sail.reflectivity | ""
+        """)
+    void oneMistakeInAProfiledLegGivesOneProblemAtItsValue(String mistake, String leg, int column, String key,
+                                                          String gists) {
+        ProblemAssertions.assertOnlyProblem(CRAFT + "      - " + leg + "\n", 8, column, "craft.lark.legs[0]." + key, gists);
     }
 
     @Test
@@ -71,18 +50,6 @@ class ProfiledLegProblemsTest {
         assertProblem(p, 8, 27, "craft.lark.legs[0].sail.beam-from", "behind the craft");
     }
 
-    @Test
-    void anUnknownBeamStationIsRejectedWithDidYouMean() {
-        Problem p = onlyProblemOf(CRAFT + "      - sail: {beam-from: hme, beam-power: 100 GW, mass: 10 g, beam-off: 600 s}\n");
-        assertProblem(p, 8, 27, "craft.lark.legs[0].sail.beam-from", "not a station", "did you mean 'home'?");
-    }
-
-    @Test
-    void aReflectivityOutsideZeroToOneIsRejected() {
-        Problem p = onlyProblemOf(CRAFT + "      - sail: {beam-from: home, beam-power: 1 GW, mass: 1 g, reflectivity: 1.5,"
-                + " beam-off: 60 s}\n");
-        assertEquals("craft.lark.legs[0].sail.reflectivity", p.key(), p.render());
-    }
 
     private Problem profileProblem(String table) throws IOException {
         Path scenario = tmp.resolve("s.yaml");

@@ -24,6 +24,10 @@ import org.nullpath.link.LinkTerms;
 import org.nullpath.worldline.InertialWorldline;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.StraightLineCraft;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * Valid scenarios load with every value converted to SI.
@@ -38,16 +42,7 @@ import org.nullpath.worldline.StraightLineCraft;
  * written as the same single product.
  */
 class ScenarioLoaderTest {
-    /** Speed of light, m/s: SI Brochure, 9th ed. (2019), exact. */
-    private static final double C = 299_792_458.0;
-    /** Standard gravity, m/s^2: 3rd CGPM (1901), exact. */
-    private static final double G0 = 9.806_65;
-    /** Julian year, s: IAU, exact. */
-    private static final double YR = 365.25 * 86_400.0;
-    /** Light year, m: IAU, c x Julian year, exact. */
-    private static final double LY = 9_460_730_472_580_800.0;
-
-    /** A scenario written after the example in contract.md, with radio and optical link terms. */
+    /** A full scenario (invented craft and stations) with radio and optical link terms. */
     static final String FULL = """
             title: Lark outbound trial
             epoch: 2061-03-01T00:00:00Z
@@ -163,7 +158,8 @@ class ScenarioLoaderTest {
         // The heading [2, 0, 0] is normalised.
         assertEquals(1.0, lark.heading().x());
         // Hyperbolic motion from rest (Rindler 2006): v = c tanh(a tau / c). After 1 yr of craft clock at
-        // 1 g0 the speed is 0.774 827 c (physics.md check value, computed from that formula).
+        // 1 g0 the speed is 0.774 827 c (docs/physics.md, check values: computed there
+        // from that formula at 50 digits).
         assertEquals(0.774_827, lark.atClock(YR).beta(), 5e-7);
         // The open-ended last burn gives the craft a horizon.
         assertTrue(lark.asymptote().isPresent());

@@ -7,8 +7,12 @@ import org.junit.jupiter.api.Test;
 import org.nullpath.mission.Mission;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
+import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.K_B;
 
 /**
  * Window edges against independent closed forms and independent root finding (Apache Commons Math's
@@ -19,22 +23,14 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
  * rate on the craft's clock is dD/d(tau) = -D a / c.
  */
 class WindowsTest {
-    static final double C = 299_792_458.0;
-    static final double G0 = 9.80665;
     static final double A = 0.5 * G0;
     static final double F = 7.2e9;
-    static final double K_B = 1.380649e-23;
 
     private static String scenario(String receiverExtras, String transmitterPower, String window) {
-        return """
-                title: windows check
-                stations:
-                  home: {}
-                craft:
-                  probe:
-                    heading: [1, 0, 0]
-                    legs:
-                      - burn: {acceleration: 0.5 g0, duration: forever}
+        return ScenarioText.titled("windows check")
+                .station("home", "{}")
+                .craft("probe", "heading: [1, 0, 0]", "burn: {acceleration: 0.5 g0, duration: forever}")
+                .then("""
                 links:
                   up:
                     from: home
@@ -49,7 +45,8 @@ class WindowsTest {
                     required-eb-n0: 2.5 dB
                 windows:
                   - %s
-                """.formatted(transmitterPower, receiverExtras, window);
+                """.formatted(transmitterPower, receiverExtras, window))
+                .yaml();
     }
 
     private static List<WindowRow> windows(String yaml) throws ScenarioException {

@@ -13,6 +13,8 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * The stable offsets of hyperbolic motion against the textbook difference forms of Rindler,
@@ -25,8 +27,6 @@ import org.junit.jupiter.params.provider.MethodSource;
  * harm. Required agreement: 1e-12 relative, from a u / c ~ 3e-18 (1e-9 m/s^2 for 1 s) to rapidity 50.
  */
 class HyperbolicTest {
-    private static final double G0 = 9.80665;
-    private static final double YR = 31_557_600.0;
     private static final double TOL = 1e-12;
 
     /** (eta0, a, u) combinations spanning the regimes, with |eta0| + |a u / c| <= 50. */
@@ -196,5 +196,24 @@ class HyperbolicTest {
         BigDecimal ref = sub(atanh(of(beta1)), atanh(of(beta0)));
         assertTrue(relativeError(Hyperbolic.deltaRapidity(beta1, beta0), ref) < TOL,
                 () -> Hyperbolic.deltaRapidity(beta1, beta0) + " expected " + ref);
+    }
+
+    @ParameterizedTest(name = "x = {0}")
+    @org.junit.jupiter.params.provider.ValueSource(doubles = {1e-300, 1e-20, 1e-8, 0.5, 3, 1e8, 1e149, 1e151, 1e300, -1e300,
+        -2.5})
+    void asinhMatchesTheLogarithmFormFromTinyToHugeArguments(double x) {
+        // asinh(x) = ln(x + sqrt(1 + x^2)) (any calculus text), in 70 digits; beyond 1e150 the product switches to
+        // ln 2 + ln |x|, where x^2 would overflow a double
+        BigDecimal ref = asinh(of(x));
+        double got = Hyperbolic.asinh(x);
+        assertTrue(relativeError(got, ref) < 1e-15, () -> "asinh(" + x + ") = " + got + " expected " + ref);
+    }
+
+    @Test
+    void anEventKeepsItsTimeAndPosition() {
+        Event e = Event.of(12.5, Vec3.of(1, -2, 3));
+        assertEquals(new Event(12.5, Vec3.of(1, -2, 3)), e);
+        assertEquals(12.5, e.timeSeconds(), 0.0);
+        assertEquals(Vec3.of(1, -2, 3), e.position());
     }
 }

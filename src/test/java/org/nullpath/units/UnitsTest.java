@@ -10,7 +10,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /**
- * Every unit the contract lists ("Units at least", plus the mass and force units of profiled legs)
+ * Every unit docs/scenario-format.md lists (plus the mass and force units of profiled legs)
  * converts to the right SI value. Expected values are written out as decimal literals, not taken
  * from {@link Constants}. Sources: SI Brochure, 9th ed. (2019) for c and the decimal prefixes;
  * IAU for the Julian year, au (2012 Resolution B2), light year and parsec (2015 Resolution B2);
@@ -194,5 +194,38 @@ class UnitsTest {
         assertTrue(message.contains("got 'ly 4.2'"), message);
         assertTrue(rejected("", Dimension.TIME).getMessage().contains("expected a time"));
         assertTrue(rejected(null, Dimension.TIME).getMessage().contains("got nothing"));
+    }
+
+    @ParameterizedTest(name = "distance({0}, {1}) = {2}")
+    @CsvSource(delimiter = '|', quoteCharacter = '"', textBlock = """
+            kitten   | sitting  | 3
+            ""       | abc      | 3
+            abc      | ""       | 3
+            flaw     | lawn     | 2
+            yrs      | yr       | 1
+            burn     | burn     | 0
+            """)
+    void spellingDistanceIsTheLevenshteinDistance(String a, String b, int expected) {
+        // Levenshtein (1966): insertions, deletions and substitutions; kitten/sitting = 3 is the textbook example
+        assertEquals(expected, Spelling.distance(a, b));
+        assertEquals(expected, Spelling.distance(b, a), "symmetric");
+    }
+
+    @Test
+    void theClosestCandidateIsTheFirstOfTheNearestWithinAThirdOfTheWord() {
+        assertEquals("bat", Spelling.closest("cat", java.util.List.of("bat", "hat", "dog")), "ties go to the first");
+        assertEquals("position", Spelling.closest("positon", java.util.List.of("velocity", "position")));
+        assertEquals(null, Spelling.closest("zebra", java.util.List.of("burn", "coast")), "nothing near enough");
+    }
+
+    @Test
+    void symbolsOfADimensionListItsUnitsAndNoOthers() {
+        java.util.List<String> time = java.util.List.of(Units.symbolsOf(Dimension.TIME).split(" "));
+        assertTrue(time.containsAll(java.util.List.of("s", "min", "h", "d", "yr")), time.toString());
+        assertFalse(time.contains("m") || time.contains("ly") || time.contains("g0"), time.toString());
+        assertEquals(time.size(), new java.util.HashSet<>(time).size(), "each once");
+        assertEquals("s", Dimension.TIME.siSymbol());
+        assertEquals("m", Dimension.LENGTH.siSymbol());
+        assertEquals("m/s^2", Dimension.ACCELERATION.siSymbol());
     }
 }

@@ -16,6 +16,10 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.MethodSource;
 import org.nullpath.spacetime.Vec3;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * Multi-leg craft against an independent numerical integration with Apache Commons Math 3.6.1
@@ -29,10 +33,6 @@ import org.nullpath.spacetime.Vec3;
  * 1e-10 relative (eta, which passes through zero, to 1e-10 of the largest rapidity of the flight).
  */
 class IndependentIntegrationTest {
-    private static final double C = 299_792_458.0;
-    private static final double G0 = 9.80665;
-    private static final double YR = 31_557_600.0;
-    private static final double LY = 9_460_730_472_580_800.0;
     private static final double TOL = 1e-10;
 
     /** y = (eta, t, s) as functions of proper time, at constant proper acceleration a. */

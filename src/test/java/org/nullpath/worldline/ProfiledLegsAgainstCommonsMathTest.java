@@ -9,6 +9,8 @@ import org.nullpath.spacetime.Vec3;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
 
 /**
  * Profiled legs against closed forms where they exist and against an independent integration with
@@ -17,9 +19,6 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
  * d(eta)/du = a/c, dt/du = cosh(eta), ds/du = c sinh(eta).
  */
 class ProfiledLegsAgainstCommonsMathTest {
-    static final double C = 299_792_458.0;
-    static final double G0 = 9.80665;
-
     /** A proper acceleration law a(u, eta). */
     interface Law {
         double at(double u, double eta);
@@ -118,6 +117,38 @@ class ProfiledLegsAgainstCommonsMathTest {
         // the switch-off at home clock 600 s travels along U = c t - x = c 600 (x from the origin)
         double x = 1e6 + leg.end().along();
         assertRelative(C * 600, C * leg.end().timeSeconds() - x, 1e-12, "leg ends on the switch-off's light front");
+    }
+
+    @Test
+    void aSailAfterACoastWhoseBeamStationMovesAlongTheLineFollowsTheClosedFormInTheStationsFrame() {
+        // The beam station moves along the line at 0.3 c and the craft starts beside its motion at the same speed,
+        // 1000 km ahead, coasts 100 s of its clock, then sails. In the station's frame that is the sail from rest
+        // of the test above (the law depends only on the beam's Doppler factor D = exp(-(eta - eta_station)),
+        // docs/legs.md), so by the principle of relativity (Einstein 1905) the rapidity gained from the sail's start
+        // follows exp(2 (eta - eta_station)) = 1 + 2 (1 + R) P (u - u0) / (m c^2); and the leg ends on the light
+        // front of the switch-off, sent at station clock 600 s, i.e. at mission time 600 gamma_s from x = v t.
+        double p = 1e11;
+        double m = 0.01;
+        double r = 0.8;
+        double beta = 0.3;
+        double etaStation = 0.5 * Math.log((1 + beta) / (1 - beta));
+        InertialWorldline station = InertialWorldline.of(Vec3.ZERO, Vec3.of(beta * C, 0, 0), 0);
+        StraightLineCraft craft = StraightLineCraft.of(Vec3.of(1e6, 0, 0), Vec3.of(1, 0, 0), 0, 0, beta * C,
+                List.of(new LegSpec.Coast(new LegSpec.ClockDuration(100)), new LegSpec.Sail(station, p, m, r, 600)));
+        double k = (1 + r) * p / (m * C);
+        LegSpan sail = craft.legs().get(1);
+        assertEquals(100, sail.start().clock(), 0.0, "the sail starts after the coast");
+        assertRelative(etaStation, sail.start().rapidity(), 1e-12, "still beside the station when the sail starts");
+        for (double frac : new double[] {0.001, 0.3, 0.7, 1.0}) {
+            double u = 100 + frac * (sail.end().clock() - 100);
+            double closed = etaStation + 0.5 * Math.log1p(2 * k * (u - 100) / C);
+            assertRelative(closed, craft.lineAtClock(u).rapidity(), 1e-12, "rapidity at " + frac);
+        }
+        double gamma = 1 / Math.sqrt(1 - beta * beta);
+        double tOff = 600 * gamma;
+        double x = 1e6 + sail.end().along();
+        assertRelative(C * tOff - beta * C * tOff, C * sail.end().timeSeconds() - x, 1e-12,
+                "the leg ends on the switch-off's light front");
     }
 
     @Test

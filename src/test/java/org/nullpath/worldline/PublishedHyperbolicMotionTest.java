@@ -11,20 +11,20 @@ import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 import org.nullpath.spacetime.Vec3;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
- * The check values of physics.md for hyperbolic motion from rest, computed there from the formulas of
+ * The check values of docs/physics.md ("Check values") for hyperbolic motion from rest, computed there at 50
+ * digits from the formulas of
  * Rindler, <i>Relativity: Special, General, and Cosmological</i> (2nd ed., 2006), hyperbolic motion, and
  * Misner, Thorne &amp; Wheeler, <i>Gravitation</i> (1973), ch. 6, with g0 = 9.806 65 m/s^2 (3rd CGPM,
  * 1901), c = 299 792 458 m/s (SI Brochure, 9th ed.) and the Julian year of 31 557 600 s (IAU). Each is
  * checked to the digits given (half a unit in the last quoted digit).
  */
 class PublishedHyperbolicMotionTest {
-    private static final double C = 299_792_458.0;
-    private static final double G0 = 9.80665;
-    private static final double YR = 31_557_600.0;
-    private static final double LY = 9_460_730_472_580_800.0;
-
     private static StraightLineCraft fromRest(LegSpec... legs) {
         return StraightLineCraft.of(Vec3.ZERO, Vec3.of(1, 0, 0), 0, 0, 0, List.of(legs));
     }
@@ -36,7 +36,7 @@ class PublishedHyperbolicMotionTest {
 
     @Test
     void oneYearAtOneGeeOnTheCraftClockReaches0_774827c() {
-        // Rindler 2006 / MTW ch. 6: v = c tanh(a tau / c); physics.md check value 0.774 827 c
+        // Rindler 2006 / MTW ch. 6: v = c tanh(a tau / c); docs/physics.md check value 0.774 827 c
         StraightLineCraft craft = fromRest(new LegSpec.Burn(G0, new LegSpec.ClockDuration(YR)));
         LineState end = craft.legs().get(0).end();
         assertToQuotedDigits(0.774827, 5e-7, Math.tanh(end.rapidity()), "v/c after 1 yr craft clock");
@@ -45,7 +45,7 @@ class PublishedHyperbolicMotionTest {
 
     @Test
     void oneYearOfMissionTimeAtOneGeeReaches0_718253c() {
-        // Rindler 2006: v(t) = a t / sqrt(1 + (a t / c)^2); physics.md check value 0.718 253 c
+        // Rindler 2006: v(t) = a t / sqrt(1 + (a t / c)^2); docs/physics.md check value 0.718 253 c
         StraightLineCraft craft = fromRest(new LegSpec.Burn(G0, new LegSpec.MissionDuration(YR)));
         LineState end = craft.legs().get(0).end();
         assertToQuotedDigits(0.718253, 5e-7, Math.tanh(end.rapidity()), "v/c after 1 yr mission time");
@@ -54,7 +54,7 @@ class PublishedHyperbolicMotionTest {
 
     @Test
     void cSquaredOverStandardGravityIs0_968715LightYears() {
-        // physics.md check value c^2/g0 = 0.968 715 ly; it is also the distance from the origin to the
+        // docs/physics.md check value c^2/g0 = 0.968 715 ly; it is also the distance from the origin to the
         // asymptote of a craft that starts at rest there (Rindler 2006: the hyperbola's null asymptote)
         assertToQuotedDigits(0.968715, 5e-7, C * C / G0 / LY, "c^2/g0 in ly");
         StraightLineCraft craft = fromRest(new LegSpec.Burn(G0, new LegSpec.Forever()));
@@ -65,7 +65,7 @@ class PublishedHyperbolicMotionTest {
 
     @Test
     void aThousandLightYearsFromRestTakes1000_968YearsOfMissionTimeAnd7_39484YearsOfCraftClock() {
-        // physics.md check values: 1000.968 yr mission time, 7.394 84 yr craft clock (until-distance leg)
+        // docs/physics.md check values: 1000.968 yr mission time, 7.394 84 yr craft clock (until-distance leg)
         StraightLineCraft craft = fromRest(new LegSpec.Burn(G0, new LegSpec.UntilDistance(1000 * LY)));
         LineState end = craft.legs().get(0).end();
         assertToQuotedDigits(1000.968, 5e-4, end.timeSeconds() / YR, "mission time in yr");

@@ -13,6 +13,10 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.nullpath.spacetime.Decimal;
 import org.nullpath.spacetime.Vec3;
+import static org.nullpath.testkit.Si.C;
+import static org.nullpath.testkit.Si.G0;
+import static org.nullpath.testkit.Si.LY;
+import static org.nullpath.testkit.Si.YR;
 
 /**
  * Queries on station and craft worldlines: inverse clock/time lookups, leg bookkeeping, every kind of
@@ -20,11 +24,6 @@ import org.nullpath.spacetime.Vec3;
  * <i>Relativity: Special, General, and Cosmological</i>, 2nd ed., 2006, hyperbolic motion).
  */
 class WorldlineQueriesTest {
-    private static final double C = 299_792_458.0;
-    private static final double G0 = 9.80665;
-    private static final double YR = 31_557_600.0;
-    private static final double LY = 9_460_730_472_580_800.0;
-
     /** An invented demo craft, "Wren": moving start, every finite leg-end kind, then an open burn. */
     private static StraightLineCraft wren() {
         return StraightLineCraft.of(Vec3.of(LY, 2 * LY, -LY), Vec3.of(1, 1, 0), 3 * YR, 100.0, 0.2 * C, List.of(

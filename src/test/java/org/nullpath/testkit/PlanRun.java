@@ -1,4 +1,4 @@
-package org.nullpath.cli;
+package org.nullpath.testkit;
 
 import java.io.IOException;
 import java.io.PrintStream;
@@ -10,19 +10,20 @@ import java.util.List;
 
 import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
+import org.nullpath.cli.Main;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
-/** Test helper: writes a scenario, runs {@code nullpath plan} in-process and reads the CSVs back. */
-final class PlanRun {
+/** Test helper: writes a scenario, runs {@code nullpath} in-process (output captured) and reads the CSVs back. */
+public final class PlanRun {
     private PlanRun() {
     }
 
     /** Exit code and what was printed. */
-    record Outcome(int exitCode, String out, String err) {
+    public record Outcome(int exitCode, String out, String err) {
     }
 
-    static Outcome run(String... args) {
+    public static Outcome run(String... args) {
         PrintStream oldOut = System.out;
         PrintStream oldErr = System.err;
         java.io.ByteArrayOutputStream out = new java.io.ByteArrayOutputStream();
@@ -39,7 +40,7 @@ final class PlanRun {
     }
 
     /** Writes {@code yaml} to {@code dir/name.yaml}, plans it into {@code dir/out}, asserts success, returns out. */
-    static Path plan(Path dir, String name, String yaml) throws IOException {
+    public static Path plan(Path dir, String name, String yaml) throws IOException {
         Path file = dir.resolve(name + ".yaml");
         Files.writeString(file, yaml);
         Path out = dir.resolve("out-" + name);
@@ -48,7 +49,7 @@ final class PlanRun {
         return out;
     }
 
-    static List<CSVRecord> csv(Path file) throws IOException {
+    public static List<CSVRecord> csv(Path file) throws IOException {
         try (Reader r = Files.newBufferedReader(file)) {
             return CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(r).getRecords();
         }
