@@ -46,7 +46,10 @@ public record MotionFactor(double value, double minusOne) {
             return new MotionFactor(Math.exp(-a) + ash * oneMinusAbsMu, Math.expm1(-a) + ash * oneMinusAbsMu);
         }
         double sh = Math.sinh(eta);
-        double gm1 = sh * sh / (Math.cosh(eta) + 1);
+        // cosh eta - 1 without cancellation; past |eta| = 300 sinh^2 would overflow (at about 355), so the
+        // equal 2 sinh^2(eta / 2) is used there (finite up to the rapidity limit of 700)
+        double half = Math.sinh(eta / 2);
+        double gm1 = Math.abs(eta) < 300 ? sh * sh / (Math.cosh(eta) + 1) : 2 * half * half;
         return new MotionFactor(Math.cosh(eta) + ash * absMu, gm1 + ash * absMu);
     }
 }
