@@ -48,7 +48,6 @@ public final class HtmlReport {
     /** The whole page. */
     static String render(Mission s, PlanResult r) {
         List<SampledSeries.LinkSeries> series = SampledSeries.of(s);
-        DiagramTraces.Diagram diagram = SpacetimeChart.layout(s, series);
         StringBuilder h = new StringBuilder(1 << 20);
         h.append("<!DOCTYPE html>\n<html lang=\"en\">\n<head>\n<meta charset=\"utf-8\">\n")
                 .append("<meta name=\"viewport\" content=\"width=device-width, initial-scale=1\">\n")
@@ -58,7 +57,7 @@ public final class HtmlReport {
         h.append("<aside class=\"caution\" id=\"caution\">\n<h2>Before relying on any of this</h2>\n<p>")
                 .append(Html.escape(CAUTION)).append("</p>\n</aside>\n");
         contents(h, s);
-        diagramSection(h, s, diagram);
+        diagramSection(h, s, series);
         linkSections(h, s, r, series);
         tables(h, r, s.epoch());
         scenarioSection(h, s);
@@ -91,27 +90,40 @@ public final class HtmlReport {
                 .append("<li><a href=\"#scenario\">The scenario as read</a></li>\n</ol>\n</nav>\n");
     }
 
-    private static void diagramSection(StringBuilder h, Mission s, DiagramTraces.Diagram d) {
+    private static void diagramSection(StringBuilder h, Mission s, List<SampledSeries.LinkSeries> series) {
         List<String> links = new ArrayList<>();
         Map<String, String> ends = new LinkedHashMap<>();
         for (Link l : s.links().values()) {
             links.add(l.name());
             ends.put(l.name(), l.from().name() + " \u2192 " + l.to().name());
         }
-        String title = "Spacetime diagram of " + s.title() + ": mission time against distance along the flight line";
-        Charts.Figure f = SpacetimeChart.of(d, links, ends, "svg-spacetime", title);
-        double[] a = d.axis();
-        String axis = d.axisCraft() == null ? "the mission frame's x axis"
-                : Html.escape(d.axisCraft()) + "'s heading (" + Scales.number(a[0]) + ", " + Scales.number(a[1])
-                + ", " + Scales.number(a[2]) + ")";
-        h.append("<section id=\"spacetime\">\n<h2>Spacetime diagram</h2>\n<figure id=\"fig-spacetime\" class=\"wide\">\n")
-                .append(f.svg()).append("\n<figcaption><p>Mission time runs up, distance along ").append(axis)
-                .append(" across; every body is projected onto that line. One unit of c\u00a0t and one of distance ")
-                .append("take the same length, so a signal along the line runs at 45\u00b0 (off the line its ")
-                .append("projection is steeper). Up to ").append(DiagramTraces.RAYS_PER_LINK)
-                .append(" signals per link, evenly spaced over its planned sends, are drawn from send to arrival.</p>\n");
-        key(h, f.key());
-        h.append("</figcaption>\n</figure>\n</section>\n");
+        List<DiagramTraces.FlightLine> lines = DiagramTraces.flightLines(s);
+        h.append("<section id=\"spacetime\">\n<h2>Spacetime diagram</h2>\n");
+        if (lines.size() > 1) {
+            h.append("<p>The craft fly along ").append(lines.size()).append(" different lines, so each line has a ")
+                    .append("panel of its own: the craft flying along it, every station projected onto it, and the ")
+                    .append("signals of the links with a craft on it.</p>\n");
+        }
+        for (int i = 0; i < lines.size(); i++) {
+            DiagramTraces.Diagram d = SpacetimeChart.layout(lines.get(i), i == 0, series);
+            String suffix = i == 0 ? "" : "-" + (i + 1);
+            String title = "Spacetime diagram of " + s.title() + ": mission time against distance along the flight line"
+                    + (lines.size() > 1 ? " of " + Readable.names(d.axisCraft()) : "");
+            Charts.Figure f = SpacetimeChart.of(d, links, ends, "svg-spacetime" + suffix, title);
+            double[] a = d.axis();
+            String axis = d.axisCraft().isEmpty() ? "the mission frame's x axis"
+                    : Html.escape(Readable.names(d.axisCraft())) + "'s heading (" + Scales.number(a[0]) + ", "
+                    + Scales.number(a[1]) + ", " + Scales.number(a[2]) + ")";
+            h.append("<figure id=\"fig-spacetime").append(suffix).append("\" class=\"wide\">\n")
+                    .append(f.svg()).append("\n<figcaption><p>Mission time runs up, distance along ").append(axis)
+                    .append(" across; every body is projected onto that line. One unit of c\u00a0t and one of distance ")
+                    .append("take the same length, so a signal along the line runs at 45\u00b0 (off the line its ")
+                    .append("projection is steeper). Up to ").append(DiagramTraces.RAYS_PER_LINK)
+                    .append(" signals per link, evenly spaced over its planned sends, are drawn from send to arrival.</p>\n");
+            key(h, f.key());
+            h.append("</figcaption>\n</figure>\n");
+        }
+        h.append("</section>\n");
     }
 
     private static void linkSections(StringBuilder h, Mission s, PlanResult r,

@@ -143,6 +143,14 @@ public final class Readable {
         return String.format(Locale.ROOT, "%.7g", u.of(hz)) + " " + u.symbol();
     }
 
+    /** "lark", "lark and wren", "lark, wren and tern". */
+    public static String names(List<String> names) {
+        if (names.size() <= 1) {
+            return String.join("", names);
+        }
+        return String.join(", ", names.subList(0, names.size() - 1)) + " and " + names.get(names.size() - 1);
+    }
+
     /** A plain number to 6 significant digits. */
     public static String number(double v) {
         if (Double.isNaN(v)) {

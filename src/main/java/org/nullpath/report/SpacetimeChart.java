@@ -36,10 +36,13 @@ final class SpacetimeChart {
     static final int MIN_WIDTH = 480;
     static final int HEIGHT = 660;
 
-    private static final Color[] CRAFT = {Palette.BLUE, Palette.VERMILLION, Palette.GREEN, Palette.PURPLE};
+    /**
+     * Colours of craft and of links' signals, from one sequence so that no craft and no link share a colour
+     * (after six, a link's dash tells it apart); stations are black and grey, drawn thinner.
+     */
+    private static final Color[] COLOURS = {Palette.BLUE, Palette.VERMILLION, Palette.GREEN, Palette.PURPLE,
+        Palette.ORANGE, Palette.SKY_BLUE};
     private static final Color[] STATIONS = {Palette.BLACK, Palette.MUTED};
-    private static final Color[] RAYS = {Palette.ORANGE, Palette.SKY_BLUE, Palette.GREEN, Palette.PURPLE,
-        Palette.VERMILLION, Palette.BLUE};
     private static final Charts.Dash[] DASHES = {Charts.Dash.SOLID, Charts.Dash.DASHED, Charts.Dash.LONG_DASH};
     private static final Font LABEL = new Font(Font.SANS_SERIF, Font.BOLD, 12);
 
@@ -50,15 +53,21 @@ final class SpacetimeChart {
      * The diagram's ranges and the drawing's width: between {@link #MIN_WIDTH} and {@link #WIDTH}, as near
      * the content's own proportions as that allows, so that little of the drawing is left empty.
      */
-    static DiagramTraces.Diagram layout(Mission s, List<SampledSeries.LinkSeries> series) {
+    static DiagramTraces.Diagram layout(DiagramTraces.FlightLine line, boolean firstLine,
+                                        List<SampledSeries.LinkSeries> series) {
         Rectangle2D a = dataArea(WIDTH);
         double overhead = WIDTH - a.getWidth();
         double height = a.getHeight();
-        DiagramTraces.Diagram first = DiagramTraces.of(s, series, (MIN_WIDTH - overhead) / height,
+        DiagramTraces.Diagram first = DiagramTraces.of(line, firstLine, series, (MIN_WIDTH - overhead) / height,
                 (WIDTH - overhead) / height);
         int width = (int) Math.round(overhead + first.widthOverHeight() * height);
         // the exact proportions of that whole-pixel width
-        return DiagramTraces.of(s, series, (width - overhead) / height);
+        return DiagramTraces.of(line, firstLine, series, (width - overhead) / height);
+    }
+
+    /** The diagram of the mission's first flight line ({@link #layout(DiagramTraces.FlightLine, boolean, List)}). */
+    static DiagramTraces.Diagram layout(Mission s, List<SampledSeries.LinkSeries> series) {
+        return layout(DiagramTraces.flightLines(s).get(0), true, series);
     }
 
     /** The drawing's width in px for a diagram laid out by {@link #layout}. */
@@ -88,15 +97,20 @@ final class SpacetimeChart {
         return plot;
     }
 
-    /** Colour of each body, stations and craft each in their own sequence. */
+    /** Colour of each body: stations in their own sequence, craft first in the shared one. */
     static Map<String, Color> bodyColours(DiagramTraces.Diagram d) {
         Map<String, Color> out = new LinkedHashMap<>();
         int stations = 0;
         int craft = 0;
         for (DiagramTraces.Trace t : d.bodies()) {
-            out.put(t.body(), t.craft() ? CRAFT[craft++ % CRAFT.length] : STATIONS[stations++ % STATIONS.length]);
+            out.put(t.body(), t.craft() ? COLOURS[craft++ % COLOURS.length] : STATIONS[stations++ % STATIONS.length]);
         }
         return out;
+    }
+
+    /** How many craft the diagram draws (they take the first colours of the shared sequence). */
+    private static int craftCount(DiagramTraces.Diagram d) {
+        return (int) d.bodies().stream().filter(DiagramTraces.Trace::craft).count();
     }
 
     static Charts.Figure of(DiagramTraces.Diagram d, List<String> links, Map<String, String> linkEnds, String id,
@@ -104,7 +118,7 @@ final class SpacetimeChart {
         Scales.Unit tu = Scales.time(Math.max(Math.abs(d.firstTime()), Math.abs(d.lastTime())));
         Scales.Unit su = Scales.length(Math.max(d.lastAlong() - d.firstAlong(),
                 Math.max(Math.abs(d.firstAlong()), Math.abs(d.lastAlong()))));
-        String axisName = d.axisCraft() == null ? "the x axis" : d.axisCraft() + "'s heading";
+        String axisName = d.axisCraft().isEmpty() ? "the x axis" : Readable.names(d.axisCraft()) + "'s heading";
         double x0 = su.of(d.firstAlong());
         double x1 = su.of(d.lastAlong());
         double y0 = tu.of(d.firstTime());
@@ -121,10 +135,12 @@ final class SpacetimeChart {
         XYLineAndShapeRenderer rayRenderer = new XYLineAndShapeRenderer(true, false);
         rayRenderer.setDrawSeriesLineAsPath(true);
         int series = 0;
-        for (int li = 0; li < links.size(); li++) {
-            String link = links.get(li);
-            Color c = RAYS[li % RAYS.length];
-            Charts.Dash dash = DASHES[(li / RAYS.length) % DASHES.length];
+        List<String> drawn = links.stream().filter(l -> d.rays().stream().anyMatch(r -> r.link().equals(l))).toList();
+        for (int li = 0; li < drawn.size(); li++) {
+            String link = drawn.get(li);
+            int k = craftCount(d) + li;
+            Color c = COLOURS[k % COLOURS.length];
+            Charts.Dash dash = DASHES[(k / COLOURS.length + 1) % DASHES.length];
             XYSeries arrived = new XYSeries("rays " + link, false, true);
             XYSeries lost = new XYSeries("lost " + link, false, true);
             for (DiagramTraces.Ray r : d.rays()) {

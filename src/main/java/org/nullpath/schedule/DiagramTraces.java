@@ -48,9 +48,67 @@ public final class DiagramTraces {
     }
 
     /**
+     * One flight line of the drawing: its axis, the craft that fly along it (either way), and the bodies
+     * drawn on it (every station, projected onto the line, and those craft).
+     *
+     * @param axis   unit vector of the line's direction
+     * @param craft  the craft flying along it, in file order (empty when the mission has no craft)
+     * @param bodies every station, then those craft
+     */
+    public record FlightLine(Vec3 axis, List<Craft> craft, List<Node> bodies) {
+        public FlightLine {
+            craft = List.copyOf(craft);
+            bodies = List.copyOf(bodies);
+        }
+
+        /** Whether {@code link} is drawn on this line: one of its ends flies along it (station links on the first). */
+        boolean draws(SampledSeries.LinkSeries link, boolean firstLine) {
+            boolean fromHere = craft.contains(link.route().from());
+            boolean toHere = craft.contains(link.route().to());
+            return fromHere || toHere || firstLine && !link.route().from().isCraft() && !link.route().to().isCraft();
+        }
+    }
+
+    /** Directions closer than this (the size of their cross product) count as one flight line. */
+    static final double SAME_LINE = 1e-9;
+
+    /**
+     * The flight lines to draw, one panel each: craft whose headings are parallel or opposite share a line
+     * (lines offset sideways are drawn together: the projection along the axis is the same), in the order
+     * their first craft appears; one line along the x axis when there is no craft.
+     */
+    public static List<FlightLine> flightLines(Mission s) {
+        List<Vec3> axes = new ArrayList<>();
+        List<List<Craft>> groups = new ArrayList<>();
+        for (Craft c : s.craft()) {
+            Vec3 n = c.worldline().heading();
+            int g = 0;
+            while (g < axes.size() && axes.get(g).cross(n).norm() >= SAME_LINE) {
+                g++;
+            }
+            if (g == axes.size()) {
+                axes.add(n);
+                groups.add(new ArrayList<>());
+            }
+            groups.get(g).add(c);
+        }
+        if (axes.isEmpty()) {
+            return List.of(new FlightLine(new Vec3(1, 0, 0), List.of(), List.copyOf(s.stations())));
+        }
+        List<FlightLine> out = new ArrayList<>();
+        for (int g = 0; g < axes.size(); g++) {
+            List<Node> bodies = new ArrayList<>(s.stations());
+            bodies.addAll(groups.get(g));
+            out.add(new FlightLine(axes.get(g), groups.get(g), bodies));
+        }
+        return out;
+    }
+
+    /**
      * The whole diagram.
      *
-     * @param axisCraft  the craft whose heading is the axis; null when there is no craft (the x axis is used)
+     * @param axisCraft  the craft whose heading is the axis, in file order; empty when there is no craft (the x
+     *                   axis is used)
      * @param axis       unit vector of the axis (x, y, z)
      * @param firstTime  bottom of the time range, s
      * @param lastTime   top of the time range, s
@@ -62,7 +120,7 @@ public final class DiagramTraces {
      * @param legMarks   leg boundaries of every craft, in order
      * @param widthOverHeight the drawing's width over its height that the ranges were chosen for
      */
-    public record Diagram(String axisCraft, double[] axis, double firstTime, double lastTime, double firstAlong,
+    public record Diagram(List<String> axisCraft, double[] axis, double firstTime, double lastTime, double firstAlong,
                           double lastAlong, List<Trace> bodies, List<Ray> rays, List<NullLine> horizons,
                           List<LegMark> legMarks, double widthOverHeight) {
     }
@@ -125,14 +183,16 @@ public final class DiagramTraces {
     }
 
     /**
-     * Builds the diagram for a drawing area of the given width over height.
+     * Builds the diagram of one flight line for a drawing area of the given width over height.
      *
-     * @param s               the scenario
+     * @param line            the flight line ({@link #flightLines})
+     * @param firstLine       whether it is the first (links between stations are drawn there)
      * @param series          the links' sampled series ({@link SampledSeries#of(Mission)})
      * @param widthOverHeight the drawing area's width over its height (both in the same length unit)
      */
-    public static Diagram of(Mission s, List<SampledSeries.LinkSeries> series, double widthOverHeight) {
-        return of(s, series, widthOverHeight, widthOverHeight);
+    public static Diagram of(FlightLine line, boolean firstLine, List<SampledSeries.LinkSeries> series,
+                             double widthOverHeight) {
+        return of(line, firstLine, series, widthOverHeight, widthOverHeight);
     }
 
     /**
@@ -140,20 +200,16 @@ public final class DiagramTraces {
      * the one nearest the content's own proportions (its distance span over its c t span) is taken, and
      * the other range widened to match. {@link Diagram#widthOverHeight()} says which was taken.
      */
-    public static Diagram of(Mission s, List<SampledSeries.LinkSeries> series, double minWidthOverHeight,
-                             double maxWidthOverHeight) {
+    public static Diagram of(FlightLine line, boolean firstLine, List<SampledSeries.LinkSeries> allSeries,
+                             double minWidthOverHeight, double maxWidthOverHeight) {
         if (!(minWidthOverHeight > 0) || !(maxWidthOverHeight >= minWidthOverHeight)
                 || !Double.isFinite(maxWidthOverHeight)) {
             throw new IllegalArgumentException("the drawing's width over height must be positive, got "
                     + minWidthOverHeight + " to " + maxWidthOverHeight);
         }
-        String axisCraft = null;
-        Vec3 axis = new Vec3(1, 0, 0);
-        if (!s.craft().isEmpty()) {
-            Craft c = s.craft().get(0);
-            axisCraft = c.name();
-            axis = c.worldline().atTime(0).direction().unit();
-        }
+        List<String> axisCraft = line.craft().stream().map(Craft::name).toList();
+        Vec3 axis = line.craft().isEmpty() ? line.axis() : line.craft().get(0).worldline().atTime(0).direction().unit();
+        List<SampledSeries.LinkSeries> series = allSeries.stream().filter(ls -> line.draws(ls, firstLine)).toList();
 
         // rays and the extent of planned activity
         List<Ray> rays = new ArrayList<>();
@@ -195,7 +251,7 @@ public final class DiagramTraces {
             }
         }
         List<LegMark> marks = new ArrayList<>();
-        for (Craft n : s.craft()) {
+        for (Craft n : line.craft()) {
             StraightLineCraft craft = n.worldline();
             List<LegSpan> legs = craft.legs();
             for (LegSpan span : legs) {
@@ -223,7 +279,7 @@ public final class DiagramTraces {
         first -= 0.5 * PAD * span;
 
         // the distance range from the bodies over the time range, the drawn rays and the leg marks
-        List<Trace> traces = traces(s, axis, first, last, marks);
+        List<Trace> traces = traces(line, axis, first, last, marks);
         double lo = Double.POSITIVE_INFINITY;
         double hi = Double.NEGATIVE_INFINITY;
         for (Trace t : traces) {
@@ -256,7 +312,7 @@ public final class DiagramTraces {
             hi = mid + half;
         } else {
             last = first + alongSpan / widthOverHeight / Constants.C;
-            traces = traces(s, axis, first, last, marks);
+            traces = traces(line, axis, first, last, marks);
         }
 
         for (double[] q : lostSends) {
@@ -299,9 +355,9 @@ public final class DiagramTraces {
         return spec.label();
     }
 
-    private static List<Trace> traces(Mission s, Vec3 axis, double first, double last, List<LegMark> marks) {
+    private static List<Trace> traces(FlightLine line, Vec3 axis, double first, double last, List<LegMark> marks) {
         List<Trace> out = new ArrayList<>();
-        for (Node n : s.nodes().values()) {
+        for (Node n : line.bodies()) {
             List<Double> times = new ArrayList<>();
             for (int i = 0; i <= TRACE_POINTS - 1; i++) {
                 times.add(first + (last - first) * i / (TRACE_POINTS - 1));
