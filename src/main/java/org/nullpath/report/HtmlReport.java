@@ -140,7 +140,7 @@ public final class HtmlReport {
                     .append(" <span class=\"ends\">").append(Html.escape(ls.from())).append(" \u2192 ")
                     .append(Html.escape(ls.to())).append("</span></h3>\n");
             facts(h, ls, t);
-            for (LinkCharts.Plot p : LinkCharts.of(ls)) {
+            for (LinkCharts.Plot p : LinkCharts.of(ls, t.maxLightTime())) {
                 h.append("<figure id=\"fig-").append(id).append('-').append(p.name()).append("\">\n<h4>")
                         .append(Html.escape(p.heading())).append("</h4>\n").append(p.figure().svg())
                         .append("\n<figcaption><p>").append(Html.escape(p.caption())).append("</p>\n");
@@ -156,7 +156,9 @@ public final class HtmlReport {
         h.append("<table class=\"facts\">\n<tbody>\n");
         row(h, "messages", t.messages() + " planned, " + t.delivered() + " delivered, " + t.never() + " never arrive");
         if (t.delivered() > 0) {
-            row(h, "light time", Readable.time(t.minLightTime()) + " to " + Readable.time(t.maxLightTime()));
+            row(h, "light time", Readable.time(t.minLightTime()) + " to " + Readable.time(t.maxLightTime())
+                    + " (planned messages" + (ls.horizonCutsRange() ? "; the chart samples on towards the horizon)"
+                    : ")"));
             row(h, "Doppler factor", shown(t.minDoppler()) + " to " + shown(t.maxDoppler()));
         }
         row(h, "horizon", ls.horizon().hasHorizon()

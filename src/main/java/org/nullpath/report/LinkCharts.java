@@ -34,6 +34,15 @@ final class LinkCharts {
     }
 
     static List<Plot> of(SampledSeries.LinkSeries ls) {
+        return of(ls, Double.NaN);
+    }
+
+    /**
+     * The charts of one link; {@code longestPlannedLightTime} (NaN when unknown) is marked on the light-time
+     * chart when the samples run on towards the horizon past the planned messages, so that the chart and the
+     * link's facts (which count planned messages only) can be read together.
+     */
+    static List<Plot> of(SampledSeries.LinkSeries ls, double longestPlannedLightTime) {
         List<Plot> out = new ArrayList<>();
         List<SampledSeries.Sample> samples = ls.samples();
         if (samples.isEmpty()) {
@@ -69,13 +78,25 @@ final class LinkCharts {
         // light time
         double[] light = column(samples, SampledSeries.Sample::lightTime);
         Scales.Unit lu = Scales.time(max(light));
+        List<Charts.Level> planned = new ArrayList<>();
+        List<Charts.Key> plannedKey = new ArrayList<>();
+        String plannedNote = "";
+        if (ls.horizonCutsRange() && longestPlannedLightTime < max(light)) {
+            planned.add(new Charts.Level(lu.of(longestPlannedLightTime), "longest planned message",
+                    Palette.MUTED, Charts.Dash.DASHED));
+            plannedKey.add(Charts.Key.line("longest light time of a planned message ("
+                    + Readable.time(longestPlannedLightTime) + "): the samples go on towards the horizon",
+                    Palette.MUTED, Charts.Dash.DASHED));
+            plannedNote = " The samples run on towards the horizon, past the last planned message, so the curve"
+                    + " climbs beyond the link's longest planned light time (the dashed level).";
+        }
         out.add(plot(link, "light-time", "Light time",
                 "How long each sampled signal is in flight in the mission frame (arrival minus sending, in mission"
-                        + " time).",
+                        + " time)." + plannedNote,
                 new Charts.YAxis("light time (" + lu.symbol() + ")", false, true),
                 List.of(series("light time", Palette.BLUE, Charts.Dash.SOLID, x1, x2, scaled(light, lu))),
-                horizonMark, null, List.of(), with(List.of(Charts.Key.line("light time", Palette.BLUE,
-                        Charts.Dash.SOLID)), horizonKey), x1Label, x2Label));
+                horizonMark, null, planned, with(with(List.of(Charts.Key.line("light time", Palette.BLUE,
+                        Charts.Dash.SOLID)), horizonKey), plannedKey), x1Label, x2Label));
 
         // Doppler factor, or the frequency offset when the shift is small
         double[] doppler = column(samples, SampledSeries.Sample::doppler);
