@@ -1,5 +1,6 @@
 package org.nullpath.cli;
 
+import java.util.Locale;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
@@ -23,7 +24,7 @@ final class CheckCommand implements Callable<Integer> {
             return Main.INPUT_ERROR;
         }
         Mission s = loaded.get();
-        input.out().printf("%s: usable (%s; %s)%n", input.scenario, Readable.bodies(s),
+        input.out().printf(Locale.ROOT, "%s: usable (%s; %s)%n", input.scenario, Readable.bodies(s),
                 Readable.planned(s, ""));
         return 0;
     }

@@ -1,5 +1,6 @@
 package org.nullpath.cli;
 
+import java.util.Locale;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 
@@ -9,6 +10,7 @@ import org.nullpath.report.PlanResult;
 import org.nullpath.report.Readable;
 import org.nullpath.mission.Craft;
 import org.nullpath.mission.Link;
+import org.nullpath.mission.Printable;
 import org.nullpath.mission.Mission;
 import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.BudgetTally;
@@ -25,26 +27,26 @@ final class TerminalSummary {
     static void print(PrintWriter out, Mission s, PlanResult r, Path dir, OutputFolder.Commit commit) {
         long messages = r.links().stream().mapToLong(LinkTally::messages).sum();
         long never = r.links().stream().mapToLong(LinkTally::never).sum();
-        out.printf("%s%n", s.title());
-        out.printf("  %s; %s%n", Readable.bodies(s), Readable.planned(s, " (" + (messages - never) + " delivered, " + never
+        out.printf(Locale.ROOT, "%s%n", Printable.of(s.title()));
+        out.printf(Locale.ROOT, "  %s; %s%n", Readable.bodies(s), Readable.planned(s, " (" + (messages - never) + " delivered, " + never
                 + " never arrive)"));
         for (LinkTally t : r.links()) {
             Link l = t.link();
-            out.printf("  link %-12s %s -> %s: %d sent, %d arrive; light time %s to %s; Doppler %s to %s%n",
+            out.printf(Locale.ROOT, "  link %-12s %s -> %s: %d sent, %d arrive; light time %s to %s; Doppler %s to %s%n",
                     l.name(), l.from().name(), l.to().name(), t.messages(), t.delivered(), Readable.time(t.minLightTime()),
                     Readable.time(t.maxLightTime()), Readable.number(t.minDoppler()), Readable.number(t.maxDoppler()));
         }
         for (Craft c : s.craft()) {
-            out.printf("  craft %-11s %s%n", c.name(), Readable.flightEnd(c, s.epoch()));
+            out.printf(Locale.ROOT, "  craft %-11s %s%n", c.name(), Readable.flightEnd(c, s.epoch()));
         }
         for (LinkTally t : r.links()) {
             if (t.illConditioned() > 0) {
-                out.printf("  NOTE %s: %d light times are ill-conditioned (known to worse than 1e-12 relative; see the"
+                out.printf(Locale.ROOT, "  NOTE %s: %d light times are ill-conditioned (known to worse than 1e-12 relative; see the"
                         + " light_time_condition column)%n", t.link().name(), t.illConditioned());
             }
         }
         for (CutoffRow c : r.cutoffs()) {
-            out.printf("  cut-off %-12s on %s: %s%n", c.name(), c.link(), !c.reachable() ? "unreachable"
+            out.printf(Locale.ROOT, "  cut-off %-12s on %s: %s%n", c.name(), c.link(), !c.reachable() ? "unreachable"
                     : "send by " + Readable.notAfter(c.latestSendClock()) + " on the sender's clock"
                     + s.epoch().map(e -> " (" + Readable.instantNotAfter(e, c.latestSendTime()) + ")").orElse("")
                     + (c.beforeStart() ? " (before the mission starts: already too late for a plan made at mission"
@@ -52,13 +54,13 @@ final class TerminalSummary {
         }
         for (HorizonRow h : r.horizons()) {
             if (h.hasHorizon()) {
-                out.printf("  horizon on %-10s send before %s on the sender's clock%s, or the message never"
+                out.printf(Locale.ROOT, "  horizon on %-10s send before %s on the sender's clock%s, or the message never"
                         + " arrives%n", h.link(), Readable.notAfter(h.lastSendClock()),
                         s.epoch().map(e -> " (" + Readable.instantNotAfter(e, h.lastSendTime()) + ")").orElse(""));
             }
         }
         for (ExchangeTally e : r.exchanges()) {
-            out.printf("  exchange %-10s %d of %d round trips complete%s%n", e.name(), e.complete(), e.roundTrips(),
+            out.printf(Locale.ROOT, "  exchange %-10s %d of %d round trips complete%s%n", e.name(), e.complete(), e.roundTrips(),
                     e.complete() == 0 ? "" : "; round trip " + Readable.time(e.minRoundTrip()) + " to "
                     + Readable.time(e.maxRoundTrip()) + (Double.isNaN(e.medianRoundTrip()) ? ""
                     : ", median " + Readable.time(e.medianRoundTrip())) + " on the querier's clock");
@@ -70,7 +72,7 @@ final class TerminalSummary {
                 continue;
             }
             BudgetTally.Figures b = t.budget().get();
-            out.printf("  budget %-12s margin %s to %s dB; %d of %d delivered close (%d outside the tuning range, %d over"
+            out.printf(Locale.ROOT, "  budget %-12s margin %s to %s dB; %d of %d delivered close (%d outside the tuning range, %d over"
                             + " the Doppler-rate limit); received %s to %s; Doppler rate up to %s Hz/s; rate that closes"
                             + " for all: %s bit/s%n",
                     t.link().name(), Readable.number(b.worstMarginDb()), Readable.number(b.bestMarginDb()), b.closing(),
@@ -78,7 +80,7 @@ final class TerminalSummary {
                     Readable.frequency(b.maxRxFrequencyHz()), Readable.number(b.maxAbsDopplerRateHzPerS()),
                     Readable.number(b.minMaxDataRateBps()));
             if (b.extremeShift()) {
-                out.printf("  NOTE %s: the received frequency leaves [carrier/2, 2 x carrier] (%s to %s):"
+                out.printf(Locale.ROOT, "  NOTE %s: the received frequency leaves [carrier/2, 2 x carrier] (%s to %s):"
                         + " another band entirely%n", t.link().name(), Readable.frequency(b.minRxFrequencyHz()),
                         Readable.frequency(b.maxRxFrequencyHz()));
             }
@@ -88,22 +90,22 @@ final class TerminalSummary {
             }
         }
         for (WindowRow w : r.windows()) {
-            out.printf("  window on %-10s sends from %s to %s (sender's clock), closed by %s%n", w.link(),
+            out.printf(Locale.ROOT, "  window on %-10s sends from %s to %s (sender's clock), closed by %s%n", w.link(),
                     Readable.notBefore(w.opensClock()), Readable.notAfter(w.closesClock()), w.closedBy());
         }
         if (worstLink == null) {
-            out.printf("  worst margin: no link budget terms in this scenario%n");
+            out.printf(Locale.ROOT, "  worst margin: no link budget terms in this scenario%n");
         } else {
-            out.printf("  worst margin: %s dB on %s%n", Readable.number(worst), worstLink);
+            out.printf(Locale.ROOT, "  worst margin: %s dB on %s%n", Readable.number(worst), worstLink);
         }
-        out.printf("  written to %s%s%n", dir, commit.replaced().isEmpty() ? ""
+        out.printf(Locale.ROOT, "  written to %s%s%n", dir, commit.replaced().isEmpty() ? ""
                 : " (replacing " + Readable.count(commit.replaced().size(), "file") + " already there)");
         if (!commit.removed().isEmpty()) {
-            out.printf("  removed what an earlier plan wrote there and this one does not: %s%n",
+            out.printf(Locale.ROOT, "  removed what an earlier plan wrote there and this one does not: %s%n",
                     String.join(", ", commit.removed()));
         }
         if (!commit.kept().isEmpty()) {
-            out.printf("  left alone (an earlier plan wrote them, but they have changed since): %s%n",
+            out.printf(Locale.ROOT, "  left alone (an earlier plan wrote them, but they have changed since): %s%n",
                     String.join(", ", commit.kept()));
         }
     }

@@ -35,6 +35,14 @@ public final class Cells {
         return epoch.plusSeconds((long) whole).plusNanos(nanos).toString();
     }
 
+    /** Text for a CSV cell, behind an apostrophe when a spreadsheet would read it as a formula. */
+    public static String text(String s) {
+        if (!s.isEmpty() && "=+-@\t\r".indexOf(s.charAt(0)) >= 0) {
+            return "'" + s;
+        }
+        return s;
+    }
+
     public static String bool(boolean b) {
         return b ? "true" : "false";
     }

@@ -55,7 +55,11 @@ public record Column<R>(String name, String unit, String meaning, Function<R, Ob
         });
     }
 
-    /** The CSV cell: full-precision numbers, {@code true}/{@code false}, text; empty where there is no value. */
+    /**
+     * The CSV cell: full-precision numbers, {@code true}/{@code false}, text; empty where there is no value.
+     * A text that a spreadsheet would take for a formula (starting with =, +, -, @, a tab or a carriage
+     * return) is written behind an apostrophe, the usual guard; nullpath's own names never start so.
+     */
     public String cell(R row) {
         Object v = value.apply(row);
         if (v instanceof Double d) {
@@ -63,6 +67,9 @@ public record Column<R>(String name, String unit, String meaning, Function<R, Ob
         }
         if (v instanceof Boolean b) {
             return Cells.bool(b);
+        }
+        if (v instanceof String s) {
+            return Cells.text(s);
         }
         return v == null ? "" : v.toString();
     }

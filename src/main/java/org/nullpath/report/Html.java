@@ -16,7 +16,11 @@ final class Html {
                 case '>' -> sb.append("&gt;");
                 case '"' -> sb.append("&quot;");
                 case '\'' -> sb.append("&#39;");
-                default -> sb.append(c);
+                // line ends and tabs kept (the scenario echo is preformatted); other control and format
+                // characters shown as code points rather than passed to the browser
+                default -> sb.append(c != '\n' && c != '\t' && (Character.isISOControl(c)
+                        || Character.getType(c) == Character.FORMAT) ? String.format(java.util.Locale.ROOT, "\\u%04X",
+                        (int) c) : String.valueOf(c));
             }
         }
         return sb.toString();

@@ -138,6 +138,12 @@ final class PlanReader {
             f.problemAt("name", "a cut-off name must not be empty");
             name = null;
         }
+        // one rule for every name: cut-off names reach terminals and spreadsheet cells
+        String bad = name == null ? null : Names.problem(name, "a cut-off name");
+        if (bad != null) {
+            f.problemAt("name", bad);
+            name = null;
+        }
         if (name != null && !unique(f, name, names, "cut-off", false)) {
             name = null;
         }

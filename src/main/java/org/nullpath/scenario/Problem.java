@@ -1,5 +1,7 @@
 package org.nullpath.scenario;
 
+import org.nullpath.mission.Printable;
+
 /**
  * One thing wrong with a scenario, located in its file.
  *
@@ -10,7 +12,10 @@ package org.nullpath.scenario;
  * @param message what is wrong
  */
 public record Problem(String file, int line, int column, String key, String message) {
-    /** "file:line:column: key: message". */
+    /**
+     * "file:line:column: key: message", on one line: control characters of the file's text that a message
+     * quotes are escaped ({@link Printable}).
+     */
     public String render() {
         StringBuilder b = new StringBuilder(file);
         if (line > 0) {
@@ -20,6 +25,6 @@ public record Problem(String file, int line, int column, String key, String mess
         if (!key.isEmpty()) {
             b.append(key).append(": ");
         }
-        return b.append(message).toString();
+        return Printable.of(b.append(message).toString());
     }
 }
