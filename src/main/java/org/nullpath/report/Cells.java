@@ -24,7 +24,7 @@ public final class Cells {
 
     /**
      * The calendar instant {@code seconds} after {@code epoch} (ISO-8601, to the nanosecond), or empty
-     * for NaN.
+     * for NaN and for an instant beyond the calendar's years (about a billion years either way).
      */
     public static String utc(java.time.Instant epoch, double seconds) {
         if (Double.isNaN(seconds)) {
@@ -32,7 +32,14 @@ public final class Cells {
         }
         double whole = Math.floor(seconds);
         long nanos = Math.round((seconds - whole) * 1e9);
-        return epoch.plusSeconds((long) whole).plusNanos(nanos).toString();
+        if (!(Math.abs(whole) < 3.2e16)) {
+            return ""; // beyond the calendar's years (about +-1e9 yr): no calendar instant
+        }
+        try {
+            return epoch.plusSeconds((long) whole).plusNanos(nanos).toString();
+        } catch (java.time.DateTimeException | ArithmeticException e) {
+            return ""; // beyond the calendar's years
+        }
     }
 
     /** Text for a CSV cell, behind an apostrophe when a spreadsheet would read it as a formula. */
