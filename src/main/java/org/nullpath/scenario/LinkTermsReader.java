@@ -61,7 +61,8 @@ final class LinkTermsReader {
             Fields tx = Fields.of(link.get("transmitter"), link.path("transmitter"), values, "a transmitter",
                     TRANSMITTER_KEYS);
             if (tx.ok()) {
-                txPower = positive(tx, "power", tx.quantity("power", Dimension.POWER));
+                txPower = atMost(tx, "power", positive(tx, "power", tx.quantity("power", Dimension.POWER)),
+                        MAX_POWER_W, "W");
                 txAntenna = tx.require("antenna") ? antenna(tx.get("antenna"), tx.path("antenna"), values) : null;
                 txLoss = losses(tx);
             }
@@ -139,7 +140,7 @@ final class LinkTermsReader {
                 ok = false;
             }
             detection = LinkTerms.Detection.COHERENT;
-            ebn0 = link.quantity(reqKey, Dimension.RATIO);
+            ebn0 = within(link, reqKey, link.quantity(reqKey, Dimension.RATIO), MAX_DB, "dB");
             ok &= !Double.isNaN(ebn0);
         } else {
             if (detection == LinkTerms.Detection.COHERENT) {
@@ -182,7 +183,7 @@ final class LinkTermsReader {
             return null;
         }
         if (a.has("gain")) {
-            double g = a.quantity("gain", Dimension.GAIN);
+            double g = within(a, "gain", a.quantity("gain", Dimension.GAIN), MAX_DB, "dBi");
             return Double.isNaN(g) ? null : new Antenna.FixedGain(g);
         }
         if (!a.has("diameter") && !a.has("efficiency")) {
@@ -201,7 +202,7 @@ final class LinkTermsReader {
 
     /** Losses in dB, default 0, not negative; NaN on a problem. */
     private static double losses(Fields f) {
-        double l = f.quantity("losses", Dimension.RATIO, 0.0);
+        double l = within(f, "losses", f.quantity("losses", Dimension.RATIO, 0.0), MAX_DB, "dB");
         if (l < 0) {
             f.problemAt("losses", "losses must not be negative (a loss of 1 dB is written '1 dB'), got "
                     + Values.format(l) + " dB");
@@ -235,6 +236,36 @@ final class LinkTermsReader {
             return null;
         }
         return new double[] {lo, hi};
+    }
+
+    /**
+     * Largest size of a gain, loss or requirement in dB: 300 dB (a factor 1e30), far beyond any real antenna
+     * (large radio dishes give about 80 dBi, optical telescopes about 140 dBi), so that a budget summed in dB
+     * and turned into rates stays within double precision.
+     */
+    static final double MAX_DB = 300;
+
+    /** Largest transmitter power: 1e30 W (300 dBW). */
+    static final double MAX_POWER_W = 1e30;
+
+    /** {@code x} when its size is at most {@code max}; otherwise a problem at {@code key} and NaN (NaN stays NaN). */
+    private static double within(Fields f, String key, double x, double max, String unit) {
+        if (Math.abs(x) > max) {
+            f.problemAt(key, key + " of " + Values.format(x) + " " + unit + " is beyond what nullpath budgets (at most "
+                    + Values.format(max) + " " + unit + " either way)");
+            return Double.NaN;
+        }
+        return x;
+    }
+
+    /** {@code x} when at most {@code max}; otherwise a problem at {@code key} and NaN (NaN stays NaN). */
+    private static double atMost(Fields f, String key, double x, double max, String unit) {
+        if (x > max) {
+            f.problemAt(key, key + " of " + Values.format(x) + " " + unit + " is beyond what nullpath budgets (at most "
+                    + Values.format(max) + " " + unit + ")");
+            return Double.NaN;
+        }
+        return x;
     }
 
     /** {@code x} when positive; otherwise adds a problem at {@code key} and returns NaN (NaN stays NaN). */
