@@ -55,7 +55,8 @@ final class PlanCommand implements Callable<Integer> {
             return Main.FAILURE;
         } catch (RangeException e) {
             err.println(input.scenario + ": " + e.key() + ": " + e.getMessage()
-                    + " (shorten the open-ended burn's use: plan sends, deadlines and scans before it gets that far)");
+                    + " (a state beyond what double precision holds: plan sends, deadlines and scans nearer the"
+                    + " mission's start)");
             return Main.INPUT_ERROR;
         } catch (RuntimeException e) {
             err.println("nullpath: plan failed: " + e.getMessage());

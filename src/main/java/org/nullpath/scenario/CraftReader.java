@@ -36,7 +36,7 @@ final class CraftReader {
         if (!f.ok()) {
             return null;
         }
-        Vec3 start = f.vector("start-position", Dimension.LENGTH, Vec3.ZERO);
+        Vec3 start = f.position("start-position");
         Vec3 heading = null;
         if (f.require("heading", "the direction of the flight line, e.g. [1, 0, 0]")) {
             heading = values.vector(f.get("heading"), f.path("heading"), Dimension.DIMENSIONLESS);

@@ -189,6 +189,23 @@ final class Fields {
         return n == null ? absent : values.vector(n, path(key), d);
     }
 
+    /**
+     * Farthest a position may lie from the origin, per axis: 1e30 m (about 1e14 ly, far beyond the observable
+     * universe), so that squared distances in the light-cone solve stay within double precision.
+     */
+    static final double MAX_POSITION_M = 1e30;
+
+    /** An optional position; null when present but wrong or farther than {@link #MAX_POSITION_M} (problem added). */
+    Vec3 position(String key) {
+        Vec3 p = vector(key, Dimension.LENGTH, Vec3.ZERO);
+        if (p != null && !(Math.max(Math.abs(p.x()), Math.max(Math.abs(p.y()), Math.abs(p.z()))) <= MAX_POSITION_M)) {
+            problemAt(key, "the position lies farther than nullpath computes: each coordinate at most "
+                    + Values.format(MAX_POSITION_M) + " m (about 1e14 ly)");
+            return null;
+        }
+        return p;
+    }
+
     /** Required text; null when absent or wrong. */
     String text(String key, String what) {
         if (!require(key)) {

@@ -179,7 +179,7 @@ final class MissionReader implements References {
         if (!f.ok()) {
             return;
         }
-        Vec3 position = f.vector("position", Dimension.LENGTH, Vec3.ZERO);
+        Vec3 position = f.position("position");
         Vec3 velocity = f.vector("velocity", Dimension.SPEED, Vec3.ZERO);
         double offset = f.quantity("clock-offset", Dimension.TIME, 0.0);
         if (velocity != null && !(velocity.norm() < Constants.C)) {
