@@ -212,6 +212,9 @@ final class YamlTree {
                 String what = e.getCause() != null ? e.getCause().getMessage() : e.getOriginalMessage();
                 if (what != null && what.contains("exceeds the limit")) {
                     what = "the document is longer than " + MAX_CHARS + " characters (4 MiB)";
+                } else if (what != null && what.startsWith("Expected a field name")) {
+                    // the parser's own words name its internal event classes
+                    what = "a mapping key must be a plain name, not a list or a mapping";
                 }
                 JsonLocation at = e.getLocation();
                 if (at != null && at.getLineNr() > 0) {
@@ -271,7 +274,9 @@ final class YamlTree {
             if (target == null) {
                 problems.add(line, column, path, open.contains(name)
                         ? "alias '*" + name + "' refers to the node that contains it; recursive YAML is not allowed"
-                        : "alias '*" + name + "' refers to no anchor '&" + name + "' given before it");
+                        : "alias '*" + name + "' refers to no mapping or list anchored '&" + name + "' before it"
+                        + " (nullpath takes anchors on mappings and lists, not on single values: write the value"
+                        + " again)");
                 throw new Fatal();
             }
             if (!(target instanceof Scalar)) {

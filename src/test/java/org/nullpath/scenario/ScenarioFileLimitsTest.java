@@ -175,7 +175,7 @@ class ScenarioFileLimitsTest {
     @Test
     void anUndefinedAliasIsRefused() {
         Problem p = onlyProblemOf("stations:\n  home: *nowhere\n");
-        assertProblem(p, 2, 9, "stations.home", "alias '*nowhere' refers to no anchor");
+        assertProblem(p, 2, 9, "stations.home", "alias '*nowhere' refers to no mapping or list anchored");
     }
 
     @Test
