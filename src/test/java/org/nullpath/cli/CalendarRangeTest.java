@@ -9,6 +9,7 @@ import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
@@ -21,16 +22,9 @@ class CalendarRangeTest {
     void aSendBeyondTheCalendarsYearsIsPlannedWithoutACalendarInstant() throws Exception {
         Path file = tmp.resolve("far.yaml");
         // two invented stations 1 light-second apart; java.time's years end at 1e9 (Instant.MAX)
-        Files.writeString(file, """
-                epoch: 2070-01-01T00:00:00Z
-                stations:
-                  near: {}
-                  far: {position: [299792458 m, 0 m, 0 m]}
-                links:
-                  out: {from: near, to: far}
-                messages:
-                  - {link: out, at: [1 d, 2e9 yr]}
-                """);
+        Files.writeString(file, ScenarioText.untitled().epoch("2070-01-01T00:00:00Z").station("near", "{}")
+                .station("far", "{position: [299792458 m, 0 m, 0 m]}").link("out", "near", "far")
+                .message("{link: out, at: [1 d, 2e9 yr]}").yaml());
         Path dir = tmp.resolve("out");
         assertEquals(0, Main.run("plan", file.toString(), "--out", dir.toString(), "--no-report"));
         List<CSVRecord> rows;

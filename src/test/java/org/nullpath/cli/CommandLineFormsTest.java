@@ -1,8 +1,8 @@
 package org.nullpath.cli;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
+import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.ScenarioText;
+
 import java.nio.file.Files;
 import java.nio.file.Path;
 
@@ -18,38 +18,15 @@ class CommandLineFormsTest {
     Path tmp;
 
     private static String[] run(String... args) {
-        PrintStream oldOut = System.out;
-        PrintStream oldErr = System.err;
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        ByteArrayOutputStream err = new ByteArrayOutputStream();
-        try {
-            System.setOut(new PrintStream(out, true, StandardCharsets.UTF_8));
-            System.setErr(new PrintStream(err, true, StandardCharsets.UTF_8));
-            int code = Main.run(args);
-            return new String[] {Integer.toString(code), out.toString(StandardCharsets.UTF_8),
-                err.toString(StandardCharsets.UTF_8)};
-        } finally {
-            System.setOut(oldOut);
-            System.setErr(oldErr);
-        }
+        PlanRun.Outcome o = PlanRun.run(args);
+        return new String[] {Integer.toString(o.exitCode()), o.out(), o.err()};
     }
 
     @Test
     void dashOIsTheShortFormOfOut() throws Exception {
         Path file = tmp.resolve("plover.yaml");
-        Files.writeString(file, """
-                stations:
-                  cape: {}
-                craft:
-                  plover:
-                    heading: [1, 0, 0]
-                    legs:
-                      - burn: {acceleration: 1 g0, duration: 1 d}
-                links:
-                  up: {from: cape, to: plover}
-                messages:
-                  - {link: up, at: [0 s, 1 h]}
-                """);
+        Files.writeString(file, ScenarioText.homeAndCraft("plover", "burn: {acceleration: 1 g0, duration: 1 d}")
+                .link("up", "home", "plover").message("{link: up, at: [0 s, 1 h]}").yaml());
         String[] r = run("plan", file.toString(), "-o", tmp.resolve("out").toString(), "--no-report");
         assertEquals("0", r[0], r[2]);
         assertTrue(Files.exists(tmp.resolve("out").resolve("up.csv")));
@@ -58,22 +35,15 @@ class CommandLineFormsTest {
     @Test
     void anOpenEndedLegThatIsNotLastIsReportedBesideTheProblemsOfLaterLegs() throws Exception {
         Path file = tmp.resolve("lark.yaml");
-        Files.writeString(file, """
-                stations:
-                  home: {}
-                craft:
-                  lark:
-                    heading: [1, 0, 0]
-                    legs:
-                      - burn: {acceleration: 1 g0, duration: forever}
-                      - coast: {duration: 1 yr}
-                      - burn: {acceleration: 3 ly, duration: 1 yr}
-                """);
+        ScenarioText lark = ScenarioText.homeAndCraft("lark", "burn: {acceleration: 1 g0, duration: forever}",
+                "coast: {duration: 1 yr}", "burn: {acceleration: 3 ly, duration: 1 yr}");
+        Files.writeString(file, lark.yaml());
         String[] r = run("check", file.toString());
         assertEquals("2", r[0]);
-        assertTrue(r[2].contains(":7:46: craft.lark.legs[0].burn.duration: an open-ended leg (duration: forever) must be"
-                + " the last leg"), r[2]);
-        assertTrue(r[2].contains(":9:30: craft.lark.legs[2].burn.acceleration: expected an acceleration, got a length"),
-                r[2]);
+        // "      - burn: {acceleration: 1 g0, duration: forever}": the value of duration starts at column 46
+        assertTrue(r[2].contains(":" + lark.lineOf("forever") + ":46: craft.lark.legs[0].burn.duration: an open-ended"
+                + " leg (duration: forever) must be the last leg"), r[2]);
+        assertTrue(r[2].contains(":" + lark.lineOf("3 ly") + ":30: craft.lark.legs[2].burn.acceleration: expected an"
+                + " acceleration, got a length"), r[2]);
     }
 }

@@ -1,8 +1,8 @@
 package org.nullpath.cli;
 
-import java.io.ByteArrayOutputStream;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
+import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.ScenarioText;
+
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Locale;
@@ -20,22 +20,10 @@ class HostileTextTest {
     Path tmp;
 
     private static String mission(String title, String cutoffName) {
-        return """
-                title: "%s"
-                stations:
-                  pier: {}
-                craft:
-                  gull:
-                    heading: [1, 0, 0]
-                    legs:
-                      - burn: {acceleration: 1 g0, duration: 10 d}
-                links:
-                  up: {from: pier, to: gull}
-                messages:
-                  - {link: up, at: [0 s, 1 d]}
-                cutoffs:
-                  - {name: "%s", link: up, arrive-by: 5 d}
-                """.formatted(title, cutoffName);
+        return ScenarioText.titled("\"" + title + "\"").station("pier", "{}")
+                .craft("gull", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: 10 d}")
+                .link("up", "pier", "gull").message("{link: up, at: [0 s, 1 d]}")
+                .cutoff("{name: \"" + cutoffName + "\", link: up, arrive-by: 5 d}").yaml();
     }
 
     private String[] run(String yaml, String... extra) throws Exception {
@@ -45,20 +33,8 @@ class HostileTextTest {
         args[0] = extra.length == 0 ? "check" : "plan";
         args[1] = file.toString();
         System.arraycopy(extra, 0, args, 2, extra.length);
-        PrintStream oldOut = System.out;
-        PrintStream oldErr = System.err;
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        ByteArrayOutputStream err = new ByteArrayOutputStream();
-        try {
-            System.setOut(new PrintStream(out, true, StandardCharsets.UTF_8));
-            System.setErr(new PrintStream(err, true, StandardCharsets.UTF_8));
-            int code = Main.run(args);
-            return new String[] {Integer.toString(code), out.toString(StandardCharsets.UTF_8),
-                err.toString(StandardCharsets.UTF_8)};
-        } finally {
-            System.setOut(oldOut);
-            System.setErr(oldErr);
-        }
+        PlanRun.Outcome o = PlanRun.run(args);
+        return new String[] {Integer.toString(o.exitCode()), o.out(), o.err()};
     }
 
     @Test

@@ -1,9 +1,9 @@
 package org.nullpath.cli;
 
-import java.io.ByteArrayOutputStream;
+import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.ScenarioText;
+
 import java.io.IOException;
-import java.io.PrintStream;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -26,42 +26,25 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  */
 class MutatedScenariosFuzzTest {
     /** An invented mission touching every section. */
-    private static final String BASE = """
-            title: Fuzz base
-            epoch: 2070-01-01T00:00:00Z
-            stations:
-              pier: {position: [0 ly, 0 ly, 0 ly]}
-              buoy: {position: [0 ly, 0.01 ly, 0 ly], velocity: [0 c, 0.1 c, 0 c], clock-offset: 1 d}
-            craft:
-              skiff:
-                heading: [1, 0, 0]
-                start-speed: 0.1 c
-                legs:
-                  - burn: {acceleration: 1 g0, duration: 30 d}
-                  - coast: {duration: 10 d}
-                  - burn: {acceleration: -1 g0, until-speed: 0 c}
-            links:
-              up:
-                from: pier
-                to: skiff
-                carrier: 8.4 GHz
-                transmitter: {power: 20 kW, antenna: {gain: 70 dBi}, losses: 1 dB}
-                receiver: {antenna: {diameter: 2 m, efficiency: 0.6}, noise-temperature: 300 K}
-                data-rate: 1 kbit/s
-                required-eb-n0: 2 dB
-              down: {from: skiff, to: pier}
-              side: {from: skiff, to: buoy}
-            messages:
-              - {link: up, first: 0 d, last: 60 d, every: 10 d}
-              - {link: down, at: [1 d, 20 d]}
-              - {link: side, at: [2 d]}
-            cutoffs:
-              - {name: trim, link: up, arrive-by: 40 d}
-            exchanges:
-              - {name: ping, query: up, reply: down, turnaround: 1 h, first: 0 d, last: 30 d, every: 15 d}
-            windows:
-              - {link: up, from: 0 d, to: 60 d}
-            """;
+    private static final String BASE = ScenarioText.titled("Fuzz base").epoch("2070-01-01T00:00:00Z")
+            .station("pier", "{position: [0 ly, 0 ly, 0 ly]}")
+            .station("buoy", "{position: [0 ly, 0.01 ly, 0 ly], velocity: [0 c, 0.1 c, 0 c], clock-offset: 1 d}")
+            .craft("skiff", "heading: [1, 0, 0]\nstart-speed: 0.1 c", "burn: {acceleration: 1 g0, duration: 30 d}",
+                    "coast: {duration: 10 d}", "burn: {acceleration: -1 g0, until-speed: 0 c}")
+            .link("up", "pier", "skiff", """
+                    carrier: 8.4 GHz
+                    transmitter: {power: 20 kW, antenna: {gain: 70 dBi}, losses: 1 dB}
+                    receiver: {antenna: {diameter: 2 m, efficiency: 0.6}, noise-temperature: 300 K}
+                    data-rate: 1 kbit/s
+                    required-eb-n0: 2 dB
+                    """)
+            .link("down", "skiff", "pier").link("side", "skiff", "buoy")
+            .message("{link: up, first: 0 d, last: 60 d, every: 10 d}").message("{link: down, at: [1 d, 20 d]}")
+            .message("{link: side, at: [2 d]}")
+            .cutoff("{name: trim, link: up, arrive-by: 40 d}")
+            .exchange("{name: ping, query: up, reply: down, turnaround: 1 h, first: 0 d, last: 30 d, every: 15 d}")
+            .then("windows:\n  - {link: up, from: 0 d, to: 60 d}")
+            .yaml();
 
     /** Values people and fuzzers write in place of a number. */
     private static final List<String> VALUES = List.of("0", "-1", "1e308", "-1e308", "1e-320", "nan", ".inf", "1e30",
@@ -103,20 +86,8 @@ class MutatedScenariosFuzzTest {
     }
 
     private static String[] run(String... args) {
-        PrintStream oldOut = System.out;
-        PrintStream oldErr = System.err;
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        ByteArrayOutputStream err = new ByteArrayOutputStream();
-        try {
-            System.setOut(new PrintStream(out, true, StandardCharsets.UTF_8));
-            System.setErr(new PrintStream(err, true, StandardCharsets.UTF_8));
-            int code = Main.run(args);
-            return new String[] {Integer.toString(code), out.toString(StandardCharsets.UTF_8),
-                err.toString(StandardCharsets.UTF_8)};
-        } finally {
-            System.setOut(oldOut);
-            System.setErr(oldErr);
-        }
+        PlanRun.Outcome o = PlanRun.run(args);
+        return new String[] {Integer.toString(o.exitCode()), o.out(), o.err()};
     }
 
     @Property(tries = 150, shrinking = ShrinkingMode.OFF, seed = "20261202")

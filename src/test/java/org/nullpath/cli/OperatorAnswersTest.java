@@ -1,11 +1,10 @@
 package org.nullpath.cli;
 
-import java.io.ByteArrayOutputStream;
+import org.nullpath.testkit.PlanRun;
+import org.nullpath.testkit.ScenarioText;
+
 import java.io.IOException;
-import java.io.PrintStream;
-import java.io.Reader;
 import java.math.BigDecimal;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.Instant;
@@ -13,7 +12,6 @@ import java.util.List;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 
-import org.apache.commons.csv.CSVFormat;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -27,60 +25,23 @@ class OperatorAnswersTest {
     Path tmp;
 
     /** Invented mission: a crewed ship at 1 g0 for a year, then coasting. */
-    private static final String SHIP = """
-            title: Osprey outbound
-            epoch: 2071-05-01T00:00:00Z
-            stations:
-              quay: {}
-            craft:
-              osprey:
-                heading: [0, 1, 0]
-                legs:
-                  - burn: {acceleration: 1 g0, duration: 1 yr}
-            links:
-              up: {from: quay, to: osprey}
-              down: {from: osprey, to: quay}
-            messages:
-              - {link: up, first: 0 d, last: 300 d, every: 30 d}
-            cutoffs:
-              - {name: trim, link: up, arrive-by: 0.7 yr}
-            exchanges:
-              - {name: ping, query: up, reply: down, turnaround: 1 h, first: 0 d, last: 90 d, every: 30 d}
-            """;
-
-    private record Outcome(int code, String out, String err) {
-    }
-
-    private static Outcome run(String... args) {
-        PrintStream oldOut = System.out;
-        PrintStream oldErr = System.err;
-        ByteArrayOutputStream out = new ByteArrayOutputStream();
-        ByteArrayOutputStream err = new ByteArrayOutputStream();
-        try {
-            System.setOut(new PrintStream(out, true, StandardCharsets.UTF_8));
-            System.setErr(new PrintStream(err, true, StandardCharsets.UTF_8));
-            int code = Main.run(args);
-            return new Outcome(code, out.toString(StandardCharsets.UTF_8), err.toString(StandardCharsets.UTF_8));
-        } finally {
-            System.setOut(oldOut);
-            System.setErr(oldErr);
-        }
-    }
-
-    private static List<CSVRecord> csv(Path file) throws IOException {
-        try (Reader r = Files.newBufferedReader(file)) {
-            return CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).get().parse(r).getRecords();
-        }
-    }
+    private static final String SHIP = ScenarioText.titled("Osprey outbound").epoch("2071-05-01T00:00:00Z")
+            .station("quay", "{}")
+            .craft("osprey", "heading: [0, 1, 0]", "burn: {acceleration: 1 g0, duration: 1 yr}")
+            .link("up", "quay", "osprey").link("down", "osprey", "quay")
+            .message("{link: up, first: 0 d, last: 300 d, every: 30 d}")
+            .cutoff("{name: trim, link: up, arrive-by: 0.7 yr}")
+            .exchange("{name: ping, query: up, reply: down, turnaround: 1 h, first: 0 d, last: 90 d, every: 30 d}")
+            .yaml();
 
     @Test
     void theCutOffShownIsNeverLaterThanTheCutOffComputed() throws IOException {
         Path file = tmp.resolve("osprey.yaml");
         Files.writeString(file, SHIP);
         Path dir = tmp.resolve("out");
-        Outcome o = run("plan", file.toString(), "--out", dir.toString(), "--no-report");
-        assertEquals(0, o.code(), o.err());
-        CSVRecord row = csv(dir.resolve("cutoffs.csv")).get(0);
+        PlanRun.Outcome o = PlanRun.run("plan", file.toString(), "--out", dir.toString(), "--no-report");
+        assertEquals(0, o.exitCode(), o.err());
+        CSVRecord row = PlanRun.csv(dir.resolve("cutoffs.csv")).get(0);
         BigDecimal latest = new BigDecimal(row.get("latest_send_clock_s"));
         Matcher m = Pattern.compile("cut-off trim +on up: send by ([0-9.]+) (yr|d) on the sender's clock \\((\\S+)\\)")
                 .matcher(o.out());
@@ -101,14 +62,14 @@ class OperatorAnswersTest {
     void theTerminalGivesTimesWherePeopleNeedTimes() throws IOException {
         Path file = tmp.resolve("osprey.yaml");
         Files.writeString(file, SHIP);
-        Outcome o = run("plan", file.toString(), "--out", tmp.resolve("out").toString(), "--no-report");
+        PlanRun.Outcome o = PlanRun.run("plan", file.toString(), "--out", tmp.resolve("out").toString(), "--no-report");
         // hyperbolic motion (Rindler 2006): after 1 yr at g0 the rapidity is g0 yr / c = 1.0322953, mission time
         // (c / g0) sinh(1.0322953) = 1.187312 yr, speed tanh(1.0322953) = 0.774827 c; computed in Python
         assertTrue(o.out().contains("craft osprey      last leg ends at 1.000 yr on its clock, 1.187 yr mission time"
                 + " (2072-07-07T15:58:"), o.out());
         assertTrue(o.out().contains("at 0.774827 c; then it coasts"), o.out());
         // 4 round trips, each on the querier's clock; their extremes and median are read back from the CSV
-        List<CSVRecord> trips = csv(tmp.resolve("out").resolve("exchanges-ping.csv"));
+        List<CSVRecord> trips = PlanRun.csv(tmp.resolve("out").resolve("exchanges-ping.csv"));
         double[] t = trips.stream().mapToDouble(r -> Double.parseDouble(r.get("round_trip_clock_s"))).sorted().toArray();
         String line = "exchange ping       4 of 4 round trips complete; round trip "
                 + org.nullpath.report.Readable.time(t[0]) + " to " + org.nullpath.report.Readable.time(t[3])
@@ -120,24 +81,14 @@ class OperatorAnswersTest {
     void profiledLegsGiveTheirAccelerationRangeInTheSummary() throws IOException {
         Files.writeString(tmp.resolve("steps.csv"), "clock_s,acceleration_m_s2\n0,0\n50,12\n100,-3\n");
         Path file = tmp.resolve("kite.yaml");
-        Files.writeString(file, """
-                title: Kite profiled legs
-                stations:
-                  mast: {}
-                craft:
-                  kite:
-                    heading: [1, 0, 0]
-                    legs:
-                      - sail: {beam-from: mast, beam-power: 1 GW, mass: 1 kg, reflectivity: 1, beam-off: 60 s}
-                      - rocket: {thrust: 2 MN, initial-mass: 100 t, burnout-mass: 20 t, exhaust-speed: 0.1 c}
-                      - profile: {file: steps.csv}
-                links:
-                  down: {from: kite, to: mast}
-                messages:
-                  - {link: down, at: [0 s]}
-                """);
+        Files.writeString(file, ScenarioText.titled("Kite profiled legs").station("mast", "{}")
+                .craft("kite", "heading: [1, 0, 0]",
+                        "sail: {beam-from: mast, beam-power: 1 GW, mass: 1 kg, reflectivity: 1, beam-off: 60 s}",
+                        "rocket: {thrust: 2 MN, initial-mass: 100 t, burnout-mass: 20 t, exhaust-speed: 0.1 c}",
+                        "profile: {file: steps.csv}")
+                .link("down", "kite", "mast").message("{link: down, at: [0 s]}").yaml());
         Path dir = tmp.resolve("out");
-        assertEquals(0, run("plan", file.toString(), "--out", dir.toString(), "--no-report").code());
+        assertEquals(0, PlanRun.run("plan", file.toString(), "--out", dir.toString(), "--no-report").exitCode());
         com.fasterxml.jackson.databind.JsonNode legs = new com.fasterxml.jackson.databind.ObjectMapper()
                 .readTree(dir.resolve("summary.json").toFile()).get("craft").get(0).get("legs");
         double c = 299_792_458.0; // SI 2019
@@ -162,8 +113,8 @@ class OperatorAnswersTest {
     void checkAndPlanCountThePlannedMessagesInTheSameWords() throws IOException {
         Path file = tmp.resolve("osprey.yaml");
         Files.writeString(file, SHIP);
-        Outcome check = run("check", file.toString());
-        Outcome plan = run("plan", file.toString(), "--out", tmp.resolve("out").toString(), "--no-report");
+        PlanRun.Outcome check = PlanRun.run("check", file.toString());
+        PlanRun.Outcome plan = PlanRun.run("plan", file.toString(), "--out", tmp.resolve("out").toString(), "--no-report");
         // 11 uplink messages (0 to 300 d every 30 d) and 4 round trips (0 to 90 d every 30 d) of two messages
         String words = "19 messages planned: 11 on links";
         assertTrue(check.out().contains(words + ", 8 in 4 round trips"), check.out());

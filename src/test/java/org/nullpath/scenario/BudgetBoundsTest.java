@@ -2,6 +2,7 @@ package org.nullpath.scenario;
 
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -13,35 +14,25 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * optical telescopes, from memory; the bound of 300 dB is far beyond both).
  */
 class BudgetBoundsTest {
-    private static final String LINK = """
-            stations:
-              home: {}
-            craft:
-              dart:
-                heading: [1, 0, 0]
-                legs:
-                  - burn: {acceleration: 1 g0, duration: 1 yr}
-            links:
-              down:
-                from: dart
-                to: home
-                carrier: 8.4 GHz
-                transmitter: {power: POWER, antenna: {gain: 40 dBi}, losses: LOSS}
-                receiver: {antenna: {gain: GAIN}, noise-temperature: 20 K}
-                data-rate: 1 kbit/s
-                required-eb-n0: REQ
-            """;
+    private static final ScenarioText LINK = ScenarioText.homeAndCraft("dart", "burn: {acceleration: 1 g0, duration: 1 yr}")
+            .link("down", "dart", "home", """
+                    carrier: 8.4 GHz
+                    transmitter: {power: POWER, antenna: {gain: 40 dBi}, losses: LOSS}
+                    receiver: {antenna: {gain: GAIN}, noise-temperature: 20 K}
+                    data-rate: 1 kbit/s
+                    required-eb-n0: REQ
+                    """);
 
     @ParameterizedTest(name = "{0}")
-    @CsvSource(delimiter = '|', value = {
-        "4000 dBi gain | GAIN=4000 dBi | 14 | links.down.receiver.antenna.gain",
-        "-400 dBi gain | GAIN=-400 dBi | 14 | links.down.receiver.antenna.gain",
-        "1e40 W | POWER=1e40 W | 13 | links.down.transmitter.power",
-        "500 dB loss | LOSS=500 dB | 13 | links.down.transmitter.losses",
-        "400 dB requirement | REQ=400 dB | 16 | links.down.required-eb-n0",
-    })
-    void aTermBeyondTheBudgetsRangeIsRefusedAtItsKey(String what, String setting, int line, String key) {
-        String yaml = LINK.replace("POWER", "20 W").replace("LOSS", "1 dB").replace("GAIN", "70 dBi")
+    @CsvSource(delimiter = '|', textBlock = """
+            4000 dBi gain      | GAIN=4000 dBi | receiver:       | links.down.receiver.antenna.gain
+            -400 dBi gain      | GAIN=-400 dBi | receiver:       | links.down.receiver.antenna.gain
+            1e40 W             | POWER=1e40 W  | transmitter:    | links.down.transmitter.power
+            500 dB loss        | LOSS=500 dB   | transmitter:    | links.down.transmitter.losses
+            400 dB requirement | REQ=400 dB    | required-eb-n0: | links.down.required-eb-n0
+            """)
+    void aTermBeyondTheBudgetsRangeIsRefusedAtItsKey(String what, String setting, String lineText, String key) {
+        String yaml = LINK.yaml().replace("POWER", "20 W").replace("LOSS", "1 dB").replace("GAIN", "70 dBi")
                 .replace("REQ", "2 dB");
         String[] kv = setting.split("=");
         String original = switch (kv[0]) {
@@ -55,7 +46,7 @@ class BudgetBoundsTest {
                 () -> ScenarioLoader.load(yaml.replace(original, replaced), "dart.yaml"));
         assertEquals(1, e.problems().size(), e.problems().toString());
         Problem p = e.problems().get(0);
-        assertEquals(line, p.line());
+        assertEquals(LINK.lineOf(lineText), p.line());
         assertEquals(key, p.key());
         assertTrue(p.message().contains("beyond what nullpath budgets"), p.message());
     }

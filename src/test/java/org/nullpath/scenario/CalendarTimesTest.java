@@ -7,6 +7,7 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.nullpath.mission.MessagePlan;
 import org.nullpath.mission.Mission;
+import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -18,24 +19,13 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  * at mission time 0, its clock then reads (c / a) asinh(a t / c) (hyperbolic motion, Rindler 2006).
  */
 class CalendarTimesTest {
-    private static final String SCENARIO = """
-            epoch: 2071-05-01T00:00:00Z
-            stations:
-              quay: {}
-            craft:
-              osprey:
-                heading: [1, 0, 0]
-                legs:
-                  - burn: {acceleration: 1 g0, duration: 2 yr}
-            links:
-              up: {from: quay, to: osprey}
-              down: {from: osprey, to: quay}
-            messages:
-              - {link: up, at: [2071-05-02T00:00:00Z, 3 d]}
-              - {link: down, first: 2071-06-01T00:00:00Z, last: 2071-07-01T00:00:00Z, every: 10 d}
-            cutoffs:
-              - {name: trim, link: up, arrive-by: 2072-01-01T00:00:00Z}
-            """;
+    private static final ScenarioText OSPREY = ScenarioText.untitled().station("quay", "{}")
+            .craft("osprey", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: 2 yr}")
+            .link("up", "quay", "osprey").link("down", "osprey", "quay")
+            .message("{link: up, at: [2071-05-02T00:00:00Z, 3 d]}")
+            .message("{link: down, first: 2071-06-01T00:00:00Z, last: 2071-07-01T00:00:00Z, every: 10 d}")
+            .cutoff("{name: trim, link: up, arrive-by: 2072-01-01T00:00:00Z}");
+    private static final String SCENARIO = "epoch: 2071-05-01T00:00:00Z\n" + OSPREY.yaml();
 
     private static double craftClock(double t) {
         double a = 9.80665; // g0 (3rd CGPM 1901)
@@ -67,7 +57,7 @@ class CalendarTimesTest {
         ScenarioException e = assertThrows(ScenarioException.class,
                 () -> ScenarioLoader.load(SCENARIO.replace("epoch: 2071-05-01T00:00:00Z\n", ""), "osprey.yaml"));
         Problem p = e.problems().stream().filter(x -> x.key().equals("cutoffs[0].arrive-by")).findFirst().orElseThrow();
-        assertEquals(15, p.line());
+        assertEquals(OSPREY.lineOf("arrive-by"), p.line());
         assertTrue(p.message().contains("needs an 'epoch'"), p.message());
         assertEquals(4, e.problems().size(), e.problems().toString()); // one per instant written
     }

@@ -1,6 +1,7 @@
 package org.nullpath.scenario;
 
 import org.junit.jupiter.api.Test;
+import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertThrows;
@@ -14,26 +15,19 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 class PositionBoundsTest {
     @Test
     void aStationFartherThanNullpathComputesIsRefusedAtItsPosition() {
-        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load("""
-                stations:
-                  home: {}
-                  aside: {position: [0 m, 1e200 m, 0 m]}
-                """, "far.yaml"));
+        ScenarioText far = ScenarioText.home().station("aside", "{position: [0 m, 1e200 m, 0 m]}");
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load(far.yaml(), "far.yaml"));
         assertEquals(1, e.problems().size());
         Problem p = e.problems().get(0);
-        assertEquals(3, p.line());
+        assertEquals(far.lineOf("1e200 m"), p.line());
         assertEquals("stations.aside.position", p.key());
         assertTrue(p.message().contains("farther than nullpath computes"), p.message());
     }
 
     @Test
     void aCraftStartingFartherThanNullpathComputesIsRefusedAtItsStartPosition() {
-        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load("""
-                craft:
-                  lark:
-                    start-position: [2e30 m, 0 m, 0 m]
-                    heading: [1, 0, 0]
-                """, "far.yaml"));
+        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load(ScenarioText.home()
+                .craft("lark", "start-position: [2e30 m, 0 m, 0 m]\nheading: [1, 0, 0]").yaml(), "far.yaml"));
         assertEquals("craft.lark.start-position", e.problems().get(0).key());
     }
 }
