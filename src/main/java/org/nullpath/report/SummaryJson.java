@@ -29,6 +29,16 @@ final class SummaryJson {
     private SummaryJson() {
     }
 
+    /** Each exchange plan's entry: its counts and round-trip times on the querier's clock. */
+    static final Table<ExchangeTally> EXCHANGES = new Table<>(List.of(
+            Column.text("name", "the exchange's name", ExchangeTally::name),
+            Column.count("round_trips", "round trips planned", ExchangeTally::roundTrips),
+            Column.count("complete", "round trips whose query and reply both arrive", ExchangeTally::complete),
+            Column.number("min_round_trip_clock_s", "s", "shortest complete round trip", ExchangeTally::minRoundTrip),
+            Column.number("median_round_trip_clock_s", "s", "median of the complete round trips",
+                    ExchangeTally::medianRoundTrip),
+            Column.number("max_round_trip_clock_s", "s", "longest complete round trip", ExchangeTally::maxRoundTrip)));
+
     /**
      * Writes summary.json; {@code written} are the other files of the plan with their SHA-256 digests, so that
      * a later plan into the same folder can prove which files it may remove.
@@ -113,18 +123,7 @@ final class SummaryJson {
         root.put("links", links);
         root.put("horizons", Tables.horizons(Optional.empty()).json(r.horizons()));
         root.put("cutoffs", Tables.cutoffs(Optional.empty()).json(r.cutoffs()));
-        List<Object> exchanges = new ArrayList<>();
-        for (ExchangeTally e : r.exchanges()) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("name", e.name());
-            m.put("round_trips", e.roundTrips());
-            m.put("complete", e.complete());
-            m.put("min_round_trip_clock_s", nan(e.minRoundTrip()));
-            m.put("median_round_trip_clock_s", nan(e.medianRoundTrip()));
-            m.put("max_round_trip_clock_s", nan(e.maxRoundTrip()));
-            exchanges.add(m);
-        }
-        root.put("exchanges", exchanges);
+        root.put("exchanges", EXCHANGES.json(r.exchanges()));
         root.put("windows", Tables.WINDOWS.json(r.windows()));
         List<String> files = new ArrayList<>(written.keySet());
         files.add(file.getFileName().toString());
