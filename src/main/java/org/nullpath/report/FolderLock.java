@@ -1,0 +1,116 @@
+package org.nullpath.report;
+
+import java.io.IOException;
+import java.io.InterruptedIOException;
+import java.nio.channels.FileChannel;
+import java.nio.channels.FileLock;
+import java.nio.channels.OverlappingFileLockException;
+import java.nio.file.FileAlreadyExistsException;
+import java.nio.file.Files;
+import java.nio.file.LinkOption;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.BasicFileAttributes;
+import java.util.Objects;
+
+/**
+ * The lock one plan holds on its output folder while it writes there: an operating-system lock
+ * ({@link FileChannel#tryLock()}) on an empty file {@value #NAME} inside the folder. A second plan into the
+ * same folder waits until the first is done. The lock dies with the process that holds it, so a plan that
+ * holds it knows that no other plan is writing there and that whatever another plan left behind is stale.
+ *
+ * <p>The file is removed when the lock is given up. A plan that was waiting on the removed file notices,
+ * once it gets its lock, that the name no longer leads to the file it locked, and starts over.
+ */
+final class FolderLock implements AutoCloseable {
+    /** The lock file's name inside the output folder. */
+    static final String NAME = ".nullpath-lock";
+
+    private static final long POLL_MILLIS = 50;
+
+    private final Path file;
+    private final FileChannel channel;
+
+    private FolderLock(Path file, FileChannel channel) {
+        this.file = file;
+        this.channel = channel;
+    }
+
+    /**
+     * Takes the lock on {@code dir} (which must exist), waiting as long as another plan holds it;
+     * {@code onWait} runs once, when the first attempt finds it held.
+     */
+    static FolderLock acquire(Path dir, Runnable onWait) throws IOException {
+        Path file = dir.resolve(NAME);
+        boolean told = false;
+        while (true) {
+            try {
+                Files.createFile(file);
+            } catch (FileAlreadyExistsException e) {
+                // another plan's (or a killed plan's) lock file: lock it below
+            } catch (NoSuchFileException e) {
+                Files.createDirectories(dir); // an earlier holder removed the folder it had created
+                continue;
+            }
+            Object before = key(file);
+            FileChannel ch;
+            try {
+                ch = FileChannel.open(file, StandardOpenOption.WRITE, LinkOption.NOFOLLOW_LINKS);
+            } catch (NoSuchFileException e) {
+                continue; // removed by its holder in between
+            }
+            FileLock lock;
+            try {
+                lock = ch.tryLock();
+            } catch (OverlappingFileLockException e) {
+                lock = null; // held by another plan in this same Java process
+            } catch (IOException | RuntimeException e) {
+                ch.close();
+                throw e;
+            }
+            if (lock != null && before != null && Objects.equals(before, key(file))) {
+                return new FolderLock(file, ch);
+            }
+            ch.close(); // releases the lock if we got one on a file its holder has removed since
+            if (lock == null && !told) {
+                onWait.run();
+                told = true;
+            }
+            if (lock == null) {
+                try {
+                    Thread.sleep(POLL_MILLIS);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    throw new InterruptedIOException("interrupted while waiting for another plan into " + dir);
+                }
+            }
+        }
+    }
+
+    /** What identifies the file at {@code file} now (its inode on POSIX systems), or null when it is gone. */
+    private static Object key(Path file) throws IOException {
+        try {
+            BasicFileAttributes a = Files.readAttributes(file, BasicFileAttributes.class, LinkOption.NOFOLLOW_LINKS);
+            Object k = a.fileKey();
+            return k == null ? "" : k; // no file keys here (not POSIX): the name is all there is to go by
+        } catch (NoSuchFileException e) {
+            return null;
+        }
+    }
+
+    /** Removes the lock file, then gives up the lock. */
+    @Override
+    public void close() throws IOException {
+        try {
+            Files.deleteIfExists(file);
+        } finally {
+            channel.close();
+        }
+    }
+
+    /** Gives up the lock and leaves the file, as a killed process does (for tests of what a kill leaves). */
+    void dropAsIfKilled() throws IOException {
+        channel.close();
+    }
+}
