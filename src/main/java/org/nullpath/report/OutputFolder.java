@@ -52,13 +52,20 @@ public final class OutputFolder implements AutoCloseable {
      * @param replaced files of the target that this plan's files replaced
      * @param removed  files an earlier plan wrote, unchanged since, that this plan does not write
      * @param kept     files an earlier plan listed that this plan does not write, left alone because they
-     *                 changed since, are no longer plain files, or are read by this plan
+     *                 changed since (or are no longer plain files)
+     * @param inputs   files an earlier plan listed, unchanged, left alone because this plan reads them
      */
-    public record Commit(List<String> replaced, List<String> removed, List<String> kept) {
+    public record Commit(List<String> replaced, List<String> removed, List<String> kept, List<String> inputs) {
         public Commit {
             replaced = List.copyOf(replaced);
             removed = List.copyOf(removed);
             kept = List.copyOf(kept);
+            inputs = List.copyOf(inputs);
+        }
+
+        /** What committing did, no earlier file left alone for being an input. */
+        public Commit(List<String> replaced, List<String> removed, List<String> kept) {
+            this(replaced, removed, kept, List.of());
         }
     }
 
@@ -240,16 +247,18 @@ public final class OutputFolder implements AutoCloseable {
         }
         Map<String, String> removals = new TreeMap<>();
         List<String> kept = new ArrayList<>();
+        List<String> read = new ArrayList<>();
         for (Map.Entry<String, String> old : earlierPlanFiles(target).entrySet()) {
             Path f = target.resolve(old.getKey());
             if (staged.contains(old.getKey()) || !Files.exists(f, LinkOption.NOFOLLOW_LINKS)) {
                 continue;
             }
-            if (!isInput(f) && Files.isRegularFile(f, LinkOption.NOFOLLOW_LINKS)
-                    && CommitJournal.sha256(f).equals(old.getValue())) {
-                removals.put(old.getKey(), old.getValue()); // written by an earlier plan, unchanged since, and not by this one
-            } else {
+            if (!Files.isRegularFile(f, LinkOption.NOFOLLOW_LINKS) || !CommitJournal.sha256(f).equals(old.getValue())) {
                 kept.add(old.getKey());
+            } else if (isInput(f)) {
+                read.add(old.getKey());
+            } else {
+                removals.put(old.getKey(), old.getValue()); // written by an earlier plan, unchanged since, and not by this one
             }
         }
         List<String> moves = new ArrayList<>(staged);
@@ -260,7 +269,7 @@ public final class OutputFolder implements AutoCloseable {
         CommitJournal.write(target, plan, steps);
         committed = true;
         CommitJournal.carryOut(target, plan, steps);
-        return new Commit(replaced, new ArrayList<>(removals.keySet()), kept);
+        return new Commit(replaced, new ArrayList<>(removals.keySet()), kept, read);
     }
 
     private boolean isInput(Path p) {

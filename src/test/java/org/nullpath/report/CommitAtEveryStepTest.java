@@ -174,7 +174,8 @@ class CommitAtEveryStepTest {
             Files.writeString(f.file("c.csv"), "new c\n");
             c = f.commit();
         }
-        assertEquals(List.of("b.csv"), c.kept());
+        assertEquals(List.of("b.csv"), c.inputs());
+        assertEquals(List.of(), c.kept());
         assertEquals("old b\n", Files.readString(dir.resolve("b.csv")));
     }
 
