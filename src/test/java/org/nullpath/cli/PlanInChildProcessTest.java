@@ -28,9 +28,10 @@ import static org.junit.jupiter.api.Assertions.fail;
  * or SIGKILL ({@link Process#destroyForcibly()}) while it writes its files: the folder is then the earlier
  * plan's, or (when the signal came during the commit) wholly the stopped plan's, and no staging is left:
  * at once after SIGTERM, after the next plan into the folder after SIGKILL. Exit statuses 143 and 137 are
- * the shell's 128 + signal number convention (SIGTERM 15, SIGKILL 9, POSIX signal numbers).
+ * the shell's 128 + signal number convention (SIGTERM 15, SIGKILL 9, POSIX signal numbers). A plan into
+ * the folder while the child writes there waits for it (the operating system's file lock, between processes).
  */
-class KilledPlanTest {
+class PlanInChildProcessTest {
     @TempDir
     Path tmp;
 
@@ -162,5 +163,23 @@ class KilledPlanTest {
 
         earlierPlan(); // the same small plan again: byte for byte the same files
         assertEquals(before, listing(dir), "the next plan left staging, lock or journal behind, or changed files");
+    }
+
+    @Test
+    void aPlanIntoAFolderAnotherProcessWritesWaitsForIt() throws Exception {
+        Path dir = earlierPlan();
+        Map<String, String> small = listing(dir);
+        Process p = startLongPlan(dir);
+        awaitStaging(p, dir);
+        Path again = tmp.resolve("heron.yaml");
+        PlanRun.Outcome o = PlanRun.run("plan", again.toString(), "--out", dir.toString(), "--no-report");
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        assertEquals(0, p.exitValue(), Files.readString(tmp.resolve("child.err")));
+        assertEquals(0, o.exitCode(), o.err());
+        assertEquals("nullpath: another plan is writing into " + dir + "; waiting until it is done\n", o.err());
+        assertTrue(o.out().contains("(replacing 5 files already there)"), o.out());
+        // it found the folder held, and its files are the folder's: it committed after the child had
+        assertTrue(Files.readString(tmp.resolve("child.out")).contains("written to " + dir + " (replacing 5 files"));
+        assertEquals(small, listing(dir), "the second plan's files, alone, are the folder's");
     }
 }
