@@ -15,6 +15,8 @@ import java.util.stream.Stream;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.condition.DisabledOnOs;
+import org.junit.jupiter.api.condition.OS;
 import org.junit.jupiter.api.io.TempDir;
 import org.nullpath.testkit.PlanRun;
 
@@ -31,6 +33,7 @@ import static org.junit.jupiter.api.Assertions.fail;
  * the shell's 128 + signal number convention (SIGTERM 15, SIGKILL 9, POSIX signal numbers). A plan into
  * the folder while the child writes there waits for it (the operating system's file lock, between processes).
  */
+@DisabledOnOs(value = OS.WINDOWS, disabledReason = "Process.destroy() sends no SIGTERM there")
 class PlanInChildProcessTest {
     @TempDir
     Path tmp;
