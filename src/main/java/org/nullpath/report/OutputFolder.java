@@ -111,6 +111,14 @@ public final class OutputFolder implements AutoCloseable {
         if (Files.exists(abs) && !Files.isDirectory(abs)) {
             throw new Refused(target + " exists and is not a folder");
         }
+        for (Path p = abs.getParent(); p != null; p = p.getParent()) {
+            if (Files.exists(p)) {
+                if (!Files.isDirectory(p)) {
+                    throw new Refused(target + " lies under " + p + ", which is not a folder");
+                }
+                break;
+            }
+        }
         return abs;
     }
 
@@ -268,7 +276,12 @@ public final class OutputFolder implements AutoCloseable {
         CommitJournal.Plan plan = new CommitJournal.Plan(staging.getFileName().toString(), moves, removals);
         CommitJournal.write(target, plan, steps);
         committed = true;
-        CommitJournal.carryOut(target, plan, steps);
+        try {
+            CommitJournal.carryOut(target, plan, steps);
+        } catch (IOException e) {
+            throw new IOException(e.getMessage() + " (this plan's files are all staged and recorded in "
+                    + target.resolve(CommitJournal.NAME) + ": the next plan into the folder moves them in first)", e);
+        }
         return new Commit(replaced, new ArrayList<>(removals.keySet()), kept, read);
     }
 
@@ -299,8 +312,14 @@ public final class OutputFolder implements AutoCloseable {
             // shutting down: the hook is this very call, or has made it
         }
         try {
-            if (!committed && Files.exists(staging, LinkOption.NOFOLLOW_LINKS)) {
-                CommitJournal.deleteTree(staging);
+            for (int attempt = 0; !committed && Files.exists(staging, LinkOption.NOFOLLOW_LINKS); attempt++) {
+                try {
+                    CommitJournal.deleteTree(staging);
+                } catch (IOException e) {
+                    if (attempt >= 4) {
+                        throw e; // the writer (stopping) keeps adding files; the next plan removes the rest
+                    }
+                }
             }
         } finally {
             lock.close();
@@ -313,15 +332,8 @@ public final class OutputFolder implements AutoCloseable {
     /** The shutdown hook: waits for a commit under way (it holds the monitor), else drops the staging. */
     private void stop() {
         try {
-            for (int attempt = 0; attempt < 5; attempt++) {
-                try {
-                    close(); // the writer may still be adding files while it runs
-                    return;
-                } catch (IOException e) {
-                    closed = false;
-                }
-            }
-        } catch (RuntimeException e) {
+            close(); // the writer may still be adding files while this runs: close() tries again
+        } catch (IOException | RuntimeException e) {
             // nothing more can be done while the process stops; the next plan clears what is left
         }
     }

@@ -92,6 +92,17 @@ class OutputTargetTest {
         assertEquals(Map.of("", "<folder>", "notes.txt", "mine\n", "plover.yaml", SCENARIO), listing(tmp));
     }
 
+    @Test
+    void aFolderUnderARegularFileIsAUsageError() throws IOException {
+        Path file = tmp.resolve("notes.txt");
+        Files.writeString(file, "mine\n");
+        Path target = file.resolve("out");
+        PlanRun.Outcome o = PlanRun.run("plan", scenario().toString(), "--out", target.toString());
+        assertEquals(2, o.exitCode(), o.err());
+        assertEquals("nullpath: --out: " + target + " lies under " + file + ", which is not a folder\n", o.err());
+        assertEquals(Map.of("", "<folder>", "notes.txt", "mine\n", "plover.yaml", SCENARIO), listing(tmp));
+    }
+
     @ParameterizedTest
     @ValueSource(strings = {"0", "-1", "-50000000"})
     void aCapOfNoMessagesIsAUsageError(String cap) throws IOException {

@@ -217,4 +217,25 @@ class CommitAtEveryStepTest {
         }
         assertFalse(Files.exists(tmp.resolve("new")));
     }
+
+    @Test
+    void aCommitThatFailsAfterItsJournalIsFinishedByTheNextPlan() throws IOException {
+        Map<String, String> fresh = planned(NEW);
+        Path dir = tmp.resolve("out");
+        plan(dir, OLD);
+        try (OutputFolder f = stage(dir, NEW)) {
+            f.watchSteps(step -> {
+                if (step.equals("moved c.csv")) {
+                    throw new IOException("disk trouble");
+                }
+            });
+            IOException e = assertThrows(IOException.class, f::commit);
+            assertTrue(e.getMessage().startsWith("disk trouble (this plan's files are all staged and recorded in "
+                    + dir.resolve(CommitJournal.NAME) + ": the next plan into the folder moves them in first)"),
+                    e.getMessage());
+        }
+        assertTrue(Files.exists(dir.resolve(CommitJournal.NAME)), "closing a decided plan keeps its journal");
+        OutputFolder.begin(dir).close();
+        assertEquals(fresh, listing(dir));
+    }
 }
