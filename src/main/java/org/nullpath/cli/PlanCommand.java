@@ -25,7 +25,7 @@ final class PlanCommand implements Callable<Integer> {
     @Mixin
     ScenarioInput input;
 
-    @Option(names = {"-o", "--out"}, required = true, paramLabel = "DIR", description = "folder to write into (created if missing)")
+    @Option(names = {"-o", "--out"}, required = true, paramLabel = "DIR", description = "folder to write into (created if missing; one plan at a time: a second waits)")
     Path out;
 
     @Option(names = "--no-report", description = "do not write report.html")
@@ -37,6 +37,12 @@ final class PlanCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter err = input.err();
+        try {
+            OutputFolder.checkTarget(out);
+        } catch (OutputFolder.Refused e) {
+            err.println("nullpath: --out: " + e.getMessage());
+            return Main.INPUT_ERROR;
+        }
         Optional<Mission> loaded = input.load();
         if (loaded.isEmpty()) {
             return Main.INPUT_ERROR;
@@ -44,9 +50,14 @@ final class PlanCommand implements Callable<Integer> {
         Mission s = loaded.get();
         PlanResult result;
         OutputFolder.Commit commit;
-        try (OutputFolder folder = OutputFolder.begin(out)) {
+        Runnable waiting = () -> err.println("nullpath: another plan is writing into " + out
+                + "; waiting until it is done");
+        try (OutputFolder folder = OutputFolder.begin(out, s.source().inputs(), waiting)) {
             result = PlanOutput.write(s, folder, !noReport, err);
             commit = folder.commit();
+        } catch (OutputFolder.Refused e) {
+            err.println("nullpath: cannot write " + out + ": " + e.getMessage());
+            return Main.INPUT_ERROR;
         } catch (IOException | UncheckedIOException e) {
             err.println("nullpath: cannot write " + out + ": " + e.getMessage());
             if (debug) {

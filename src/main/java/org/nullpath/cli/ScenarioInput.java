@@ -40,6 +40,10 @@ final class ScenarioInput {
     /** Loads and validates; on problems prints them on standard error, one per line, and returns empty. */
     Optional<Mission> load() {
         PrintWriter err = err();
+        if (maxMessages < 1) {
+            err.println("nullpath: --max-messages must be at least 1 (got " + maxMessages + ")");
+            return Optional.empty();
+        }
         Mission s;
         try {
             s = ScenarioLoader.load(scenario);

@@ -108,5 +108,9 @@ final class TerminalSummary {
             out.printf(Locale.ROOT, "  left alone (an earlier plan wrote them, but they have changed since): %s%n",
                     String.join(", ", commit.kept()));
         }
+        if (!commit.inputs().isEmpty()) {
+            out.printf("  left alone (an earlier plan wrote them, but this plan reads them): %s%n",
+                    String.join(", ", commit.inputs()));
+        }
     }
 }

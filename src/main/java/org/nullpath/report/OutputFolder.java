@@ -1,39 +1,43 @@
 package org.nullpath.report;
 
 import java.io.IOException;
-import java.io.InputStream;
-import java.nio.file.AtomicMoveNotSupportedException;
 import java.nio.file.DirectoryStream;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
 import java.nio.file.LinkOption;
 import java.nio.file.Path;
-import java.nio.file.StandardCopyOption;
-import java.security.MessageDigest;
-import java.security.NoSuchAlgorithmException;
 import java.security.SecureRandom;
 import java.util.ArrayList;
+import java.util.Collection;
 import java.util.Comparator;
-import java.util.HexFormat;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
-import java.util.stream.Stream;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import org.nullpath.mission.OutputNames;
 
 /**
- * Writes a plan's files into a staging folder beside the target folder and moves them into place only
- * when everything has been written, so that after any failure the target is exactly as it was and
- * nothing is left beside it. The folder and its files get the permissions the user's umask gives, like
- * any other file tool's.
+ * Writes a plan's files into the target folder so that it holds either the earlier plan's files or this
+ * plan's, never a mixture, whatever moment the process is stopped at (docs/output-files.md, "How DIR is
+ * written"):
+ *
+ * <ul>
+ * <li>the plan takes the folder's {@link FolderLock} (a second plan into the folder waits), then finishes
+ *     what an earlier, killed plan left there ({@link CommitJournal#recover});</li>
+ * <li>files are written into a hidden staging folder inside the target, so on the target's own file
+ *     system: every later move is a rename;</li>
+ * <li>{@link #commit()} checks every place a file goes, writes the {@link CommitJournal} (from then on
+ *     the new plan is decided) and carries it out;</li>
+ * <li>a shutdown hook removes the staging folder when the process is asked to stop (SIGTERM, SIGINT)
+ *     before the commit, and lets a commit under way finish; after a hard kill the next plan does both.</li>
+ * </ul>
  *
  * <p>An earlier plan's files are removed only when nullpath can prove it wrote them: the earlier
  * summary.json lists each file with the SHA-256 digest of its content, and a file this plan does not
- * write is removed only when it is still a regular file with that digest. Anything else in the folder is
- * left alone; {@link #commit()} says what was replaced, removed and left.
+ * write is removed only when it is still a regular file with that digest and not an input of this plan.
+ * The folder and its files get the permissions the user's umask gives.
  */
 public final class OutputFolder implements AutoCloseable {
     /** The key under which summary.json lists the files of its plan. */
@@ -49,46 +53,117 @@ public final class OutputFolder implements AutoCloseable {
      * @param removed  files an earlier plan wrote, unchanged since, that this plan does not write
      * @param kept     files an earlier plan listed that this plan does not write, left alone because they
      *                 changed since (or are no longer plain files)
+     * @param inputs   files an earlier plan listed, unchanged, left alone because this plan reads them
      */
-    public record Commit(List<String> replaced, List<String> removed, List<String> kept) {
+    public record Commit(List<String> replaced, List<String> removed, List<String> kept, List<String> inputs) {
         public Commit {
             replaced = List.copyOf(replaced);
             removed = List.copyOf(removed);
             kept = List.copyOf(kept);
+            inputs = List.copyOf(inputs);
+        }
+
+        /** What committing did, no earlier file left alone for being an input. */
+        public Commit(List<String> replaced, List<String> removed, List<String> kept) {
+            this(replaced, removed, kept, List.of());
+        }
+    }
+
+    /** A target the plan cannot write to as asked (a usage error: nothing was changed). */
+    public static final class Refused extends IOException {
+        private static final long serialVersionUID = 1L;
+
+        Refused(String message) {
+            super(message);
         }
     }
 
     private final Path target;
     private final Path staging;
+    private final Path firstCreated;
+    private final List<Path> inputs;
+    private final FolderLock lock;
+    private final Thread onStop = new Thread(this::stop, "nullpath-output-cleanup");
+    private CommitJournal.Steps steps = CommitJournal.Steps.NONE;
     private boolean committed;
+    private boolean closed;
 
-    private OutputFolder(Path target, Path staging) {
+    private OutputFolder(Path target, Path staging, Path firstCreated, List<Path> inputs, FolderLock lock) {
         this.target = target;
         this.staging = staging;
+        this.firstCreated = firstCreated;
+        this.inputs = inputs;
+        this.lock = lock;
     }
 
-    /** Starts writing for {@code target} (which may or may not exist yet). */
-    public static OutputFolder begin(Path target) throws IOException {
+    /**
+     * Refuses a target no plan can be written to: an empty name, the root folder, or something that exists
+     * and is not a folder (a file, a device such as /dev/null).
+     */
+    public static Path checkTarget(Path target) throws Refused {
+        if (target.toString().isBlank()) {
+            throw new Refused("the output folder's name is empty");
+        }
         Path abs = target.toAbsolutePath().normalize();
+        if (abs.getParent() == null) {
+            throw new Refused(target + " is the root folder; give a folder of its own for the plan's files");
+        }
         if (Files.exists(abs) && !Files.isDirectory(abs)) {
-            throw new IOException(target + " exists and is not a folder");
+            throw new Refused(target + " exists and is not a folder");
         }
-        Path parent = abs.getParent();
-        if (parent == null) {
-            throw new IOException("cannot write into the root folder");
+        for (Path p = abs.getParent(); p != null; p = p.getParent()) {
+            if (Files.exists(p)) {
+                if (!Files.isDirectory(p)) {
+                    throw new Refused(target + " lies under " + p + ", which is not a folder");
+                }
+                break;
+            }
         }
-        Files.createDirectories(parent);
-        // created like any folder (the umask decides who may read it), under a name no one else picks
-        SecureRandom random = new SecureRandom();
-        for (int attempt = 0; ; attempt++) {
-            Path staging = parent.resolve("." + abs.getFileName() + ".nullpath-" + Long.toUnsignedString(random.nextLong(), 36));
-            try {
-                return new OutputFolder(abs, Files.createDirectory(staging));
-            } catch (FileAlreadyExistsException e) {
-                if (attempt >= 16) {
-                    throw e;
+        return abs;
+    }
+
+    /** Starts writing for {@code target} (which may or may not exist yet), protecting no input files. */
+    public static OutputFolder begin(Path target) throws IOException {
+        return begin(target, List.of(), () -> { });
+    }
+
+    /**
+     * Starts writing for {@code target}: creates it if missing, takes its lock (running {@code onWait} once
+     * if another plan holds it, then waiting), finishes or clears what a killed plan left there and makes
+     * the staging folder. No file of {@code inputs} will be replaced or removed.
+     */
+    public static OutputFolder begin(Path target, Collection<Path> inputs, Runnable onWait) throws IOException {
+        Path abs = checkTarget(target);
+        Path firstCreated = null;
+        for (Path p = abs; p != null && !Files.exists(p, LinkOption.NOFOLLOW_LINKS); p = p.getParent()) {
+            firstCreated = p;
+        }
+        Files.createDirectories(abs);
+        FolderLock lock = FolderLock.acquire(abs, onWait);
+        try {
+            CommitJournal.recover(abs);
+            SecureRandom random = new SecureRandom();
+            for (int attempt = 0; ; attempt++) {
+                String name = CommitJournal.STAGE_PREFIX + Long.toUnsignedString(random.nextLong(), 36);
+                try {
+                    Path staging = Files.createDirectory(abs.resolve(name)); // the umask decides who may read it
+                    List<Path> in = new ArrayList<>();
+                    for (Path p : inputs) {
+                        in.add(p.toAbsolutePath().normalize());
+                    }
+                    OutputFolder f = new OutputFolder(abs, staging, firstCreated, List.copyOf(in), lock);
+                    Runtime.getRuntime().addShutdownHook(f.onStop);
+                    return f;
+                } catch (FileAlreadyExistsException e) {
+                    if (attempt >= 16) {
+                        throw e;
+                    }
                 }
             }
+        } catch (IOException | RuntimeException e) {
+            lock.close();
+            removeCreated(abs, firstCreated);
+            throw e;
         }
     }
 
@@ -118,7 +193,7 @@ public final class OutputFolder implements AutoCloseable {
             if (written != null && written.isObject()) {
                 written.fields().forEachRemaining(e -> {
                     String n = e.getKey();
-                    if (plainName(n) && e.getValue().isTextual()) {
+                    if (CommitJournal.plainName(n) && e.getValue().isTextual()) {
                         digests.put(n, e.getValue().asText());
                     }
                 });
@@ -129,34 +204,13 @@ public final class OutputFolder implements AutoCloseable {
         return digests;
     }
 
-    private static boolean plainName(String n) {
-        return !n.isEmpty() && !n.contains("/") && !n.contains("\\") && !n.startsWith(".") && !n.equals("..");
-    }
-
     /** SHA-256 digests (hex) of the files staged so far, by name. */
     public Map<String, String> stagedDigests() throws IOException {
         Map<String, String> out = new TreeMap<>();
         for (String n : stagedNames()) {
-            out.put(n, sha256(staging.resolve(n)));
+            out.put(n, CommitJournal.sha256(staging.resolve(n)));
         }
         return out;
-    }
-
-    /** The SHA-256 digest of a file's content, in lower-case hex. */
-    static String sha256(Path file) throws IOException {
-        MessageDigest md;
-        try {
-            md = MessageDigest.getInstance("SHA-256");
-        } catch (NoSuchAlgorithmException e) {
-            throw new IllegalStateException("every Java has SHA-256", e);
-        }
-        try (InputStream in = Files.newInputStream(file, LinkOption.NOFOLLOW_LINKS)) {
-            byte[] buf = new byte[1 << 16];
-            for (int n; (n = in.read(buf)) > 0; ) {
-                md.update(buf, 0, n);
-            }
-        }
-        return HexFormat.of().formatHex(md.digest());
     }
 
     /** The path to write a file named {@code name} to (inside the staging folder). */
@@ -164,62 +218,143 @@ public final class OutputFolder implements AutoCloseable {
         return staging.resolve(name);
     }
 
-    /** Moves every staged file into the target folder; says what it replaced, removed and left alone. */
-    public Commit commit() throws IOException {
-        if (!Files.exists(target, LinkOption.NOFOLLOW_LINKS)) {
-            try {
-                Files.move(staging, target, StandardCopyOption.ATOMIC_MOVE);
-                committed = true;
-                return new Commit(List.of(), List.of(), List.of());
-            } catch (AtomicMoveNotSupportedException e) {
-                // fall back to moving file by file below
-            }
-            Files.createDirectories(target);
-        }
-        List<String> staged = stagedNames();
-        List<String> replaced = new ArrayList<>();
-        List<String> removed = new ArrayList<>();
-        List<String> kept = new ArrayList<>();
-        for (Map.Entry<String, String> old : earlierPlanFiles(target).entrySet()) {
-            if (staged.contains(old.getKey())) {
-                continue;
-            }
-            Path f = target.resolve(old.getKey());
-            if (!Files.exists(f, LinkOption.NOFOLLOW_LINKS)) {
-                continue;
-            }
-            if (Files.isRegularFile(f, LinkOption.NOFOLLOW_LINKS) && sha256(f).equals(old.getValue())) {
-                Files.delete(f); // written by an earlier plan, unchanged since, and not by this one
-                removed.add(old.getKey());
-            } else {
-                kept.add(old.getKey());
-            }
-        }
-        for (String name : staged) {
-            Path dest = target.resolve(name);
-            if (Files.exists(dest, LinkOption.NOFOLLOW_LINKS)) {
-                replaced.add(name);
-            }
-            try {
-                Files.move(staging.resolve(name), dest, StandardCopyOption.REPLACE_EXISTING,
-                        StandardCopyOption.ATOMIC_MOVE);
-            } catch (AtomicMoveNotSupportedException e) {
-                Files.move(staging.resolve(name), dest, StandardCopyOption.REPLACE_EXISTING);
-            }
-        }
-        Files.deleteIfExists(staging);
-        committed = true;
-        return new Commit(replaced, removed, kept);
+    /** Lets a test stop the commit after a given step, as a kill would. */
+    void watchSteps(CommitJournal.Steps watcher) {
+        this.steps = watcher;
     }
 
-    /** Removes the staging folder unless committed. */
-    @Override
-    public void close() throws IOException {
-        if (!committed && Files.exists(staging)) {
-            try (Stream<Path> walk = Files.walk(staging)) {
-                for (Path p : walk.sorted(Comparator.reverseOrder()).toList()) {
-                    Files.deleteIfExists(p);
+    /**
+     * Moves every staged file into the target folder; says what it replaced, removed and left alone.
+     *
+     * @throws Refused when a folder, link or other non-plain file, or an input of this plan, stands where
+     *                 an output file goes (nothing has been moved then)
+     */
+    public synchronized Commit commit() throws IOException {
+        if (closed) {
+            throw new IOException("stopped before its files were moved into " + target);
+        }
+        List<String> staged = stagedNames();
+        List<String> blocked = new ArrayList<>();
+        List<String> replaced = new ArrayList<>();
+        for (String name : staged) {
+            Path dest = target.resolve(name);
+            if (isInput(dest)) {
+                blocked.add(name + " (an input of this plan)");
+            } else if (Files.exists(dest, LinkOption.NOFOLLOW_LINKS)) {
+                if (Files.isRegularFile(dest, LinkOption.NOFOLLOW_LINKS)) {
+                    replaced.add(name);
+                } else {
+                    blocked.add(name + (Files.isDirectory(dest, LinkOption.NOFOLLOW_LINKS) ? " (a folder)"
+                            : Files.isSymbolicLink(dest) ? " (a link)" : " (not a plain file)"));
                 }
+            }
+        }
+        if (!blocked.isEmpty()) {
+            throw new Refused("in " + target + ", where the plan writes its files, stands " + String.join(", ", blocked)
+                    + "; nothing was changed (move it away or choose another folder)");
+        }
+        Map<String, String> removals = new TreeMap<>();
+        List<String> kept = new ArrayList<>();
+        List<String> read = new ArrayList<>();
+        for (Map.Entry<String, String> old : earlierPlanFiles(target).entrySet()) {
+            Path f = target.resolve(old.getKey());
+            if (staged.contains(old.getKey()) || !Files.exists(f, LinkOption.NOFOLLOW_LINKS)) {
+                continue;
+            }
+            if (!Files.isRegularFile(f, LinkOption.NOFOLLOW_LINKS) || !CommitJournal.sha256(f).equals(old.getValue())) {
+                kept.add(old.getKey());
+            } else if (isInput(f)) {
+                read.add(old.getKey());
+            } else {
+                removals.put(old.getKey(), old.getValue()); // written by an earlier plan, unchanged since, and not by this one
+            }
+        }
+        List<String> moves = new ArrayList<>(staged);
+        if (moves.remove(OutputNames.SUMMARY)) {
+            moves.add(OutputNames.SUMMARY); // last: the summary is there only when the rest is
+        }
+        CommitJournal.Plan plan = new CommitJournal.Plan(staging.getFileName().toString(), moves, removals);
+        CommitJournal.write(target, plan, steps);
+        committed = true;
+        try {
+            CommitJournal.carryOut(target, plan, steps);
+        } catch (IOException e) {
+            throw new IOException(e.getMessage() + " (this plan's files are all staged and recorded in "
+                    + target.resolve(CommitJournal.NAME) + ": the next plan into the folder moves them in first)", e);
+        }
+        return new Commit(replaced, new ArrayList<>(removals.keySet()), kept, read);
+    }
+
+    private boolean isInput(Path p) {
+        Path n = p.toAbsolutePath().normalize();
+        for (Path in : inputs) {
+            try {
+                if (n.equals(in) || (Files.exists(n) && Files.exists(in) && Files.isSameFile(n, in))) {
+                    return true;
+                }
+            } catch (IOException e) {
+                return true; // cannot tell: treat it as one
+            }
+        }
+        return false;
+    }
+
+    /** Removes the staging folder unless committed, gives up the lock, removes a target it created for nothing. */
+    @Override
+    public synchronized void close() throws IOException {
+        if (closed) {
+            return;
+        }
+        closed = true;
+        try {
+            Runtime.getRuntime().removeShutdownHook(onStop);
+        } catch (IllegalStateException e) {
+            // shutting down: the hook is this very call, or has made it
+        }
+        try {
+            for (int attempt = 0; !committed && Files.exists(staging, LinkOption.NOFOLLOW_LINKS); attempt++) {
+                try {
+                    CommitJournal.deleteTree(staging);
+                } catch (IOException e) {
+                    if (attempt >= 4) {
+                        throw e; // the writer (stopping) keeps adding files; the next plan removes the rest
+                    }
+                }
+            }
+        } finally {
+            lock.close();
+            if (!committed) {
+                removeCreated(target, firstCreated);
+            }
+        }
+    }
+
+    /** The shutdown hook: waits for a commit under way (it holds the monitor), else drops the staging. */
+    private void stop() {
+        try {
+            close(); // the writer may still be adding files while this runs: close() tries again
+        } catch (IOException | RuntimeException e) {
+            // nothing more can be done while the process stops; the next plan clears what is left
+        }
+    }
+
+    /** Gives up the lock and leaves everything else where it is, as a killed process does (tests only). */
+    synchronized void abandonAsIfKilled() throws IOException {
+        closed = true;
+        Runtime.getRuntime().removeShutdownHook(onStop);
+        lock.dropAsIfKilled();
+    }
+
+    /** Removes the folders from {@code dir} up to {@code firstCreated} while they are empty. */
+    private static void removeCreated(Path dir, Path firstCreated) {
+        if (firstCreated == null) {
+            return;
+        }
+        for (Path p = dir; p != null && p.startsWith(firstCreated); p = p.getParent()) {
+            try {
+                Files.deleteIfExists(p);
+            } catch (IOException e) {
+                return; // not empty (someone else's files): leave it
             }
         }
     }

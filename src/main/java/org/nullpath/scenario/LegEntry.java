@@ -20,8 +20,11 @@ interface LegEntry {
      */
     Read read(Node node, String path, Context context);
 
-    /** What legs may need from the rest of the scenario. */
-    record Context(Values values, Map<String, Station> stations, Path scenarioFile) {
+    /**
+     * What legs may need from the rest of the scenario; {@code alsoRead} collects the other files legs
+     * read (profile tables), so that a plan never writes over them.
+     */
+    record Context(Values values, Map<String, Station> stations, Path scenarioFile, java.util.List<Path> alsoRead) {
     }
 
     /** A leg read, and where it was written. */

@@ -61,6 +61,7 @@ final class MissionReader implements References {
     private final Map<String, Craft> craft = new LinkedHashMap<>();
     private final Map<String, LinkRef> linkInfo = new LinkedHashMap<>();
     private final Map<String, Link> links = new LinkedHashMap<>();
+    private final List<Path> alsoRead = new ArrayList<>();
 
     MissionReader(Values values, ScenarioText source) {
         this.values = values;
@@ -106,7 +107,7 @@ final class MissionReader implements References {
         List<WindowScan> windows = plans.all(list(top, "windows", "window scans"), "windows",
                 "a window scan", PlanReader.WINDOW_KEYS, plans::window);
         problems.throwIfAny();
-        return new Mission(source, title, epoch, List.copyOf(stations.values()), List.copyOf(craft.values()), links,
+        return new Mission(source.reading(alsoRead), title, epoch, List.copyOf(stations.values()), List.copyOf(craft.values()), links,
                 messages, cutoffs, exchanges, windows);
     }
 
@@ -195,7 +196,7 @@ final class MissionReader implements References {
     private void craft(Entry e) {
         String p = KeyPaths.child("craft", e.key());
         boolean nameOk = declare(e, p, true);
-        Craft c = CraftReader.read(e.key(), e.value(), p, values, stations, path);
+        Craft c = CraftReader.read(e.key(), e.value(), p, values, stations, path, alsoRead);
         if (nameOk && c != null) {
             craft.put(e.key(), c);
         }

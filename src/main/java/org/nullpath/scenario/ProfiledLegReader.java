@@ -209,6 +209,7 @@ final class ProfiledLegReader {
         }
         String problem;
         List<double[]> rows = new ArrayList<>();
+        context.alsoRead().add(file);
         problem = readTable(file, name, rows);
         if (problem != null) {
             f.problemAt("file", problem);
