@@ -20,8 +20,11 @@ interface LegEntry {
      */
     Read read(Node node, String path, Context context);
 
-    /** What legs may need from the rest of the scenario. */
-    record Context(Values values, Map<String, Station> stations, Path scenarioFile) {
+    /**
+     * What legs may need from the rest of the scenario; {@code tablesAnywhere}: whether a profile table may lie
+     * outside the scenario's folder tree (the command line's {@code --tables-anywhere}).
+     */
+    record Context(Values values, Map<String, Station> stations, Path scenarioFile, boolean tablesAnywhere) {
     }
 
     /** A leg read, and where it was written. */
