@@ -95,7 +95,7 @@ class IntegratedLegBoundsTest {
     void aProfileThatChangesTooOftenSpendsItsStepBudgetAndIsRefused() {
         // a saw tooth of 1e4 m/s^2 switching every microsecond over 10 s: one step per knot at least,
         // 1e7 knots, far beyond the step budget
-        int n = 2 * IntegratedPiece.MAX_STEPS + 2;
+        int n = 2 * LegIntegration.MAX_STEPS + 2;
         double[] clock = new double[n];
         double[] acc = new double[n];
         for (int i = 0; i < n; i++) {
@@ -104,7 +104,7 @@ class IntegratedLegBoundsTest {
         }
         WorldlineException e = refused(new LegSpec.Profile(clock, acc));
         assertFalse(e.aboutEnd(), e.getMessage());
-        assertTrue(e.getMessage().contains("more than " + IntegratedPiece.MAX_STEPS + " integration steps"),
+        assertTrue(e.getMessage().contains("more than " + LegIntegration.MAX_STEPS + " integration steps"),
                 e.getMessage());
     }
 }
