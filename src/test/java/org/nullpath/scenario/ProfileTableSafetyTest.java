@@ -20,7 +20,8 @@ import org.nullpath.mission.Mission;
 /**
  * Profile tables read from a scenario others may have written: only regular files, by default only inside
  * the scenario's folder tree (symbolic links resolved), plain decimal cells only, a located problem for
- * broken quoting (RFC 4180, section 2, rule 5-7: a quoted field ends at its closing double quote), and
+ * broken quoting (RFC 4180, section 2: a quoted field ends at its closing double quote; rule numbers
+ * from memory), and
  * problems that echo at most the offending cell, sanitised. Every problem sits at the profile's file key
  * (line 8, column 25 of the scenario). All files here are invented for the tests.
  */

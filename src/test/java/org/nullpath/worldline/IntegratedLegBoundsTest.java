@@ -19,7 +19,7 @@ import org.nullpath.spacetime.Vec3;
  * that took minutes), not a measurement. Reference values are closed forms: hyperbolic motion at constant
  * proper acceleration, eta = a tau / c and v = c tanh(eta) (Rindler, Relativity: Special, General and
  * Cosmological, 2006, ch. 3), and Ackeret's rocket equation, eta = (v_ex / c) ln(m0 / m1) (Ackeret,
- * Helv. Phys. Acta 19, 1946). All craft and numbers are invented for the tests.
+ * Helv. Phys. Acta 19, 1946; the citations from memory, the formulas handbook-standard). All craft and numbers are invented for the tests.
  */
 class IntegratedLegBoundsTest {
     static final double C = 299_792_458.0;

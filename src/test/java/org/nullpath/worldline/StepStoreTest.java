@@ -18,7 +18,8 @@ import org.junit.jupiter.api.Test;
  * interpolant through 8 Chebyshev–Lobatto points of each step equals Hipparchus' {@link DenseOutputModel}
  * to 1e-13 of each component's size (the interpolant is the same degree-7 polynomial: Hairer, Nørsett &amp;
  * Wanner, Solving ODEs I, II.6; the rest is rounding, with a Lebesgue constant below 2: Berrut &amp;
- * Trefethen 2004). The system and its numbers are invented for the test.
+ * Trefethen 2004; both citations and the constant from memory, the tolerance common practice for
+ * double rounding of a well-conditioned interpolant). The system and its numbers are invented for the test.
  */
 class StepStoreTest {
     @Test
