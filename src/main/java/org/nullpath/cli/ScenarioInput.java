@@ -27,6 +27,10 @@ final class ScenarioInput {
     @Option(names = "--max-messages", paramLabel = "N", description = "cap on messages per plan (default: ${DEFAULT-VALUE})")
     long maxMessages = DEFAULT_MAX_MESSAGES;
 
+    @Option(names = "--tables-anywhere", description = "let profile tables lie outside the scenario's folder and"
+            + " the folders below it (by default they must lie inside, symbolic links resolved)")
+    boolean tablesAnywhere;
+
     /** The command's standard error. */
     PrintWriter err() {
         return command.commandLine().getErr();
@@ -46,7 +50,7 @@ final class ScenarioInput {
         }
         Mission s;
         try {
-            s = ScenarioLoader.load(scenario);
+            s = ScenarioLoader.load(scenario, tablesAnywhere);
         } catch (ScenarioException e) {
             for (Problem p : e.problems()) {
                 err.println(p.render());

@@ -30,7 +30,7 @@ final class CraftReader {
 
     /** The craft, or null when it has problems (all of them added). */
     static Craft read(String name, Node node, String path, Values values, Map<String, Station> stations,
-                              java.nio.file.Path scenarioFile, List<java.nio.file.Path> alsoRead) {
+                              java.nio.file.Path scenarioFile, List<java.nio.file.Path> alsoRead, boolean tablesAnywhere) {
         Problems problems = values.problems();
         Fields f = Fields.of(node, path, values, "a craft", KEYS);
         if (!f.ok()) {
@@ -59,7 +59,8 @@ final class CraftReader {
         }
         List<LegSpec> legs = new ArrayList<>();
         List<LegEntry.Site> sites = new ArrayList<>();
-        boolean legsOk = legs(f, values, legs, sites, new LegEntry.Context(values, stations, scenarioFile, alsoRead));
+        boolean legsOk = legs(f, values, legs, sites, new LegEntry.Context(values, stations, scenarioFile, alsoRead,
+                tablesAnywhere));
         if (start == null || heading == null || Double.isNaN(startTime) || Double.isNaN(startClock)
                 || Double.isNaN(startSpeed) || !legsOk) {
             return null;

@@ -21,10 +21,12 @@ interface LegEntry {
     Read read(Node node, String path, Context context);
 
     /**
-     * What legs may need from the rest of the scenario; {@code alsoRead} collects the other files legs
-     * read (profile tables), so that a plan never writes over them.
+     * What legs may need from the rest of the scenario: {@code alsoRead} collects the other files legs
+     * read (profile tables), so that a plan never writes over them; {@code tablesAnywhere}: whether a profile
+     * table may lie outside the scenario's folder tree (the command line's {@code --tables-anywhere}).
      */
-    record Context(Values values, Map<String, Station> stations, Path scenarioFile, java.util.List<Path> alsoRead) {
+    record Context(Values values, Map<String, Station> stations, Path scenarioFile, java.util.List<Path> alsoRead,
+                   boolean tablesAnywhere) {
     }
 
     /** A leg read, and where it was written. */

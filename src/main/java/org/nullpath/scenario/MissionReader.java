@@ -62,8 +62,10 @@ final class MissionReader implements References {
     private final Map<String, LinkRef> linkInfo = new LinkedHashMap<>();
     private final Map<String, Link> links = new LinkedHashMap<>();
     private final List<Path> alsoRead = new ArrayList<>();
+    private final boolean tablesAnywhere;
 
-    MissionReader(Values values, ScenarioText source) {
+    MissionReader(Values values, ScenarioText source, boolean tablesAnywhere) {
+        this.tablesAnywhere = tablesAnywhere;
         this.values = values;
         this.problems = values.problems();
         this.path = source.file();
@@ -196,7 +198,7 @@ final class MissionReader implements References {
     private void craft(Entry e) {
         String p = KeyPaths.child("craft", e.key());
         boolean nameOk = declare(e, p, true);
-        Craft c = CraftReader.read(e.key(), e.value(), p, values, stations, path, alsoRead);
+        Craft c = CraftReader.read(e.key(), e.value(), p, values, stations, path, alsoRead, tablesAnywhere);
         if (nameOk && c != null) {
             craft.put(e.key(), c);
         }

@@ -1,18 +1,10 @@
 package org.nullpath.scenario;
 
-import java.io.IOException;
-import java.io.Reader;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
-import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVParser;
-import org.apache.commons.csv.CSVRecord;
 import org.nullpath.mission.Station;
 import org.nullpath.scenario.YamlTree.Node;
 import org.nullpath.units.Constants;
@@ -24,14 +16,10 @@ import org.nullpath.worldline.LegSpec;
 /**
  * Reads the profiled legs (docs/scenario-format.md, "Legs"): {@code rocket} (constant proper
  * acceleration with exhaust speed and mass ratio, or constant thrust with initial and burnout mass),
- * {@code sail} (pushed by a beam from a station) and {@code profile} (a CSV table of acceleration).
+ * {@code sail} (pushed by a beam from a station) and {@code profile} (a CSV table of acceleration, read by {@link ProfileTable}).
  * Each ends by its own physics unless an end key ({@link LegSpec#LIMITED_END_KEYS}) ends it earlier.
  */
 final class ProfiledLegReader {
-    /** Largest profile table read, in bytes. */
-    static final long MAX_PROFILE_BYTES = 16L * 1024 * 1024;
-    static final String CLOCK_COLUMN = "clock_s";
-    static final String ACCELERATION_COLUMN = "acceleration_m_s2";
     static final List<String> ROCKET_KEYS = ConstantLegReader.keys(List.of("acceleration", "exhaust-speed",
             "mass-ratio", "thrust", "initial-mass", "burnout-mass"), LegSpec.LIMITED_END_KEYS);
     static final List<String> SAIL_KEYS = ConstantLegReader.keys(List.of("beam-from", "beam-power", "mass",
@@ -196,94 +184,18 @@ final class ProfiledLegReader {
         if (name == null) {
             return null;
         }
-        Path file;
-        try {
-            file = Path.of(name);
-            if (!file.isAbsolute()) {
-                Path dir = scenarioFile.toAbsolutePath().getParent();
-                file = dir == null ? file : dir.resolve(file);
-            }
-        } catch (InvalidPathException e) {
-            f.problemAt("file", "'" + name + "' is not a usable path");
+        ProfileTable.Read table = ProfileTable.read(name, scenarioFile, context.tablesAnywhere());
+        if (table.problem() != null) {
+            f.problemAt("file", table.problem());
             return null;
         }
-        String problem;
-        List<double[]> rows = new ArrayList<>();
-        context.alsoRead().add(file);
-        problem = readTable(file, name, rows);
-        if (problem != null) {
-            f.problemAt("file", problem);
-            return null;
-        }
-        double[] clocks = new double[rows.size()];
-        double[] accelerations = new double[rows.size()];
-        for (int i = 0; i < rows.size(); i++) {
-            clocks[i] = rows.get(i)[0];
-            accelerations[i] = rows.get(i)[1];
-        }
+        context.alsoRead().add(table.file());
+        double[] clocks = table.clocks();
+        double[] accelerations = table.accelerations();
         if (!end.ok()) {
             return null;
         }
         return read(end.end() == null ? new LegSpec.Profile(clocks, accelerations)
                 : new LegSpec.Profile(clocks, accelerations, end.end()), n, path, f.get("file"), f.path("file"), end);
-    }
-
-    /** Reads the table into {@code rows}; returns a problem naming the file, row and column, or null. */
-    private static String readTable(Path file, String name, List<double[]> rows) {
-        if (!Files.isRegularFile(file)) {
-            return "profile table '" + name + "' not found (looked for " + file + ")";
-        }
-        try {
-            if (Files.size(file) > MAX_PROFILE_BYTES) {
-                return "profile table '" + name + "' is larger than " + MAX_PROFILE_BYTES / (1024 * 1024) + " MiB";
-            }
-        } catch (IOException e) {
-            return "profile table '" + name + "' cannot be read: " + e.getMessage();
-        }
-        CSVFormat format = CSVFormat.DEFAULT.builder().setHeader().setSkipHeaderRecord(true).setTrim(true)
-                .setIgnoreEmptyLines(true).get();
-        try (Reader r = Files.newBufferedReader(file, StandardCharsets.UTF_8); CSVParser parser = format.parse(r)) {
-            List<String> header = parser.getHeaderNames();
-            for (String column : List.of(CLOCK_COLUMN, ACCELERATION_COLUMN)) {
-                if (!header.contains(column)) {
-                    return name + ": the header needs the columns " + CLOCK_COLUMN + " and " + ACCELERATION_COLUMN
-                            + ", found " + header;
-                }
-            }
-            double previous = Double.NEGATIVE_INFINITY;
-            for (CSVRecord rec : parser) {
-                long row = rec.getRecordNumber() + 1; // the header is row 1
-                double[] v = new double[2];
-                String[] columns = {CLOCK_COLUMN, ACCELERATION_COLUMN};
-                for (int k = 0; k < 2; k++) {
-                    String cell = rec.isMapped(columns[k]) && rec.isSet(columns[k]) ? rec.get(columns[k]) : "";
-                    try {
-                        v[k] = Double.parseDouble(cell);
-                    } catch (NumberFormatException e) {
-                        return name + ": row " + row + ", column " + columns[k] + ": expected a number, got '" + cell + "'";
-                    }
-                    if (!Double.isFinite(v[k])) {
-                        return name + ": row " + row + ", column " + columns[k] + ": expected a finite number, got '"
-                                + cell + "'";
-                    }
-                }
-                if (rows.isEmpty() && v[0] != 0) {
-                    return name + ": row " + row + ", column " + CLOCK_COLUMN + ": the first sample must be at clock 0"
-                            + " (the leg start), got " + Values.format(v[0]);
-                }
-                if (!(v[0] > previous)) {
-                    return name + ": row " + row + ", column " + CLOCK_COLUMN + ": clock values must increase strictly"
-                            + " (got " + Values.format(v[0]) + " after " + Values.format(previous) + ")";
-                }
-                previous = v[0];
-                rows.add(v);
-            }
-        } catch (IOException | IllegalArgumentException | IllegalStateException e) {
-            return "profile table '" + name + "' cannot be read as CSV: " + e.getMessage();
-        }
-        if (rows.size() < 2) {
-            return name + ": a profile needs at least two samples, found " + rows.size();
-        }
-        return null;
     }
 }

@@ -71,8 +71,18 @@ public final class ScenarioDocument {
      * @throws ScenarioException with every problem found, each at its file, line, column and key
      */
     public Mission resolve() throws ScenarioException {
+        return resolve(false);
+    }
+
+    /**
+     * The resolved mission, validated; with {@code tablesAnywhere}, profile tables may lie outside the
+     * scenario's folder tree (docs/scenario-format.md, "Profile tables").
+     *
+     * @throws ScenarioException with every problem found, each at its file, line, column and key
+     */
+    public Mission resolve(boolean tablesAnywhere) throws ScenarioException {
         Problems problems = parsed.copy();
-        return new MissionReader(new Values(problems), source).mission(root);
+        return new MissionReader(new Values(problems), source, tablesAnywhere).mission(root);
     }
 
     /**

@@ -28,7 +28,17 @@ public final class ScenarioLoader {
      * @throws ScenarioException with every problem found, including a missing, unreadable or oversized file
      */
     public static Mission load(Path file) throws ScenarioException {
-        return ScenarioDocument.read(file).resolve();
+        return load(file, false);
+    }
+
+    /**
+     * As {@link #load(Path)}; with {@code tablesAnywhere}, profile tables may lie outside the scenario's folder
+     * tree (by default they must lie inside it, symbolic links resolved).
+     *
+     * @throws ScenarioException with every problem found
+     */
+    public static Mission load(Path file, boolean tablesAnywhere) throws ScenarioException {
+        return ScenarioDocument.read(file).resolve(tablesAnywhere);
     }
 
     /**

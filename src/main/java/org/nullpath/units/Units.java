@@ -101,8 +101,13 @@ public final class Units {
     private static final Pattern RELATIVE_TEMPERATURE = Pattern.compile(
             "(?i)\\s*[+-]?[0-9.]+(e[+-]?[0-9]+)?\\s*(deg|\u00b0|degrees)\\s*[cf]\\s*");
 
-    private static final Pattern FORM = Pattern.compile(
-            "\\s*([+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?)\\s*(\\S*)\\s*");
+    /**
+     * The plain decimal NUMBER of a quantity: an optional sign, digits with an optional point, an optional
+     * exponent ({@code [+-]digits[.digits][e[+-]digits]}); no hexadecimal, no type suffixes, no NaN or Infinity.
+     */
+    public static final Pattern NUMBER = Pattern.compile("[+-]?(?:\\d+(?:\\.\\d*)?|\\.\\d+)(?:[eE][+-]?\\d+)?");
+
+    private static final Pattern FORM = Pattern.compile("\\s*(" + NUMBER.pattern() + ")\\s*(\\S*)\\s*");
 
     /**
      * Parses {@code text} as a quantity of dimension {@code expected}.

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Collections;
 import java.util.List;
 
+import org.hipparchus.exception.MathRuntimeException;
 import org.nullpath.spacetime.Hyperbolic;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
@@ -56,8 +57,16 @@ final class FlightPlan {
                 throw new WorldlineException(i, "an open-ended leg (duration: forever) must be the last leg");
             }
             LineState lo = withSegment(cur, segs.size());
-            LegFlight flight = leg.fly(new LegStart(i, lo, startPosition, n));
-            double du = leg.end().properTime(flight);
+            LegFlight flight;
+            double du;
+            try {
+                flight = leg.fly(new LegStart(i, lo, startPosition, n));
+                du = leg.end().properTime(flight);
+            } catch (MathRuntimeException e) {
+                // a root search on an extreme leg that does not converge in double precision
+                throw new WorldlineException(i, "the leg cannot be computed in double precision (its end or its"
+                        + " own limit is not found); shorten the leg or weaken its acceleration");
+            }
             if (openEnded) {
                 Piece forever = flight.piece(du);
                 segs.add(new Segment(forever, lo, lo, null));

@@ -1,31 +1,30 @@
 package org.nullpath.worldline;
 
 import org.hipparchus.analysis.solvers.AllowedSolution;
-import org.hipparchus.analysis.solvers.BracketedUnivariateSolver;
 import org.hipparchus.analysis.solvers.BracketingNthOrderBrentSolver;
 import org.hipparchus.analysis.UnivariateFunction;
-import org.hipparchus.ode.DenseOutputModel;
-import org.hipparchus.ode.ODEState;
-import org.hipparchus.ode.ODEStateAndDerivative;
-import org.hipparchus.ode.OrdinaryDifferentialEquation;
-import org.hipparchus.ode.events.Action;
-import org.hipparchus.ode.events.AdaptableInterval;
-import org.hipparchus.ode.events.ODEEventDetector;
-import org.hipparchus.ode.events.ODEEventHandler;
-import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.nullpath.units.Constants;
 
 /**
  * A leg whose proper acceleration varies (constant thrust, beam-pushed sail, tabulated profile),
  * integrated in proper time u from the leg start with Hipparchus' Dormand–Prince 8(5,3) integrator
- * and kept as dense output so that any point of the leg can be queried.
+ * and kept as dense output ({@link StepStore}) so that any point of the leg can be queried.
  *
- * <p>The state is {@code [eta, t - t0, s - s0, U - U0, V - V0]} with U = c t - s, V = c t + s:
+ * <p>The state is {@code [eta, t - t0, (s - s0)/c, (U - U0)/c, (V - V0)/c]} with U = c t - s, V = c t + s:
  * <pre>
- *   d eta/du = a(u, eta) / c,  dt/du = cosh eta,  ds/du = c sinh eta,  dU/du = c e^-eta,  dV/du = c e^eta
+ *   d eta/du = a(u, eta) / c,  dt/du = cosh eta,  d(s/c)/du = sinh eta,  d(U/c)/du = e^-eta,  d(V/c)/du = e^eta
  * </pre>
  * Integrating the null coordinates directly (rather than forming c t -+ s afterwards) keeps them
- * free of cancellation at high rapidity. Tolerance: {@value #RELATIVE_TOLERANCE} relative per step;
+ * free of cancellation at high rapidity; dividing the lengths by c keeps every derivative finite up to
+ * rapidity 709 (c e^eta would overflow from rapidity 690, below {@link StraightLineCraft#MAX_RAPIDITY}).
+ *
+ * <p>Bounds (so that hostile or extreme legs end within seconds and a bounded heap): the integration
+ * stops where |eta| reaches {@link StraightLineCraft#MAX_RAPIDITY} (a Hipparchus event), when the
+ * step or evaluation budget of LegIntegration is spent, or where the state stops being finite. The
+ * piece then ends there and carries the reason ({@link #cut()}); an end condition met before that point
+ * is still honoured, one beyond it is refused with the reason.
+ *
+ * <p>Tolerance: {@value #RELATIVE_TOLERANCE} relative per step;
  * positions and times meet 1e-10 relative against independent quadrature (tests). Inversions (the
  * proper time at which t, U or V reach a value) are Brent solves on the dense output, all of which
  * increase strictly with u. End conditions on the rapidity or the distance, which may turn, are found
@@ -38,16 +37,17 @@ final class IntegratedPiece implements Piece {
 
     private static final double C = Constants.C;
     /**
-     * Relative accuracy (in proper time, with an absolute floor of this times max(leg, 1 s)) to which an
+     * Relative accuracy (in proper time, with an absolute floor of this times the leg's span) to which an
      * end condition is located on the dense output, and to which inversions are solved.
      */
     static final double ROOT_TOLERANCE = 1e-15;
 
+
     static final int ETA = 0;
     static final int T = 1;
     static final int S = 2;
-    private static final int U = 3;
-    private static final int V = 4;
+    static final int U = 3;
+    static final int V = 4;
 
     /**
      * Proper acceleration as a function of proper time since the leg start and of rapidity. Between two
@@ -60,16 +60,23 @@ final class IntegratedPiece implements Piece {
 
     private final LineState start;
     private final Law law;
-    private final DenseOutputModel model;
+    private final StepStore model;
     private final double uEnd;
     private final double[] knots;
+    private final String cut;
 
-    private IntegratedPiece(LineState start, Law law, DenseOutputModel model, double uEnd, double[] knots) {
+    IntegratedPiece(LineState start, Law law, StepStore model, double uEnd, double[] knots, String cut) {
         this.start = start;
         this.law = law;
         this.model = model;
         this.uEnd = uEnd;
         this.knots = knots;
+        this.cut = cut;
+    }
+
+    /** Why the integration stopped before the leg's own limit (a sentence for the user), or null when it did not. */
+    String cut() {
+        return cut;
     }
 
     /** The same motion ended after proper time {@code du} (at most the integrated span). */
@@ -80,7 +87,7 @@ final class IntegratedPiece implements Piece {
         if (!(du >= 0 && du < uEnd)) {
             throw new IllegalArgumentException("a leg can only end inside its integrated span");
         }
-        return new IntegratedPiece(start, law, model, du, knots);
+        return new IntegratedPiece(start, law, model, du, knots, cut);
     }
 
     /**
@@ -144,7 +151,7 @@ final class IntegratedPiece implements Piece {
 
     private double solve(UnivariateFunction f, double a, double b) {
         BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(ROOT_TOLERANCE,
-                ROOT_TOLERANCE * Math.max(uEnd, 1), 0.0, 5);
+                ROOT_TOLERANCE * Math.max(uEnd, Double.MIN_NORMAL), 0.0, 5);
         return solver.solve(400, f, a, b, AllowedSolution.ANY_SIDE);
     }
 
@@ -153,126 +160,18 @@ final class IntegratedPiece implements Piece {
         return uEnd;
     }
 
-    private static OrdinaryDifferentialEquation equations(Law law) {
-        return new OrdinaryDifferentialEquation() {
-            @Override
-            public int getDimension() {
-                return 5;
-            }
-
-            @Override
-            public double[] computeDerivatives(double u, double[] y) {
-                double eta = y[ETA];
-                // Math.sinh, not (e^eta - e^-eta)/2, which cancels to noise at small rapidity
-                return new double[] {law.at(u, eta) / C, Math.cosh(eta), C * Math.sinh(eta),
-                                     C * Math.exp(-eta), C * Math.exp(eta)};
-            }
-        };
-    }
-
-    private static DormandPrince853Integrator integrator(double span) {
-        // absolute floors far below anything a link planner resolves (1e-20 in rapidity, a picosecond,
-        // a nanometre), so error control stays relative also early in the leg where the offsets are small,
-        // without driving the step size to zero where an offset starts flat
-        double[] abs = {1e-20, 1e-12, 1e-9, 1e-9, 1e-9};
-        double[] rel = {RELATIVE_TOLERANCE, RELATIVE_TOLERANCE, RELATIVE_TOLERANCE, RELATIVE_TOLERANCE,
-                        RELATIVE_TOLERANCE};
-        return new DormandPrince853Integrator(0.0, Math.max(span, 1e-9), abs, rel);
-    }
-
-    /**
-     * Integrates from {@code start} through the given knots (ascending proper times from the leg start,
-     * the first 0, the last the leg's end), restarting at each knot where the law's derivative may jump.
-     */
-    static IntegratedPiece throughKnots(LineState start, Law law, double[] knots) {
-        OrdinaryDifferentialEquation ode = equations(law);
-        DenseOutputModel all = new DenseOutputModel();
-        double[] y = {start.rapidity(), 0, 0, 0, 0};
-        boolean first = true;
-        for (int i = 0; i + 1 < knots.length; i++) {
-            double a = knots[i];
-            double b = knots[i + 1];
-            DormandPrince853Integrator integrator = integrator(b - a);
-            DenseOutputModel part = new DenseOutputModel();
-            integrator.addStepHandler(part);
-            ODEStateAndDerivative end = integrator.integrate(ode, new ODEState(a, y), b);
-            y = end.getPrimaryState();
-            if (first) {
-                all = part;
-                first = false;
-            } else {
-                all.append(part);
-            }
-        }
-        return new IntegratedPiece(start, law, all, knots[knots.length - 1], knots.clone());
-    }
-
-    /**
-     * Integrates from {@code start} until U - U0 reaches {@code targetU} (a switching function handled
-     * by Hipparchus' event detection), extending the span by doubling from {@code guess}.
-     *
-     * @throws IllegalArgumentException when the target is not reached within 2^60 times the guess
-     */
-    static IntegratedPiece untilU(LineState start, Law law, double targetU, double guess) {
-        OrdinaryDifferentialEquation ode = equations(law);
-        DenseOutputModel all = null;
-        double[] y = {start.rapidity(), 0, 0, 0, 0};
-        double a = 0;
-        double b = Math.max(guess, 1e-6);
-        for (int k = 0; k < 60; k++) {
-            DormandPrince853Integrator integrator = integrator(b - a);
-            DenseOutputModel part = new DenseOutputModel();
-            integrator.addStepHandler(part);
-            integrator.addEventDetector(new ReachU(targetU, b - a));
-            ODEStateAndDerivative end = integrator.integrate(ode, new ODEState(a, y), b);
-            if (all == null) {
-                all = part;
-            } else {
-                all.append(part);
-            }
-            y = end.getPrimaryState();
-            if (y[U] >= targetU || end.getTime() < b) {
-                return new IntegratedPiece(start, law, all, end.getTime(), new double[] {0, end.getTime()});
-            }
-            a = b;
-            b = 2 * b;
-        }
-        throw new IllegalArgumentException("the leg end is not reached within any representable time");
-    }
-
-    /** The switching function U - U0 - target, which increases strictly along the leg. */
-    private record ReachU(double target, double span) implements ODEEventDetector {
-        @Override
-        public AdaptableInterval getMaxCheckInterval() {
-            return AdaptableInterval.of(span);
-        }
-
-        @Override
-        public int getMaxIterationCount() {
-            return 200;
-        }
-
-        @Override
-        public BracketedUnivariateSolver<UnivariateFunction> getSolver() {
-            return new BracketingNthOrderBrentSolver(1e-15, 1e-15 * Math.max(span, 1), 0.0, 5);
-        }
-
-        @Override
-        public ODEEventHandler getHandler() {
-            return (state, detector, increasing) -> Action.STOP;
-        }
-
-        @Override
-        public double g(ODEStateAndDerivative state) {
-            return state.getPrimaryState()[U] - target;
-        }
-    }
-
     private double[] y(double u) {
         if (u <= 0) {
             return new double[] {start.rapidity(), 0, 0, 0, 0};
         }
-        return model.getInterpolatedState(Math.min(u, uEnd)).getPrimaryState();
+        if (model.steps() == 0) {
+            return new double[] {start.rapidity(), 0, 0, 0, 0};
+        }
+        double[] y = model.at(Math.min(u, uEnd));
+        y[S] *= C;
+        y[U] *= C;
+        y[V] *= C;
+        return y;
     }
 
     private double local(LineState cur) {
@@ -300,7 +199,7 @@ final class IntegratedPiece implements Piece {
         if (fHi == 0) {
             return hi - u0;
         }
-        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(ROOT_TOLERANCE, ROOT_TOLERANCE * Math.max(uEnd, 1),
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(ROOT_TOLERANCE, ROOT_TOLERANCE * Math.max(uEnd, Double.MIN_NORMAL),
                 0.0, 5);
         double u = solver.solve(400, x -> y(x)[k] - target, lo, hi, AllowedSolution.ANY_SIDE);
         return u - u0;

@@ -219,8 +219,22 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
             return piece.endedAt(du);
         }
 
+        /** A refusal at the leg (not its end) when the integration stopped short of the leg's own limit. */
+        private void checkNotCut() {
+            if (piece.cut() != null) {
+                throw new WorldlineException(start.index(), piece.cut());
+            }
+        }
+
+        @Override
+        public double atLimit() {
+            checkNotCut();
+            return super.atLimit();
+        }
+
         private double found(double du, String what, String atLimit) {
             if (Double.isNaN(du)) {
+                checkNotCut();
                 throw refusal(what + " is not reached before " + limitName + " (" + atLimit + ")");
             }
             return du;
@@ -234,6 +248,7 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
         @Override
         public double afterClock(double seconds) {
             if (!(seconds <= limit)) {
+                checkNotCut();
                 throw refusal("duration " + num(seconds) + " s is not reached before " + limitName + " (after " + num(limit)
                         + " s of craft clock)");
             }

@@ -241,7 +241,7 @@ public sealed interface LegSpec {
             double f = thrustNewtons;
             double m0 = initialMassKg;
             double rate = Math.abs(f) / exhaustSpeedMetresPerSecond;
-            return LegFlight.integrated(start, IntegratedPiece.throughKnots(start.state(),
+            return LegFlight.integrated(start, LegIntegration.throughKnots(start.state(),
                     (u, eta) -> f / (m0 - rate * u), new double[] {0, burnTime()}), "the propellant is spent");
         }
     }
@@ -289,7 +289,7 @@ public sealed interface LegSpec {
             BeamFront beam = BeamFront.of(start, beamStation, beamOffClock);
             double k = (1 + reflectivity) * beamPowerWatts / (massKg * Constants.C);
             double etaStation = beam.stationRapidity();
-            return LegFlight.integrated(start, IntegratedPiece.untilU(start.state(),
+            return LegFlight.integrated(start, LegIntegration.untilU(start.state(),
                     (u, eta) -> k * Math.exp(-2 * (eta - etaStation)), beam.switchOffU(), beam.switchOffU() / Constants.C),
                     "the beam's switch-off reaches the sail");
         }
@@ -348,7 +348,7 @@ public sealed interface LegSpec {
         @Override
         public LegFlight fly(LegStart start) {
             // linear between samples: the acceleration changes sign at most once between knots
-            return LegFlight.integrated(start, IntegratedPiece.throughKnots(start.state(), (u, eta) -> at(u), clockSeconds),
+            return LegFlight.integrated(start, LegIntegration.throughKnots(start.state(), (u, eta) -> at(u), clockSeconds),
                     "the profile's last sample");
         }
 
