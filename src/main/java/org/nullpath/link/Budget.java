@@ -107,28 +107,6 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
         return reception.maxDataRateBps();
     }
 
-    /** C/N0, dB-Hz; NaN unless the reception is coherent. */
-    public double cn0DbHz() {
-        return reception(Reception.Coherent.class).map(Reception.Coherent::cn0DbHz).orElse(Double.NaN);
-    }
-
-    /** Eb/N0, dB; NaN unless the reception is coherent. */
-    public double ebN0Db() {
-        return reception(Reception.Coherent.class).map(Reception.Coherent::ebN0Db).orElse(Double.NaN);
-    }
-
-    /** Received photons per second; NaN unless the reception is photon counting. */
-    public double rxPhotonRatePerS() {
-        return reception(Reception.PhotonCounting.class).map(Reception.PhotonCounting::rxPhotonRatePerS)
-                .orElse(Double.NaN);
-    }
-
-    /** Received photons per bit; NaN unless the reception is photon counting. */
-    public double photonsPerBit() {
-        return reception(Reception.PhotonCounting.class).map(Reception.PhotonCounting::photonsPerBit)
-                .orElse(Double.NaN);
-    }
-
     /**
      * True when a message would be received: margin >= 0 (or no far-field margin at all, sender and
      * receiver being at one place), in the tuning range, within the rate limit.
