@@ -126,6 +126,12 @@ public final class HtmlReport {
         h.append("</section>\n");
     }
 
+    /**
+     * Links whose charts the report draws, in file order: a page with more would take minutes to draw and be
+     * too long to read; every link keeps its facts, and its CSV file holds every value.
+     */
+    static final int CHARTED_LINKS = 40;
+
     private static void linkSections(StringBuilder h, Mission s, PlanResult r,
                                      List<SampledSeries.LinkSeries> series) {
         h.append("<section id=\"links\">\n<h2>Links</h2>\n");
@@ -140,6 +146,12 @@ public final class HtmlReport {
                     .append(" <span class=\"ends\">").append(Html.escape(ls.from())).append(" \u2192 ")
                     .append(Html.escape(ls.to())).append("</span></h3>\n");
             facts(h, ls, t);
+            if (i >= CHARTED_LINKS) {
+                h.append("<p class=\"empty\">Charts are drawn for the first ").append(CHARTED_LINKS)
+                        .append(" links of a scenario; this link's values are in its CSV file and in summary.json.</p>\n")
+                        .append("</section>\n");
+                continue;
+            }
             for (LinkCharts.Plot p : LinkCharts.of(ls, t.maxLightTime())) {
                 h.append("<figure id=\"fig-").append(id).append('-').append(p.name()).append("\">\n<h4>")
                         .append(Html.escape(p.heading())).append("</h4>\n").append(p.figure().svg())
