@@ -1,5 +1,7 @@
 package org.nullpath.cli;
 
+import org.nullpath.testkit.ScenarioText;
+
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -24,20 +26,9 @@ class OutputTargetTest {
     Path tmp;
 
     /** A small invented scenario: one dock, one craft, one link. */
-    private static final String SCENARIO = """
-            title: Plover target trial
-            stations:
-              pier: {}
-            craft:
-              plover:
-                heading: [1, 0, 0]
-                legs:
-                  - burn: {acceleration: 0.1 g0, duration: 30 d}
-            links:
-              up: {from: pier, to: plover}
-            messages:
-              - {link: up, first: 0 d, last: 20 d, every: 10 d}
-            """;
+    private static final String SCENARIO = ScenarioText.titled("Plover target trial").station("pier", "{}")
+            .craft("plover", "heading: [1, 0, 0]", "burn: {acceleration: 0.1 g0, duration: 30 d}")
+            .link("up", "pier", "plover").message("{link: up, first: 0 d, last: 20 d, every: 10 d}").yaml();
 
     private Path scenario() throws IOException {
         Path f = tmp.resolve("plover.yaml");

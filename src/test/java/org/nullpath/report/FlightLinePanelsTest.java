@@ -10,6 +10,7 @@ import org.nullpath.mission.Mission;
 import org.nullpath.scenario.ScenarioLoader;
 import org.nullpath.schedule.DiagramTraces;
 import org.nullpath.schedule.SampledSeries;
+import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -20,34 +21,17 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
  */
 class FlightLinePanelsTest {
     /** Invented mission: two craft leave one station along x and along y, a third flies back along -x. */
-    private static final String MISSION = """
-            title: Crossed lines
-            stations:
-              hub: {}
-            craft:
-              east:
-                heading: [1, 0, 0]
-                legs:
-                  - burn: {acceleration: 1 g0, duration: 30 d}
-              north:
-                heading: [0, 1, 0]
-                legs:
-                  - burn: {acceleration: 2 g0, duration: 30 d}
-              west:
-                heading: [-1, 0, 0]
-                legs:
-                  - burn: {acceleration: 1 g0, duration: 30 d}
-            links:
-              e-down: {from: east, to: hub}
-              n-down: {from: north, to: hub}
-              w-down: {from: west, to: hub}
-              n-up: {from: hub, to: north}
-            messages:
-              - {link: e-down, first: 0 d, last: 30 d, every: 5 d}
-              - {link: n-down, first: 0 d, last: 30 d, every: 5 d}
-              - {link: w-down, first: 0 d, last: 30 d, every: 5 d}
-              - {link: n-up, first: 0 d, last: 30 d, every: 5 d}
-            """;
+    private static final String MISSION = ScenarioText.titled("Crossed lines").station("hub", "{}")
+            .craft("east", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: 30 d}")
+            .craft("north", "heading: [0, 1, 0]", "burn: {acceleration: 2 g0, duration: 30 d}")
+            .craft("west", "heading: [-1, 0, 0]", "burn: {acceleration: 1 g0, duration: 30 d}")
+            .link("e-down", "east", "hub").link("n-down", "north", "hub").link("w-down", "west", "hub")
+            .link("n-up", "hub", "north")
+            .message("{link: e-down, first: 0 d, last: 30 d, every: 5 d}")
+            .message("{link: n-down, first: 0 d, last: 30 d, every: 5 d}")
+            .message("{link: w-down, first: 0 d, last: 30 d, every: 5 d}")
+            .message("{link: n-up, first: 0 d, last: 30 d, every: 5 d}")
+            .yaml();
 
     @Test
     void eachFlightLineHasItsOwnPanelWithItsOwnCraft() throws Exception {
