@@ -58,5 +58,12 @@ class PastConeOffTheLineTest {
         assertEquals(time, p.send().timeSeconds(), 1e-12 * Math.abs(time), "latest send in mission time");
         double lightTime = deadline.timeSeconds() - time;
         assertEquals(lightTime, p.lightTimeSeconds(), 1e-12 * lightTime, "light time");
+        // the photon's displacement, reception minus emission: its length is c times the light time
+        double[] emit = {ref.position()[0].doubleValue(), ref.position()[1].doubleValue(),
+            ref.position()[2].doubleValue()};
+        double length = C * lightTime;
+        assertEquals(at[0] - emit[0], p.path().x(), 1e-12 * length, "path along x");
+        assertEquals(at[1] - emit[1], p.path().y(), 1e-12 * length, "path along y");
+        assertEquals(at[2] - emit[2], p.path().z(), 1e-12 * length, "path along z");
     }
 }
