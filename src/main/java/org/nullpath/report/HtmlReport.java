@@ -233,22 +233,27 @@ public final class HtmlReport {
         h.append("</ul>\n");
     }
 
-    /** A time for a table cell: readable, with the exact seconds on hover. */
-    private static String time(double seconds) {
+    /** A time for a table cell: shown by {@code shown}, with the exact seconds on hover; a dash where there is none. */
+    private static String timeCell(double seconds, java.util.function.DoubleFunction<String> shown) {
         if (Double.isNaN(seconds)) {
             return "<td class=\"none\">\u2014</td>";
         }
-        return "<td title=\"" + Cells.num(seconds) + " s\">" + Html.escape(Readable.time(seconds)) + "</td>";
+        return "<td title=\"" + Cells.num(seconds) + " s\">" + Html.escape(shown.apply(seconds)) + "</td>";
     }
 
-    /** A latest time: shown rounded toward earlier, full seconds on hover. */
+    /** A time, rounded to the nearest. */
+    private static String time(double seconds) {
+        return timeCell(seconds, Readable::time);
+    }
+
+    /** A latest time: shown rounded toward earlier. */
     private static String latest(double seconds) {
-        return "<td title=\"" + Cells.num(seconds) + " s\">" + Html.escape(Readable.notAfter(seconds)) + "</td>";
+        return timeCell(seconds, Readable::notAfter);
     }
 
-    /** An earliest time: shown rounded toward later, full seconds on hover. */
+    /** An earliest time: shown rounded toward later. */
     private static String earliest(double seconds) {
-        return "<td title=\"" + Cells.num(seconds) + " s\">" + Html.escape(Readable.notBefore(seconds)) + "</td>";
+        return timeCell(seconds, Readable::notBefore);
     }
 
     private static String cell(String text) {
