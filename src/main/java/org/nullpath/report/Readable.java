@@ -19,25 +19,34 @@ public final class Readable {
     private Readable() {
     }
 
+    /** A unit for reading a time: its size in seconds and its symbol. */
+    private record TimeUnit(double seconds, String symbol) {
+    }
+
+    /** The largest convenient unit for a time of size {@code a} seconds: yr, d, h, min or s. */
+    private static TimeUnit unitOf(double a) {
+        if (a >= Constants.JULIAN_YEAR) {
+            return new TimeUnit(Constants.JULIAN_YEAR, " yr");
+        }
+        if (a >= Constants.DAY) {
+            return new TimeUnit(Constants.DAY, " d");
+        }
+        if (a >= 3600) {
+            return new TimeUnit(3600, " h");
+        }
+        return a >= 60 ? new TimeUnit(60, " min") : new TimeUnit(1, " s");
+    }
+
     /** A duration or clock reading in the largest convenient unit, 4 significant digits: "1.234 yr". */
     public static String time(double seconds) {
         if (Double.isNaN(seconds)) {
             return "-";
         }
-        double a = Math.abs(seconds);
-        if (a >= Constants.JULIAN_YEAR) {
-            return fmt(seconds / Constants.JULIAN_YEAR) + " yr";
+        if (seconds == 0) {
+            return "0 s";
         }
-        if (a >= Constants.DAY) {
-            return fmt(seconds / Constants.DAY) + " d";
-        }
-        if (a >= 3600) {
-            return fmt(seconds / 3600) + " h";
-        }
-        if (a >= 60 || a == 0) {
-            return a == 0 ? "0 s" : fmt(seconds / 60) + " min";
-        }
-        return fmt(seconds) + " s";
+        TimeUnit u = unitOf(Math.abs(seconds));
+        return fmt(seconds / u.seconds()) + u.symbol();
     }
 
     /** Significant digits of a deadline: 1 part in 10^7, about 3 s in a year. */
@@ -73,31 +82,14 @@ public final class Readable {
         if (!Double.isFinite(seconds)) {
             return Double.isNaN(seconds) ? "-" : seconds > 0 ? "never" : "always";
         }
-        double a = Math.abs(seconds);
-        double unit;
-        String symbol;
-        if (a >= Constants.JULIAN_YEAR) {
-            unit = Constants.JULIAN_YEAR;
-            symbol = " yr";
-        } else if (a >= Constants.DAY) {
-            unit = Constants.DAY;
-            symbol = " d";
-        } else if (a >= 3600) {
-            unit = 3600;
-            symbol = " h";
-        } else if (a >= 60) {
-            unit = 60;
-            symbol = " min";
-        } else {
-            unit = 1;
-            symbol = " s";
-        }
         if (seconds == 0) {
             return "0 s";
         }
+        TimeUnit u = unitOf(Math.abs(seconds));
         // exact decimal division of the binary values, rounded once in the stated direction
-        BigDecimal v = new BigDecimal(seconds).divide(new BigDecimal(unit), new MathContext(DEADLINE_DIGITS, mode));
-        return v.stripTrailingZeros().toPlainString() + symbol;
+        BigDecimal v = new BigDecimal(seconds).divide(new BigDecimal(u.seconds()),
+                new MathContext(DEADLINE_DIGITS, mode));
+        return v.stripTrailingZeros().toPlainString() + u.symbol();
     }
 
     private static String calendar(Instant epoch, double seconds, RoundingMode mode) {
