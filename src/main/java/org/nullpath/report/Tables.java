@@ -48,33 +48,43 @@ public final class Tables {
             "relative condition number of the light time: it is known to about this times 1.1e-16 relative",
             Delivery::lightTimeCondition);
 
+    private static final Column<Budget> TX_FREQUENCY = Column.number("tx_frequency_hz", "Hz", "transmitted frequency"
+            + " (the carrier, or carrier / D when pre-compensating)", Budget::txFrequencyHz);
+    private static final Column<Budget> RX_FREQUENCY = Column.number("rx_frequency_hz", "Hz", "received frequency",
+            Budget::rxFrequencyHz);
+    private static final Column<Budget> DOPPLER_RATE = Column.number("doppler_rate_hz_per_s", "Hz/s",
+            "d(rx_frequency) / d(receiver clock)", Budget::dopplerRateHzPerS);
+    private static final Column<Budget> IN_TUNING_RANGE = Column.flag("in_tuning_range", "whether the received"
+            + " frequency lies in the tuning range", Budget::inTuningRange);
+    private static final Column<Budget> RX_POWER = Column.number("rx_power_dbw", "dBW", "received power",
+            Budget::rxPowerDbw);
+    private static final Column<Budget> RX_DATA_RATE = Column.number("rx_data_rate_bps", "bit/s", "data rate as"
+            + " received, D x data-rate", Budget::rxDataRateBps);
+    private static final Column<Budget> MAX_DATA_RATE = Column.number("max_data_rate_bps", "bit/s", "highest"
+            + " sender-frame data rate that closes with zero margin", Budget::maxDataRateBps);
+    private static final Column<Budget> WITHIN_DOPPLER_RATE = Column.flag("within_doppler_rate", "whether the Doppler"
+            + " rate's size is within max-doppler-rate (true when none is given)", Budget::withinDopplerRate);
+
     /** The budget columns of a coherent (radio) link. */
-    public static final List<Column<Budget>> COHERENT = List.of(
-            Column.number("tx_frequency_hz", "Hz", "transmitted frequency (the carrier, or carrier / D when"
-                    + " pre-compensating)", Budget::txFrequencyHz),
-            Column.number("rx_frequency_hz", "Hz", "received frequency", Budget::rxFrequencyHz),
-            Column.number("doppler_rate_hz_per_s", "Hz/s", "d(rx_frequency) / d(receiver clock)",
-                    Budget::dopplerRateHzPerS),
-            Column.flag("in_tuning_range", "whether the received frequency lies in the tuning range",
-                    Budget::inTuningRange),
-            Column.number("rx_power_dbw", "dBW", "received power", Budget::rxPowerDbw),
+    public static final List<Column<Budget>> COHERENT = budget(
             coherent("cn0_dbhz", "dB-Hz", "carrier-to-noise density C/N0", Coherent::cn0DbHz),
-            Column.number("rx_data_rate_bps", "bit/s", "data rate as received, D x data-rate", Budget::rxDataRateBps),
-            coherent("ebn0_db", "dB", "Eb/N0", Coherent::ebN0Db),
-            Column.number("margin_db", "dB", "Eb/N0 over the requirement", Budget::marginDb),
-            Column.number("max_data_rate_bps", "bit/s", "highest sender-frame data rate that closes with zero margin",
-                    Budget::maxDataRateBps),
-            Column.flag("within_doppler_rate", "whether the Doppler rate's size is within max-doppler-rate (true"
-                    + " when none is given)", Budget::withinDopplerRate));
+            coherent("ebn0_db", "dB", "Eb/N0", Coherent::ebN0Db), "Eb/N0 over the requirement");
 
     /** The budget columns of a photon-counting (optical) link. */
-    public static final List<Column<Budget>> PHOTON_COUNTING = List.of(
-            COHERENT.get(0), COHERENT.get(1), COHERENT.get(2), COHERENT.get(3), COHERENT.get(4),
+    public static final List<Column<Budget>> PHOTON_COUNTING = budget(
             photons("rx_photon_rate_per_s", "1/s", "received photons per second", PhotonCounting::rxPhotonRatePerS),
-            COHERENT.get(6),
             photons("photons_per_bit", "", "received photons per bit", PhotonCounting::photonsPerBit),
-            Column.number("margin_db", "dB", "photons per bit over the requirement, in dB", Budget::marginDb),
-            COHERENT.get(9), COHERENT.get(10));
+            "photons per bit over the requirement, in dB");
+
+    /**
+     * The budget columns in file order: the shared ones around the detection's own two (its received power
+     * density or rate, after rx_power_dbw; its energy or photons per bit, after rx_data_rate_bps).
+     */
+    private static List<Column<Budget>> budget(Column<Budget> density, Column<Budget> perBit, String marginMeaning) {
+        return List.of(TX_FREQUENCY, RX_FREQUENCY, DOPPLER_RATE, IN_TUNING_RANGE, RX_POWER, density, RX_DATA_RATE,
+                perBit, Column.number("margin_db", "dB", marginMeaning, Budget::marginDb), MAX_DATA_RATE,
+                WITHIN_DOPPLER_RATE);
+    }
 
     /** The columns of {@code <link>.csv} for a link with these terms (if any), with an epoch (if given). */
     public static Table<MessageRow> messages(Optional<LinkTerms> terms, Optional<Instant> epoch) {
