@@ -3,13 +3,11 @@ package org.nullpath.scenario;
 import java.time.DateTimeException;
 import java.time.Duration;
 import java.time.Instant;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.regex.Pattern;
 
 import org.nullpath.mission.Node;
-import org.nullpath.scenario.YamlTree.ListNode;
 import org.nullpath.scenario.YamlTree.Scalar;
 import org.nullpath.scenario.YamlTree.ScalarType;
 import org.nullpath.units.Dimension;
@@ -44,18 +42,7 @@ final class ClockTimes {
 
     /** A list of readings of {@code node}'s clock; null when not a list or any is wrong (every problem added). */
     List<Double> list(Fields f, String key, String node, String what) {
-        YamlTree.Node n = f.get(key);
-        if (!(n instanceof ListNode l)) {
-            return values.quantities(n, f.path(key), Dimension.TIME, what);
-        }
-        List<Double> out = new ArrayList<>(l.items().size());
-        boolean ok = true;
-        for (int i = 0; i < l.items().size(); i++) {
-            double q = reading(l.items().get(i), KeyPaths.item(f.path(key), i), node);
-            ok &= !Double.isNaN(q);
-            out.add(q);
-        }
-        return ok ? out : null;
+        return values.list(f.get(key), f.path(key), Dimension.TIME, what, (item, path) -> reading(item, path, node));
     }
 
     private double reading(YamlTree.Node n, String path, String nodeName) {

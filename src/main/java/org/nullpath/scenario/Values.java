@@ -134,6 +134,20 @@ final class Values {
 
     /** A list of quantities; null when {@code n} is not a list or any element is wrong (every problem added). */
     List<Double> quantities(Node n, String path, Dimension d, String what) {
+        return list(n, path, d, what, (item, itemPath) -> quantity(item, itemPath, d));
+    }
+
+    /** Reads one number of a list at its key path; NaN on a problem (added). */
+    @FunctionalInterface
+    interface ItemReader {
+        double read(Node item, String itemPath);
+    }
+
+    /**
+     * A list of numbers, each read by {@code one}; null when {@code n} is not a list (a problem naming a list of
+     * {@code what} of dimension {@code d}) or any element is wrong (every problem added).
+     */
+    List<Double> list(Node n, String path, Dimension d, String what, ItemReader one) {
         if (!(n instanceof ListNode l)) {
             problems.at(n, path, "expected a list of " + what + " such as [" + Units.example(d).replace("'", "") + "], got "
                     + describe(n));
@@ -142,7 +156,7 @@ final class Values {
         List<Double> out = new ArrayList<>(l.items().size());
         boolean ok = true;
         for (int i = 0; i < l.items().size(); i++) {
-            double q = quantity(l.items().get(i), KeyPaths.item(path, i), d);
+            double q = one.read(l.items().get(i), KeyPaths.item(path, i));
             ok &= !Double.isNaN(q);
             out.add(q);
         }
