@@ -51,7 +51,7 @@ class IndependentIntegrationTest {
     }
 
     /** Stops the integration where g(y) = target. */
-    private record Stop(ToDoubleFunction<double[]> quantity, double target) implements EventHandler {
+    record Stop(ToDoubleFunction<double[]> quantity, double target) implements EventHandler {
         @Override
         public void init(double t0, double[] y0, double t) {
         }

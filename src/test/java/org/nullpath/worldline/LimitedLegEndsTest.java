@@ -5,11 +5,9 @@ import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
-import java.util.function.ToDoubleFunction;
 
 import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.FirstOrderIntegrator;
-import org.apache.commons.math3.ode.events.EventHandler;
 import org.apache.commons.math3.ode.nonstiff.GraggBulirschStoerIntegrator;
 import org.junit.jupiter.api.Test;
 import org.nullpath.spacetime.Vec3;
@@ -33,46 +31,14 @@ class LimitedLegEndsTest {
     static final double INDEPENDENT = 1e-10;
     static final double CLOSED = 1e-12;
 
-    /** Stops the integration where the quantity reaches the target (Commons Math's own event location). */
-    private record Stop(ToDoubleFunction<double[]> quantity, double target) implements EventHandler {
-        @Override
-        public void init(double t0, double[] y0, double t) {
-        }
-
-        @Override
-        public double g(double u, double[] y) {
-            return quantity.applyAsDouble(y) - target;
-        }
-
-        @Override
-        public Action eventOccurred(double u, double[] y, boolean increasing) {
-            return Action.STOP;
-        }
-
-        @Override
-        public void resetState(double u, double[] y) {
-        }
-    }
-
     /**
      * Integrates [eta, t, s] from {@code y0} through the knots until the stop event; returns
      * [u, eta, t, s] at the event, or null when the last knot comes first.
      */
-    static double[] commonsMathUntil(ProfiledLegsAgainstCommonsMathTest.Law law, double[] y0, double[] knots, Stop stop) {
+    static double[] commonsMathUntil(ProfiledLegsAgainstCommonsMathTest.Law law, double[] y0, double[] knots,
+                                     IndependentIntegrationTest.Stop stop) {
         double[] y = y0.clone();
-        FirstOrderDifferentialEquations ode = new FirstOrderDifferentialEquations() {
-            @Override
-            public int getDimension() {
-                return 3;
-            }
-
-            @Override
-            public void computeDerivatives(double x, double[] yy, double[] dot) {
-                dot[0] = law.at(x, yy[0]) / C;
-                dot[1] = Math.cosh(yy[0]);
-                dot[2] = C * Math.sinh(yy[0]);
-            }
-        };
+        FirstOrderDifferentialEquations ode = ProfiledLegsAgainstCommonsMathTest.equations(law);
         for (int i = 1; i < knots.length; i++) {
             double span = knots[i] - knots[i - 1];
             FirstOrderIntegrator gbs = new GraggBulirschStoerIntegrator(1e-12, span,
@@ -210,7 +176,7 @@ class LimitedLegEndsTest {
             assertRelative((M0 - m) * VE / F, end.clock(), CLOSED, "craft clock, thrust sign " + sign);
             assertRelative(eta, end.rapidity(), CLOSED, "rapidity, thrust sign " + sign);
             double[] ref = commonsMathUntil((u, e) -> sign * F / (M0 - F / VE * u), new double[3], thrustKnots(),
-                    new Stop(y -> y[0], eta));
+                    new IndependentIntegrationTest.Stop(y -> y[0], eta));
             assertEndMatches(ref, end, "thrust sign " + sign);
         }
     }
@@ -221,7 +187,7 @@ class LimitedLegEndsTest {
         LineState end = fly(new LegSpec.ThrustRocket(F, M0, M1, VE, new LegSpec.UntilDistance(d))).legs().get(0).end();
         assertRelative(d, end.along(), CLOSED, "distance");
         double[] ref = commonsMathUntil((u, e) -> F / (M0 - F / VE * u), new double[3], thrustKnots(),
-                new Stop(y -> y[2], d));
+                new IndependentIntegrationTest.Stop(y -> y[2], d));
         assertEndMatches(ref, end, "until-distance");
     }
 
@@ -258,7 +224,7 @@ class LimitedLegEndsTest {
         double eta = 0.5 * Math.log((C + v) / (C - v));
         assertRelative(C * Math.expm1(2 * eta) / (2 * K), end.clock(), CLOSED, "craft clock");
         double[] ref = commonsMathUntil((u, e) -> K * Math.exp(-2 * e), new double[3], new double[] {0, 1e7},
-                new Stop(y -> y[0], eta));
+                new IndependentIntegrationTest.Stop(y -> y[0], eta));
         assertEndMatches(ref, end, "sail until-speed");
     }
 
@@ -269,7 +235,7 @@ class LimitedLegEndsTest {
                 List.of(sail(new LegSpec.UntilDistance(d))));
         LineState end = craft.legs().get(0).end();
         double[] ref = commonsMathUntil((u, e) -> K * Math.exp(-2 * e), new double[3], new double[] {0, 1e7},
-                new Stop(y -> y[2], d));
+                new IndependentIntegrationTest.Stop(y -> y[2], d));
         assertEndMatches(ref, end, "sail until-distance");
     }
 
@@ -292,7 +258,7 @@ class LimitedLegEndsTest {
         return new LegSpec.Profile(CLOCKS, ACCEL, end);
     }
 
-    private static double[] profileUntil(Stop stop) {
+    private static double[] profileUntil(IndependentIntegrationTest.Stop stop) {
         LegSpec.Profile p = new LegSpec.Profile(CLOCKS, ACCEL);
         return commonsMathUntil((u, e) -> p.at(u), new double[3], CLOCKS, stop);
     }
@@ -305,7 +271,7 @@ class LimitedLegEndsTest {
         double eta = 0.5 * Math.log((C + v) / (C - v));
         LineState end = fly(profile(new LegSpec.UntilSpeed(v))).legs().get(0).end();
         assertRelative(C * eta / 20, end.clock(), CLOSED, "craft clock on the way up");
-        assertEndMatches(profileUntil(new Stop(y -> y[0], eta)), end, "profile until-speed up");
+        assertEndMatches(profileUntil(new IndependentIntegrationTest.Stop(y -> y[0], eta)), end, "profile until-speed up");
     }
 
     @Test
@@ -314,7 +280,7 @@ class LimitedLegEndsTest {
         double eta = 0.5 * Math.log((C + v) / (C - v));
         LineState end = fly(profile(new LegSpec.UntilSpeed(v))).legs().get(0).end();
         assertTrue(end.clock() > 172_800, "reached on the last, decelerating part");
-        assertEndMatches(profileUntil(new Stop(y -> y[0], eta)), end, "profile until-speed backwards");
+        assertEndMatches(profileUntil(new IndependentIntegrationTest.Stop(y -> y[0], eta)), end, "profile until-speed backwards");
     }
 
     @Test
@@ -322,14 +288,14 @@ class LimitedLegEndsTest {
         double d = -1e9;
         LineState end = fly(profile(new LegSpec.UntilDistance(d))).legs().get(0).end();
         assertRelative(d, end.along(), CLOSED, "distance");
-        assertEndMatches(profileUntil(new Stop(y -> y[2], d)), end, "profile until-distance backwards");
+        assertEndMatches(profileUntil(new IndependentIntegrationTest.Stop(y -> y[2], d)), end, "profile until-distance backwards");
     }
 
     @Test
     void aProfileReachesAForwardDistanceBeforeTurningRound() {
         double d = 1e10;
         LineState end = fly(profile(new LegSpec.UntilDistance(d))).legs().get(0).end();
-        assertEndMatches(profileUntil(new Stop(y -> y[2], d)), end, "profile until-distance forwards");
+        assertEndMatches(profileUntil(new IndependentIntegrationTest.Stop(y -> y[2], d)), end, "profile until-distance forwards");
     }
 
     @Test
@@ -341,19 +307,19 @@ class LimitedLegEndsTest {
         double eta = 0.5 * Math.log((C + v) / (C - v));
         LineState end = fly(profile(new LegSpec.UntilSpeed(v))).legs().get(0).end();
         assertTrue(end.clock() > 86_400 && end.clock() < 115_200, "on the ramp, before the peak: " + end.clock());
-        assertEndMatches(profileUntil(new Stop(y -> y[0], eta)), end, "profile until-speed near the peak");
+        assertEndMatches(profileUntil(new IndependentIntegrationTest.Stop(y -> y[0], eta)), end, "profile until-speed near the peak");
     }
 
     @Test
     void aProfileFindsADistanceReachedAndLeftBetweenTwoSamples() {
         // the craft turns round (rapidity 0) between the third and fourth samples; a distance just short
         // of the turning point is reached and left again within that stretch
-        double[] turn = profileUntil(new Stop(y -> y[0], 0.0));
+        double[] turn = profileUntil(new IndependentIntegrationTest.Stop(y -> y[0], 0.0));
         assertTrue(turn != null && turn[0] > 172_800, "the reference turns round on the last stretch");
         double d = turn[3] - 1e8;
         LineState end = fly(profile(new LegSpec.UntilDistance(d))).legs().get(0).end();
         assertTrue(end.clock() > 172_800 && end.clock() < turn[0], "before the turning point: " + end.clock());
-        assertEndMatches(profileUntil(new Stop(y -> y[2], d)), end, "profile until-distance near the turn");
+        assertEndMatches(profileUntil(new IndependentIntegrationTest.Stop(y -> y[2], d)), end, "profile until-distance near the turn");
     }
 
     @Test
@@ -373,7 +339,7 @@ class LimitedLegEndsTest {
         LineState end = fly(new LegSpec.ThrustRocket(F, M0, M1, VE, new LegSpec.MissionDuration(t))).legs().get(0).end();
         assertRelative(t, end.timeSeconds(), CLOSED, "mission time");
         double[] ref = commonsMathUntil((u, e) -> F / (M0 - F / VE * u), new double[3], thrustKnots(),
-                new Stop(y -> y[1], t));
+                new IndependentIntegrationTest.Stop(y -> y[1], t));
         assertEndMatches(ref, end, "thrust rocket duration-mission");
     }
 }

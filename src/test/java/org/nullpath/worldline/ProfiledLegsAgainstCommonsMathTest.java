@@ -25,9 +25,9 @@ class ProfiledLegsAgainstCommonsMathTest {
     }
 
     /** [eta, t, s] after integrating from rest at the origin through the knots, to u. */
-    static double[] commonsMath(Law law, double[] knots, double u) {
-        double[] y = {0, 0, 0};
-        FirstOrderDifferentialEquations ode = new FirstOrderDifferentialEquations() {
+    /** d/du of [eta, t, s] for proper acceleration {@code law}: eta' = a / c, t' = cosh eta, s' = c sinh eta. */
+    static FirstOrderDifferentialEquations equations(Law law) {
+        return new FirstOrderDifferentialEquations() {
             @Override
             public int getDimension() {
                 return 3;
@@ -40,6 +40,11 @@ class ProfiledLegsAgainstCommonsMathTest {
                 dot[2] = C * Math.sinh(yy[0]);
             }
         };
+    }
+
+    static double[] commonsMath(Law law, double[] knots, double u) {
+        double[] y = {0, 0, 0};
+        FirstOrderDifferentialEquations ode = equations(law);
         double x = 0;
         for (int i = 1; i < knots.length && x < u; i++) {
             double end = Math.min(knots[i], u);
