@@ -6,12 +6,13 @@ import java.util.Map;
 
 import org.nullpath.scenario.YamlTree.Node;
 import org.nullpath.units.Dimension;
+import org.nullpath.worldline.LegKind;
 import org.nullpath.worldline.LegSpec;
 
 /** Reads the legs at constant proper acceleration: {@code burn} and {@code coast} (docs/scenario-format.md, "Legs"). */
 final class ConstantLegReader {
-    static final List<String> BURN_KEYS = keys(List.of("acceleration"), LegSpec.BURN_END_KEYS);
-    static final List<String> COAST_KEYS = LegSpec.COAST_END_KEYS;
+    static final List<String> BURN_KEYS = keys(List.of("acceleration"), LegKind.BURN.endKeys());
+    static final List<String> COAST_KEYS = LegKind.COAST.endKeys();
     static final Map<String, String> COAST_SPECIALS = Map.of(
             "until-speed", "a coast keeps its speed, so until-speed cannot end it; use a burn",
             "acceleration", "a coast has no acceleration; use a burn for powered flight");
@@ -36,7 +37,7 @@ final class ConstantLegReader {
             f.problemAt("acceleration", "a burn needs a non-zero acceleration; use a coast leg for unpowered flight");
             a = Double.NaN;
         }
-        String endKey = LegEndReader.key(f, LegSpec.BURN_END_KEYS, true);
+        String endKey = LegEndReader.key(f, LegKind.BURN.endKeys(), true);
         LegSpec.LegEnd end = endKey == null ? null : LegEndReader.read(f, endKey);
         if (Double.isNaN(a) || end == null) {
             return null;
@@ -49,7 +50,7 @@ final class ConstantLegReader {
         if (!f.ok()) {
             return null;
         }
-        String endKey = LegEndReader.key(f, LegSpec.COAST_END_KEYS, true);
+        String endKey = LegEndReader.key(f, LegKind.COAST.endKeys(), true);
         LegSpec.LegEnd end = endKey == null ? null : LegEndReader.read(f, endKey);
         if (end == null) {
             return null;

@@ -8,6 +8,7 @@ import org.nullpath.scenario.YamlTree.Entry;
 import org.nullpath.scenario.YamlTree.MapNode;
 import org.nullpath.scenario.YamlTree.Node;
 import org.nullpath.units.Spelling;
+import org.nullpath.worldline.LegKind;
 import org.nullpath.worldline.LegSpec;
 
 /**
@@ -20,11 +21,11 @@ final class LegTable {
 
     private static Map<String, LegEntry> table() {
         Map<String, LegEntry> m = new LinkedHashMap<>();
-        m.put(LegSpec.BURN, ConstantLegReader::burn);
-        m.put(LegSpec.COAST, ConstantLegReader::coast);
-        m.put(LegSpec.ROCKET, ProfiledLegReader::rocket);
-        m.put(LegSpec.SAIL, ProfiledLegReader::sail);
-        m.put(LegSpec.PROFILE, ProfiledLegReader::profile);
+        m.put(LegKind.BURN.key(), ConstantLegReader::burn);
+        m.put(LegKind.COAST.key(), ConstantLegReader::coast);
+        m.put(LegKind.ROCKET.key(), ProfiledLegReader::rocket);
+        m.put(LegKind.SAIL.key(), ProfiledLegReader::sail);
+        m.put(LegKind.PROFILE.key(), ProfiledLegReader::profile);
         return java.util.Collections.unmodifiableMap(m);
     }
 

@@ -11,20 +11,21 @@ import org.nullpath.units.Constants;
 import org.nullpath.units.Dimension;
 import org.nullpath.units.Spelling;
 import org.nullpath.worldline.InertialWorldline;
+import org.nullpath.worldline.LegKind;
 import org.nullpath.worldline.LegSpec;
 
 /**
  * Reads the profiled legs (docs/scenario-format.md, "Legs"): {@code rocket} (constant proper
  * acceleration with exhaust speed and mass ratio, or constant thrust with initial and burnout mass),
  * {@code sail} (pushed by a beam from a station) and {@code profile} (a CSV table of acceleration, read by {@link ProfileTable}).
- * Each ends by its own physics unless an end key ({@link LegSpec#LIMITED_END_KEYS}) ends it earlier.
+ * Each ends by its own physics unless an end key ({@link LegKind#LIMITED_END_KEYS}) ends it earlier.
  */
 final class ProfiledLegReader {
     static final List<String> ROCKET_KEYS = ConstantLegReader.keys(List.of("acceleration", "exhaust-speed",
-            "mass-ratio", "thrust", "initial-mass", "burnout-mass"), LegSpec.LIMITED_END_KEYS);
+            "mass-ratio", "thrust", "initial-mass", "burnout-mass"), LegKind.ROCKET.endKeys());
     static final List<String> SAIL_KEYS = ConstantLegReader.keys(List.of("beam-from", "beam-power", "mass",
-            "reflectivity", "beam-off"), LegSpec.LIMITED_END_KEYS);
-    static final List<String> PROFILE_KEYS = ConstantLegReader.keys(List.of("file"), LegSpec.LIMITED_END_KEYS);
+            "reflectivity", "beam-off"), LegKind.SAIL.endKeys());
+    static final List<String> PROFILE_KEYS = ConstantLegReader.keys(List.of("file"), LegKind.PROFILE.endKeys());
 
     private ProfiledLegReader() {
     }
@@ -35,7 +36,7 @@ final class ProfiledLegReader {
 
     /** The end written (ok with a null end when none is: the leg ends by its own physics); not ok on a problem. */
     private static End end(Fields f) {
-        List<String> keys = LegSpec.LIMITED_END_KEYS;
+        List<String> keys = LegKind.LIMITED_END_KEYS;
         String key = LegEndReader.key(f, keys, false);
         if (key == null) {
             return new End(!LegEndReader.any(f, keys), null, null, null);

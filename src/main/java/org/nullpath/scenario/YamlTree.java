@@ -297,8 +297,7 @@ final class YamlTree {
 
         private MapNode mapping(int line, int column, int depth, String path) throws Fatal {
             Map<String, Entry> entries = new LinkedHashMap<>();
-            long size = 1;
-            int height = 0;
+            Extent extent = new Extent(line, column, path);
             while (true) {
                 JsonToken t = next();
                 if (t == JsonToken.END_OBJECT || t == null) {
@@ -307,8 +306,7 @@ final class YamlTree {
                 JsonLocation at = p.currentTokenLocation();
                 String key = text();
                 Node value = value(next(), depth + 1, KeyPaths.child(path, key));
-                size = grow(size, value, line, column, path);
-                height = Math.max(height, value.height() + 1);
+                extent.add(value);
                 Entry first = entries.get(key);
                 if (first != null) {
                     problems.add(at.getLineNr(), at.getColumnNr(), KeyPaths.child(path, key), "key '" + key + "' is repeated (first given at line "
@@ -317,34 +315,48 @@ final class YamlTree {
                     entries.put(key, new Entry(key, at.getLineNr(), at.getColumnNr(), value));
                 }
             }
-            return new MapNode(Collections.unmodifiableMap(entries), line, column, size, height);
+            return new MapNode(Collections.unmodifiableMap(entries), line, column, extent.size, extent.height);
         }
 
         private ListNode list(int line, int column, int depth, String path) throws Fatal {
             List<Node> items = new ArrayList<>();
-            long size = 1;
-            int height = 0;
+            Extent extent = new Extent(line, column, path);
             while (true) {
                 JsonToken t = next();
                 if (t == JsonToken.END_ARRAY || t == null) {
                     break;
                 }
                 Node value = value(t, depth + 1, KeyPaths.item(path, items.size()));
-                size = grow(size, value, line, column, path);
-                height = Math.max(height, value.height() + 1);
+                extent.add(value);
                 items.add(value);
             }
-            return new ListNode(Collections.unmodifiableList(items), line, column, size, height);
+            return new ListNode(Collections.unmodifiableList(items), line, column, extent.size, extent.height);
         }
 
-        private long grow(long size, Node child, int line, int column, String path) throws Fatal {
-            long s = size + child.size();
-            if (s > MAX_EXPANDED_NODES) {
-                problems.add(line, column, path, "the document expands to more than " + MAX_EXPANDED_NODES
-                        + " values through its aliases; nullpath refuses it");
-                throw new Fatal();
+        /** The size (values counted through aliases) and height of a collection as its children are read. */
+        private final class Extent {
+            private final int line;
+            private final int column;
+            private final String path;
+            private long size = 1;
+            private int height;
+
+            Extent(int line, int column, String path) {
+                this.line = line;
+                this.column = column;
+                this.path = path;
             }
-            return s;
+
+            /** Counts one child in; refuses a document that expands beyond the limit. */
+            void add(Node child) throws Fatal {
+                size += child.size();
+                if (size > MAX_EXPANDED_NODES) {
+                    problems.add(line, column, path, "the document expands to more than " + MAX_EXPANDED_NODES
+                            + " values through its aliases; nullpath refuses it");
+                    throw new Fatal();
+                }
+                height = Math.max(height, child.height() + 1);
+            }
         }
 
         private String text() throws Fatal {

@@ -13,6 +13,7 @@ import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
 import org.nullpath.worldline.Asymptote;
 import org.nullpath.worldline.LegSpan;
+import org.nullpath.worldline.LegKind;
 import org.nullpath.worldline.LegSpec;
 import org.nullpath.worldline.StraightLineCraft;
 import org.nullpath.worldline.Worldline;
@@ -260,7 +261,7 @@ public final class DiagramTraces {
             }
             if (!legs.isEmpty() && !legs.get(legs.size() - 1).openEnded()) {
                 LegSpan last = legs.get(legs.size() - 1);
-                marks.add(mark(n.name(), last.index() + 2, LegSpec.COAST, 0.0, craft, last.end().timeSeconds(), axis));
+                marks.add(mark(n.name(), last.index() + 2, LegKind.COAST.key(), 0.0, craft, last.end().timeSeconds(), axis));
             }
         }
         for (LegMark m : marks) {

@@ -15,20 +15,22 @@ import org.nullpath.units.Constants;
  */
 public sealed interface LegSpec {
 
+    /** The leg's kind: its key in the scenario file, its diagram label and the end keys it offers. */
+    LegKind kind();
+
     /** The leg's key in the scenario file ({@code burn}, {@code coast}, {@code rocket}, ...), also its kind in summaries. */
-    String key();
+    default String key() {
+        return kind().key();
+    }
 
     /** The leg's label on the spacetime diagram (a word; a constant-thrust rocket is told apart there). */
     default String label() {
-        return key();
+        return kind().label();
     }
 
-    /**
-     * The end-condition keys the scenario format offers for this kind of leg; by default those of a leg
-     * that ends by its own physics unless told to end earlier.
-     */
+    /** The end-condition keys the scenario format offers for this kind of leg. */
     default List<String> endKeys() {
-        return LIMITED_END_KEYS;
+        return kind().endKeys();
     }
 
     /** Proper acceleration along the heading at the leg start, m/s^2 (0 for a coast; NaN where it depends on the state). */
@@ -62,20 +64,6 @@ public sealed interface LegSpec {
         return java.util.Collections.unmodifiableMap(m);
     }
 
-    /** Scenario end keys of legs at constant acceleration. */
-    List<String> BURN_END_KEYS = List.of("duration", "duration-mission", "until-speed", "until-distance");
-    /** Scenario end keys of a coast (it keeps its speed). */
-    List<String> COAST_END_KEYS = List.of("duration", "duration-mission", "until-distance");
-    /** Scenario end keys of legs that end by their own physics unless told to end earlier. */
-    List<String> LIMITED_END_KEYS = List.of("until-speed", "until-distance");
-
-    /** The scenario keys of the leg kinds (a kind's {@link #key()}). */
-    String BURN = "burn";
-    String COAST = "coast";
-    String ROCKET = "rocket";
-    String SAIL = "sail";
-    String PROFILE = "profile";
-
     /** A constant proper acceleration burn ({@code acceleration} signed along the heading, not 0). */
     record Burn(double accelerationMetresPerSecond2, LegEnd end) implements LegSpec {
         public Burn {
@@ -86,13 +74,8 @@ public sealed interface LegSpec {
         }
 
         @Override
-        public String key() {
-            return BURN;
-        }
-
-        @Override
-        public List<String> endKeys() {
-            return BURN_END_KEYS;
+        public LegKind kind() {
+            return LegKind.BURN;
         }
 
         @Override
@@ -108,13 +91,8 @@ public sealed interface LegSpec {
         }
 
         @Override
-        public String key() {
-            return COAST;
-        }
-
-        @Override
-        public List<String> endKeys() {
-            return COAST_END_KEYS;
+        public LegKind kind() {
+            return LegKind.COAST;
         }
 
         @Override
@@ -166,8 +144,8 @@ public sealed interface LegSpec {
         }
 
         @Override
-        public String key() {
-            return ROCKET;
+        public LegKind kind() {
+            return LegKind.ROCKET;
         }
 
         @Override
@@ -210,13 +188,8 @@ public sealed interface LegSpec {
         }
 
         @Override
-        public String key() {
-            return ROCKET;
-        }
-
-        @Override
-        public String label() {
-            return "thrustrocket";
+        public LegKind kind() {
+            return LegKind.THRUST_ROCKET;
         }
 
         @Override
@@ -270,8 +243,8 @@ public sealed interface LegSpec {
         }
 
         @Override
-        public String key() {
-            return SAIL;
+        public LegKind kind() {
+            return LegKind.SAIL;
         }
 
         @Override
@@ -321,8 +294,8 @@ public sealed interface LegSpec {
         }
 
         @Override
-        public String key() {
-            return PROFILE;
+        public LegKind kind() {
+            return LegKind.PROFILE;
         }
 
         @Override

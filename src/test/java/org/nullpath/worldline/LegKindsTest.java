@@ -9,7 +9,7 @@ import org.junit.jupiter.api.Test;
 import org.nullpath.spacetime.Vec3;
 
 /**
- * Each leg kind names itself: its scenario key (also its kind in summary.json), its label on the
+ * Each leg kind names itself through its LegKind: its scenario key (also its kind in summary.json), its label on the
  * spacetime diagram, the end keys it takes and its summary figures. The names are the project's own
  * (docs/scenario-format.md); the labels are those the outputs printed before legs named themselves
  * (a constant-thrust rocket is "rocket" in the summary and "thrustrocket" on the diagram), kept so
