@@ -6,13 +6,18 @@ import java.util.concurrent.Callable;
 
 import org.nullpath.mission.Mission;
 import org.nullpath.report.Readable;
+import org.nullpath.schedule.RangeException;
+import org.nullpath.schedule.Rehearsal;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 
-/** {@code nullpath check SCENARIO}: validates only. */
+/**
+ * {@code nullpath check SCENARIO}: validates, then computes the whole plan without writing it, so that a
+ * scenario check accepts is one that plan computes.
+ */
 @Command(name = "check", mixinStandardHelpOptions = true,
-        description = "Validate a scenario without computing anything: prints each problem with file:line:column, "
-                + "or one line saying the scenario is usable.")
+        description = "Validate a scenario and work out every message, deadline and scan without writing anything:"
+                + " prints each problem with file:line:column, or one line saying the scenario is usable.")
 final class CheckCommand implements Callable<Integer> {
     @Mixin
     ScenarioInput input;
@@ -24,6 +29,12 @@ final class CheckCommand implements Callable<Integer> {
             return Main.INPUT_ERROR;
         }
         Mission s = loaded.get();
+        try {
+            Rehearsal.run(s);
+        } catch (RangeException e) {
+            input.err().println(input.located(e));
+            return Main.INPUT_ERROR;
+        }
         input.out().printf(Locale.ROOT, "%s: usable (%s; %s)%n", input.scenario, Readable.bodies(s),
                 Readable.planned(s, ""));
         return 0;

@@ -65,9 +65,7 @@ final class PlanCommand implements Callable<Integer> {
             }
             return Main.FAILURE;
         } catch (RangeException e) {
-            err.println(input.scenario + ": " + e.key() + ": " + e.getMessage()
-                    + " (a state beyond what double precision holds: plan sends, deadlines and scans nearer the"
-                    + " mission's start)");
+            err.println(input.located(e));
             return Main.INPUT_ERROR;
         } catch (RuntimeException e) {
             err.println("nullpath: plan failed: " + e.getMessage());

@@ -6,8 +6,9 @@ import java.util.Optional;
 
 import org.nullpath.mission.Mission;
 import org.nullpath.scenario.Problem;
+import org.nullpath.scenario.ScenarioDocument;
 import org.nullpath.scenario.ScenarioException;
-import org.nullpath.scenario.ScenarioLoader;
+import org.nullpath.schedule.RangeException;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -31,6 +32,9 @@ final class ScenarioInput {
             + " the folders below it (by default they must lie inside, symbolic links resolved)")
     boolean tablesAnywhere;
 
+    /** The scenario as read, once {@link #load()} has succeeded. */
+    private ScenarioDocument document;
+
     /** The command's standard error. */
     PrintWriter err() {
         return command.commandLine().getErr();
@@ -50,7 +54,9 @@ final class ScenarioInput {
         }
         Mission s;
         try {
-            s = ScenarioLoader.load(scenario, tablesAnywhere);
+            ScenarioDocument read = ScenarioDocument.read(scenario);
+            s = read.resolve(tablesAnywhere);
+            document = read;
         } catch (ScenarioException e) {
             for (Problem p : e.problems()) {
                 err.println(p.render());
@@ -64,5 +70,13 @@ final class ScenarioInput {
             return Optional.empty();
         }
         return Optional.of(s);
+    }
+
+    /**
+     * A computation that nullpath cannot carry out, as one line at the scenario key at fault (its file, line
+     * and column) with what to do.
+     */
+    String located(RangeException e) {
+        return document.problemAt(e.key(), e.getMessage() + " (" + e.hint() + ")").render();
     }
 }

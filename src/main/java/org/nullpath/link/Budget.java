@@ -43,6 +43,9 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
         /** Highest sender-frame data rate that closes with zero margin, bit/s. */
         double maxDataRateBps();
 
+        /** The first of this reception's figures that is infinite (beyond the double range), by its name. */
+        Optional<String> beyondDoubleRange();
+
         /**
          * Coherent (radio) reception.
          *
@@ -54,6 +57,11 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
          */
         record Coherent(double rxPowerDbw, double cn0DbHz, double ebN0Db, double marginDb, double maxDataRateBps)
                 implements Reception {
+            @Override
+            public Optional<String> beyondDoubleRange() {
+                return firstInfinite("received power", rxPowerDbw, "C/N0", cn0DbHz, "Eb/N0", ebN0Db, "margin", marginDb,
+                        "highest closing data rate", maxDataRateBps);
+            }
         }
 
         /**
@@ -67,6 +75,11 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
          */
         record PhotonCounting(double rxPowerDbw, double rxPhotonRatePerS, double photonsPerBit, double marginDb,
                               double maxDataRateBps) implements Reception {
+            @Override
+            public Optional<String> beyondDoubleRange() {
+                return firstInfinite("received power", rxPowerDbw, "received photon rate", rxPhotonRatePerS,
+                        "photons per bit", photonsPerBit, "margin", marginDb, "highest closing data rate", maxDataRateBps);
+            }
         }
     }
 
@@ -105,6 +118,28 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
 
     public double maxDataRateBps() {
         return reception.maxDataRateBps();
+    }
+
+    /**
+     * The first figure of this budget that is infinite, by its name: a frequency, rate or power beyond what a
+     * double holds (about 1.8e308), which happens only at Doppler factors or accelerations far outside any
+     * mission (for example a 1e15 Hz carrier at relative rapidity 700). Empty when every figure is finite or
+     * absent (NaN).
+     */
+    public Optional<String> beyondDoubleRange() {
+        Optional<String> shared = firstInfinite("received frequency", rxFrequencyHz(), "Doppler rate", dopplerRateHzPerS(),
+                "received data rate", rxDataRateBps);
+        return shared.isPresent() ? shared : reception.beyondDoubleRange();
+    }
+
+    /** The name before the first infinite value among names and values given in turn. */
+    static Optional<String> firstInfinite(Object... namesAndValues) {
+        for (int i = 0; i < namesAndValues.length; i += 2) {
+            if (Double.isInfinite((Double) namesAndValues[i + 1])) {
+                return Optional.of((String) namesAndValues[i]);
+            }
+        }
+        return Optional.empty();
     }
 
     /**

@@ -63,6 +63,9 @@ public record Column<R>(String name, String unit, String meaning, Function<R, Ob
     public String cell(R row) {
         Object v = value.apply(row);
         if (v instanceof Double d) {
+            if (Double.isInfinite(d)) {
+                throw new IllegalStateException("an infinite value reached column " + name);
+            }
             return Cells.num(d);
         }
         if (v instanceof Boolean b) {

@@ -112,6 +112,33 @@ public final class ScenarioDocument {
         return true;
     }
 
+    /**
+     * A problem at {@code keyPath}: at the line and column of the deepest value along the path written in this
+     * document (a mapping key's own place where the path ends at a key), so that a finding made while computing
+     * points at the scenario like any reading problem.
+     */
+    public Problem problemAt(String keyPath, String message) {
+        Node n = root;
+        int line = 0;
+        int column = 0;
+        String rest = keyPath;
+        while (!rest.isEmpty()) {
+            Step s = step(n, rest);
+            if (s == null || s.child() == null) {
+                break;
+            }
+            Located at = s.child();
+            if (s.key() != null && n instanceof MapNode m) {
+                at = m.get(s.key());
+            }
+            line = at.line();
+            column = at.column();
+            n = s.child();
+            rest = s.rest();
+        }
+        return new Problem(source.file().toString(), line, column, keyPath, message);
+    }
+
     private Scalar scalar(String value, String keyPath) throws ScenarioException {
         Problems p = new Problems(source.file().toString());
         Node n = YamlTree.parse(value, p);

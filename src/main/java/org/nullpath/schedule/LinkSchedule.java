@@ -118,11 +118,18 @@ public final class LinkSchedule {
                 Doppler.Factor d = a.doppler();
                 double rxClock = p.receive().clock();
                 Optional<Budget> budget = a.budget();
-                budget.ifPresent(b -> budgets.orElseThrow().add(b));
                 double interval = previous == null ? Double.NaN : arrivalInterval(sender, receiver, previous, p);
                 double condition = Conditioning.ofLightTime(p, a.sendFactor(), a.receiveFactor());
-                delivery = Optional.of(new MessageRow.Delivery(p.receive().timeSeconds(), rxClock, p.lightTimeSeconds(),
-                        d.doppler(), d.offset(), interval, condition, budget));
+                MessageRow.Delivery arrived = new MessageRow.Delivery(p.receive().timeSeconds(), rxClock,
+                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, condition, budget);
+                Optional<String> beyond = arrived.beyondDoubleRange();
+                if (beyond.isPresent()) {
+                    throw new RangeException("links." + link.name(), "message " + index + " (send clock " + clock
+                            + " s): its " + beyond.get() + " is beyond what a double holds (about 1.8e308)",
+                            RangeException.EXTREME_VALUES, null);
+                }
+                budget.ifPresent(b -> budgets.orElseThrow().add(b));
+                delivery = Optional.of(arrived);
                 if (condition * Conditioning.EPSILON > ILL_CONDITIONED) {
                     illConditioned++;
                 }

@@ -42,5 +42,23 @@ public record MessageRow(long message, double sendClock, double sendTime, Option
         public Delivery {
             Objects.requireNonNull(budget, "budget");
         }
+
+        /**
+         * The first of the arrival's figures that is infinite, by its name (a Doppler factor beyond the double
+         * range, or a budget figure: {@link Budget#beyondDoubleRange()}); empty when all are finite or absent.
+         */
+        public Optional<String> beyondDoubleRange() {
+            double[] values = {receiveTime, receiveClock, lightTime, doppler, frequencyOffset, receiveInterval,
+                lightTimeCondition};
+            for (int i = 0; i < values.length; i++) {
+                if (Double.isInfinite(values[i])) {
+                    return Optional.of(NAMES[i]);
+                }
+            }
+            return budget.flatMap(Budget::beyondDoubleRange);
+        }
+
+        private static final String[] NAMES = {"arrival time", "arrival clock", "light time", "Doppler factor",
+            "frequency offset", "arrival interval", "light-time condition number"};
     }
 }

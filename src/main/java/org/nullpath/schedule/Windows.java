@@ -50,7 +50,7 @@ public final class Windows {
         try {
             return scanRange(w);
         } catch (ArithmeticException e) {
-            throw new RangeException("windows (link " + w.link().name() + ")", e.getMessage(), e);
+            throw new RangeException("windows", "the scan on link " + w.link().name() + ": " + e.getMessage(), e);
         }
     }
 

@@ -28,6 +28,19 @@ class ScenarioDocumentTest {
             """;
 
     @Test
+    void aProblemFoundWhileComputingIsPlacedAtTheDeepestValueOfItsKeyPath() throws Exception {
+        ScenarioDocument doc = ScenarioDocument.of(TEXT, "wren.yaml");
+        // lines and columns counted in TEXT above (1-based): "  down:" is line 10, its key at column 3
+        assertEquals(new Problem("wren.yaml", 10, 3, "links.down", "m"), doc.problemAt("links.down", "m"));
+        // "  - {link: down, ...}": the list item is the flow mapping at line 12, column 5
+        assertEquals(new Problem("wren.yaml", 12, 5, "messages[0]", "m"), doc.problemAt("messages[0]", "m"));
+        // a path that goes on past the document stops at the deepest key written: "legs:" at line 7, column 5
+        assertEquals(new Problem("wren.yaml", 7, 5, "craft.wren.2.legs[3]", "m"), doc.problemAt("craft.wren.2.legs[3]", "m"));
+        // nothing of the path in the document: no line
+        assertEquals(new Problem("wren.yaml", 0, 0, "windows", "m"), doc.problemAt("windows", "m"));
+    }
+
+    @Test
     void aReplacedValueIsResolvedInSiAndTheOriginalIsUnchanged() throws Exception {
         ScenarioDocument doc = ScenarioDocument.of(TEXT, "wren.yaml");
         ScenarioDocument half = doc.with("craft.wren.2.legs[0].burn.acceleration", "0.5 g0");
