@@ -1,12 +1,16 @@
 package org.nullpath.report;
 
+import com.fasterxml.jackson.core.io.schubfach.DoubleToDecimal;
+
 /** How numbers appear in output files: full precision (parses back to the same double), empty when absent. */
 public final class Cells {
     private Cells() {
     }
 
     /**
-     * A decimal text that parses back to {@code v} exactly (Double.toString); empty for NaN (a value that
+     * The shortest decimal text that parses back to {@code v} exactly (Raffaello Giulietti's Schubfach
+     * algorithm, as jackson-core ships it; the same text as Double.toString from Java 19 on, which Java 17's
+     * sometimes lengthens by a digit); whole numbers below 1e15 without a fraction; empty for NaN (a value that
      * does not exist). An infinite value is a bug upstream and is refused rather than written.
      */
     public static String num(double v) {
@@ -19,7 +23,7 @@ public final class Cells {
         if (v == Math.rint(v) && Math.abs(v) < 1e15 && !(v == 0 && 1 / v < 0)) {
             return Long.toString((long) v);
         }
-        return Double.toString(v);
+        return DoubleToDecimal.toString(v);
     }
 
     /**

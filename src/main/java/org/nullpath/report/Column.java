@@ -61,7 +61,24 @@ public record Column<R>(String name, String unit, String meaning, Function<R, Ob
      * return) is written behind an apostrophe, the usual guard; nullpath's own names never start so.
      */
     public String cell(R row) {
+        return cellOf(value.apply(row));
+    }
+
+    /**
+     * Appends this column's cell of {@code row} to a CSV row's text, after a comma unless it is the first:
+     * the same text as {@link #cell}, quoted by the RFC 4180 rule ({@link CsvText}); a number, which never
+     * needs quotes, without the scan.
+     */
+    void appendCell(StringBuilder line, R row, boolean first) {
         Object v = value.apply(row);
+        if (v instanceof Double d && !Double.isNaN(d)) {
+            CsvText.appendPlain(line, cellOf(v), first);
+        } else {
+            CsvText.append(line, cellOf(v), first);
+        }
+    }
+
+    private String cellOf(Object v) {
         if (v instanceof Double d) {
             if (Double.isInfinite(d)) {
                 throw new IllegalStateException("an infinite value reached column " + name);

@@ -2,6 +2,7 @@ package org.nullpath.report;
 
 import java.io.BufferedWriter;
 import java.io.IOException;
+import java.io.OutputStreamWriter;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -11,20 +12,16 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import org.apache.commons.csv.CSVFormat;
-import org.apache.commons.csv.CSVPrinter;
 
 /**
  * An output table: its columns in order. The header and every row's cells come from the same list, so a
- * column is added in one place.
+ * column is added in one place. Files are RFC 4180 CSV with one header line and LF line ends
+ * ({@link CsvText}).
  *
  * @param columns the columns, in file order
  * @param <R>     the row type
  */
 public record Table<R>(List<Column<R>> columns) {
-    /** RFC 4180 CSV (Apache Commons CSV), one header line, LF line ends. */
-    static final CSVFormat FORMAT = CSVFormat.DEFAULT.builder().setRecordSeparator("\n").get();
-
     public Table {
         columns = List.copyOf(columns);
     }
@@ -61,27 +58,52 @@ public record Table<R>(List<Column<R>> columns) {
         }
     }
 
-    /** A streaming writer of one table's rows: memory does not grow with the rows. */
+    /** The CSV text of {@code rows}, each line ending in LF (the header not included). */
+    String lines(List<R> rows) {
+        StringBuilder b = new StringBuilder(rows.size() * 24 * columns.size() + 16);
+        for (R r : rows) {
+            for (int i = 0; i < columns.size(); i++) {
+                columns.get(i).appendCell(b, r, i == 0);
+            }
+            b.append('\n');
+        }
+        return b.toString();
+    }
+
+    /**
+     * A streaming writer of one table's rows: memory does not grow with the rows. Rows may be turned into
+     * text on any thread ({@link #encode}, which keeps no state) and appended in order ({@link #append}).
+     */
     public static final class Writer<R> implements AutoCloseable {
-        private final List<Column<R>> columns;
-        private final CSVPrinter printer;
-        private final String[] cells;
+        private final Table<R> table;
+        private final java.io.Writer out;
 
         private Writer(Table<R> table, Path file) throws IOException {
-            this.columns = table.columns();
-            BufferedWriter w = Files.newBufferedWriter(file, StandardCharsets.UTF_8);
-            printer = new CSVPrinter(w, FORMAT);
-            cells = new String[columns.size()];
-            printer.printRecord(table.header());
+            this.table = table;
+            this.out = new BufferedWriter(new OutputStreamWriter(Files.newOutputStream(file), StandardCharsets.UTF_8),
+                    1 << 16);
+            StringBuilder head = new StringBuilder();
+            List<String> names = table.header();
+            for (int i = 0; i < names.size(); i++) {
+                CsvText.append(head, names.get(i), i == 0);
+            }
+            out.write(head.append('\n').toString());
         }
 
         /** Writes one row; an I/O failure surfaces as {@link UncheckedIOException}. */
         public void write(R row) {
-            for (int i = 0; i < cells.length; i++) {
-                cells[i] = columns.get(i).cell(row);
-            }
+            append(encode(List.of(row)));
+        }
+
+        /** The CSV text of {@code rows}; safe to call from several threads at once. */
+        public String encode(List<R> rows) {
+            return table.lines(rows);
+        }
+
+        /** Appends text made by {@link #encode}; an I/O failure surfaces as {@link UncheckedIOException}. */
+        public void append(String lines) {
             try {
-                printer.printRecord((Object[]) cells);
+                out.write(lines);
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             }
@@ -89,7 +111,7 @@ public record Table<R>(List<Column<R>> columns) {
 
         @Override
         public void close() throws IOException {
-            printer.close(true);
+            out.close();
         }
     }
 }
