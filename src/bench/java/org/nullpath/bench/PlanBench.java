@@ -12,6 +12,7 @@ import org.nullpath.report.OutputFolder;
 import org.nullpath.report.PlanOutput;
 import org.nullpath.report.PlanResult;
 import org.nullpath.scenario.ScenarioLoader;
+import org.nullpath.schedule.Workers;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Level;
@@ -22,13 +23,17 @@ import org.openjdk.jmh.annotations.Scope;
 import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.TearDown;
 
-/** {@code plan} end to end (load, solve, write every CSV and the summary) for a schedule of N messages. */
+/** {@code plan} end to end (load, solve, write every CSV, report.html and the summary) for a schedule of N messages. */
 @BenchmarkMode(Mode.SingleShotTime)
 @OutputTimeUnit(TimeUnit.MILLISECONDS)
 @org.openjdk.jmh.annotations.State(Scope.Benchmark)
 public class PlanBench {
     @Param({"100000", "1000000"})
     public int messages;
+
+    /** Threads that compute messages (the files are the same for any number). */
+    @Param({"1", "2"})
+    public int threads;
 
     private Path dir;
     private Path scenario;
@@ -59,8 +64,8 @@ public class PlanBench {
     public long planEndToEnd() throws Exception {
         Mission s = ScenarioLoader.load(scenario);
         Path out = dir.resolve("out");
-        try (OutputFolder f = OutputFolder.begin(out)) {
-            PlanResult r = PlanOutput.write(s, f, true, new PrintWriter(new StringWriter()));
+        try (OutputFolder f = OutputFolder.begin(out); Workers workers = Workers.of(threads)) {
+            PlanResult r = PlanOutput.write(s, f, true, new PrintWriter(new StringWriter()), workers);
             f.commit();
             return r.links().get(0).delivered();
         }

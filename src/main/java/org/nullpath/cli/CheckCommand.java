@@ -8,6 +8,7 @@ import org.nullpath.mission.Mission;
 import org.nullpath.report.Readable;
 import org.nullpath.schedule.RangeException;
 import org.nullpath.schedule.Rehearsal;
+import org.nullpath.schedule.Workers;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 
@@ -29,8 +30,8 @@ final class CheckCommand implements Callable<Integer> {
             return Main.INPUT_ERROR;
         }
         Mission s = loaded.get();
-        try {
-            Rehearsal.run(s);
+        try (Workers workers = input.workers()) {
+            Rehearsal.run(s, workers);
         } catch (RangeException e) {
             input.err().println(input.located(e));
             return Main.INPUT_ERROR;

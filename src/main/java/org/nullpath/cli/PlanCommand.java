@@ -12,6 +12,7 @@ import org.nullpath.report.PlanOutput;
 import org.nullpath.report.PlanResult;
 import org.nullpath.mission.Mission;
 import org.nullpath.schedule.RangeException;
+import org.nullpath.schedule.Workers;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
@@ -52,8 +53,9 @@ final class PlanCommand implements Callable<Integer> {
         OutputFolder.Commit commit;
         Runnable waiting = () -> err.println("nullpath: another plan is writing into " + out
                 + "; waiting until it is done");
-        try (OutputFolder folder = OutputFolder.begin(out, s.source().inputs(), waiting)) {
-            result = PlanOutput.write(s, folder, !noReport, err);
+        try (OutputFolder folder = OutputFolder.begin(out, s.source().inputs(), waiting);
+             Workers workers = input.workers()) {
+            result = PlanOutput.write(s, folder, !noReport, err, workers);
             commit = folder.commit();
         } catch (OutputFolder.Refused e) {
             err.println("nullpath: cannot write " + out + ": " + e.getMessage());

@@ -9,6 +9,7 @@ import org.nullpath.scenario.Problem;
 import org.nullpath.scenario.ScenarioDocument;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.schedule.RangeException;
+import org.nullpath.schedule.Workers;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -27,6 +28,10 @@ final class ScenarioInput {
 
     @Option(names = "--max-messages", paramLabel = "N", description = "cap on messages per plan (default: ${DEFAULT-VALUE})")
     long maxMessages = DEFAULT_MAX_MESSAGES;
+
+    @Option(names = "--threads", paramLabel = "N", description = "threads that compute messages (default: the"
+            + " machine's processors, ${DEFAULT-VALUE} here); the results are the same for any number")
+    int threads = Runtime.getRuntime().availableProcessors();
 
     @Option(names = "--tables-anywhere", description = "let profile tables lie outside the scenario's folder and"
             + " the folders below it (by default they must lie inside, symbolic links resolved)")
@@ -48,6 +53,10 @@ final class ScenarioInput {
     /** Loads and validates; on problems prints them on standard error, one per line, and returns empty. */
     Optional<Mission> load() {
         PrintWriter err = err();
+        if (threads < 1) {
+            err.println("nullpath: --threads must be at least 1 (got " + threads + ")");
+            return Optional.empty();
+        }
         if (maxMessages < 1) {
             err.println("nullpath: --max-messages must be at least 1 (got " + maxMessages + ")");
             return Optional.empty();
@@ -78,5 +87,10 @@ final class ScenarioInput {
      */
     String located(RangeException e) {
         return document.problemAt(e.key(), e.getMessage() + " (" + e.hint() + ")").render();
+    }
+
+    /** The threads to compute on, as asked for; close them when done. */
+    Workers workers() {
+        return Workers.of(threads);
     }
 }

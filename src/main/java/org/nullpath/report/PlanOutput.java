@@ -18,6 +18,7 @@ import org.nullpath.schedule.LinkSchedule;
 import org.nullpath.schedule.LinkTally;
 import org.nullpath.schedule.MessageRow;
 import org.nullpath.schedule.WindowRow;
+import org.nullpath.schedule.Workers;
 import org.nullpath.schedule.Windows;
 
 /**
@@ -68,17 +69,19 @@ public final class PlanOutput {
         private final OutputFolder out;
         private final boolean report;
         private final PrintWriter warnings;
+        private final Workers workers;
         private final List<LinkTally> links = new ArrayList<>();
         private final List<ExchangeTally> exchanges = new ArrayList<>();
         private final List<CutoffRow> cutoffs = new ArrayList<>();
         private final List<HorizonRow> horizons = new ArrayList<>();
         private final List<WindowRow> windows = new ArrayList<>();
 
-        Run(Mission mission, OutputFolder out, boolean report, PrintWriter warnings) {
+        Run(Mission mission, OutputFolder out, boolean report, PrintWriter warnings, Workers workers) {
             this.mission = mission;
             this.out = out;
             this.report = report;
             this.warnings = warnings;
+            this.workers = workers;
         }
 
         PlanResult result() {
@@ -87,12 +90,21 @@ public final class PlanOutput {
     }
 
     /**
-     * Computes and writes everything; report.html only when {@code report} is true; a file left out is said
-     * on {@code warnings}. The caller commits or discards the folder.
+     * Computes and writes everything on the calling thread; report.html only when {@code report} is true; a
+     * file left out is said on {@code warnings}. The caller commits or discards the folder.
      */
     public static PlanResult write(Mission s, OutputFolder out, boolean report, PrintWriter warnings)
             throws IOException {
-        Run run = new Run(s, out, report, warnings);
+        return write(s, out, report, warnings, Workers.ONE);
+    }
+
+    /**
+     * As {@link #write(Mission, OutputFolder, boolean, PrintWriter)}, the messages computed and written on
+     * {@code workers}: the files are the same for any number of threads.
+     */
+    public static PlanResult write(Mission s, OutputFolder out, boolean report, PrintWriter warnings, Workers workers)
+            throws IOException {
+        Run run = new Run(s, out, report, warnings, workers);
         for (OutputFile f : FILES) {
             f.step().write(run);
         }
@@ -103,7 +115,7 @@ public final class PlanOutput {
         for (Link link : run.mission.links().values()) {
             Table<MessageRow> table = Tables.messages(link.terms(), run.mission.epoch());
             try (Table.Writer<MessageRow> w = table.open(run.out.file(OutputNames.ofLink(link.name())))) {
-                run.links.add(LinkSchedule.run(run.mission, link, w::write));
+                run.links.add(LinkSchedule.run(run.mission, link, run.workers, w::encode, w::append));
             }
         }
     }

@@ -39,6 +39,20 @@ public final class BudgetTally {
         overRate += b.withinDopplerRate() ? 0 : 1;
     }
 
+    /** Takes in the figures of {@code later}, the tally of the messages that follow these. */
+    void merge(BudgetTally later) {
+        worstMargin = min(worstMargin, later.worstMargin);
+        bestMargin = max(bestMargin, later.bestMargin);
+        minRxHz = min(minRxHz, later.minRxHz);
+        maxRxHz = max(maxRxHz, later.maxRxHz);
+        maxAbsRate = max(maxAbsRate, later.maxAbsRate);
+        minMaxRate = min(minMaxRate, later.minMaxRate);
+        maxMaxRate = max(maxMaxRate, later.maxMaxRate);
+        closing += later.closing;
+        outOfTuning += later.outOfTuning;
+        overRate += later.overRate;
+    }
+
     /**
      * The finished figures.
      *

@@ -1,7 +1,14 @@
 package org.nullpath.schedule;
 
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Deque;
+import java.util.List;
 import java.util.Optional;
+import java.util.concurrent.ExecutionException;
+import java.util.concurrent.Future;
 import java.util.function.Consumer;
+import java.util.function.Function;
 
 import org.nullpath.lightcone.Conditioning;
 import org.nullpath.lightcone.LightCone;
@@ -21,8 +28,8 @@ import static org.nullpath.schedule.Extremes.max;
 import static org.nullpath.schedule.Extremes.min;
 
 /**
- * Computes every planned message of one link, in send order, handing each row to a sink as soon as it
- * is computed: memory does not grow with the number of messages.
+ * Computes every planned message of one link, in send order, handing the rows on a chunk at a time as
+ * they are computed: memory does not grow with the number of messages.
  */
 public final class LinkSchedule {
     private LinkSchedule() {
@@ -85,36 +92,141 @@ public final class LinkSchedule {
         return receiver.advance(first.receive(), arrivalStep).dClockSeconds();
     }
 
-    /** Runs the schedule of {@code link}, giving each row to {@code sink}; returns the tally. */
+    /** Messages computed as one piece of work (and handed on together). */
+    static final int CHUNK = 4096;
+
+    /** Runs the schedule of {@code link} on the calling thread, giving each row to {@code sink}; returns the tally. */
     public static LinkTally run(Mission mission, Link link, Consumer<MessageRow> sink) {
-        Worldline sender = link.sender();
-        Worldline receiver = link.receiver();
-        Optional<BudgetTally> budgets = link.terms().map(t -> new BudgetTally(t.carrierHz()));
+        return run(mission, link, Workers.ONE, rows -> rows, rows -> rows.forEach(sink));
+    }
+
+    /**
+     * Runs the schedule of {@code link} in chunks of {@value #CHUNK} messages on {@code workers}: each chunk's
+     * rows are computed and turned into {@code T} by {@code encode} on a worker, then given to {@code write} on
+     * the calling thread in send order. Rows, files and tallies are the same for any number of threads: a
+     * chunk recomputes the message before its first (for the arrival interval) and the tallies are merged in
+     * order. Returns the tally.
+     *
+     * @throws RangeException at the first message, in send order, that nullpath cannot compute
+     */
+    public static <T> LinkTally run(Mission mission, Link link, Workers workers, Function<List<MessageRow>, T> encode,
+                                    Consumer<T> write) {
         SendOrder order = new SendOrder(mission.plansOn(link));
+        Part total = new Part(link);
+        Deque<Future<Done<T>>> ahead = new ArrayDeque<>();
         long index = 0;
-        long delivered = 0;
-        long illConditioned = 0;
-        SignalPath previous = null;
+        double lastClock = Double.NaN;
+        try {
+            while (order.hasNext() || !ahead.isEmpty()) {
+                while (order.hasNext() && ahead.size() < workers.ahead()) {
+                    double[] clocks = new double[CHUNK];
+                    int n = 0;
+                    while (n < CHUNK && order.hasNext()) {
+                        clocks[n++] = order.next();
+                    }
+                    long first = index + 1;
+                    double before = lastClock;
+                    int count = n;
+                    ahead.add(workers.submit(() -> chunk(link, first, clocks, count, before, encode)));
+                    index += n;
+                    lastClock = clocks[n - 1];
+                }
+                Done<T> done = take(ahead.poll());
+                write.accept(done.encoded());
+                total.merge(done.part());
+            }
+        } finally {
+            ahead.forEach(f -> f.cancel(true));
+        }
+        return new LinkTally(link, index, total.delivered, index - total.delivered, total.minD, total.maxD,
+                total.minT, total.maxT, total.lastArrivalClock, total.budgets.map(BudgetTally::snapshot),
+                total.illConditioned);
+    }
+
+    /** A chunk's rows, encoded, and what they came to. */
+    private record Done<T>(T encoded, Part part) {
+    }
+
+    /** What a run of consecutive messages came to; merged in send order. */
+    private static final class Part {
+        long delivered;
+        long illConditioned;
         double lastArrivalClock = Double.NaN;
         double minD = Double.NaN;
         double maxD = Double.NaN;
         double minT = Double.NaN;
         double maxT = Double.NaN;
-        while (order.hasNext()) {
-            double clock = order.next();
-            index++;
-            Evaluated ev;
-            try {
-                ev = evaluate(link, clock);
-            } catch (ArithmeticException e) {
-                throw new RangeException("links." + link.name(), "message " + index + " (send clock " + clock
-                        + " s): " + e.getMessage(), e);
+        final Optional<BudgetTally> budgets;
+
+        Part(Link link) {
+            budgets = link.terms().map(t -> new BudgetTally(t.carrierHz()));
+        }
+
+        void merge(Part later) {
+            delivered += later.delivered;
+            illConditioned += later.illConditioned;
+            if (!Double.isNaN(later.lastArrivalClock)) {
+                lastArrivalClock = later.lastArrivalClock;
             }
+            minD = min(minD, later.minD);
+            maxD = max(maxD, later.maxD);
+            minT = min(minT, later.minT);
+            maxT = max(maxT, later.maxT);
+            budgets.ifPresent(b -> b.merge(later.budgets.orElseThrow()));
+        }
+    }
+
+    private static <T> Done<T> take(Future<Done<T>> f) {
+        try {
+            return f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted", e);
+        } catch (ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            if (e.getCause() instanceof Error r) {
+                throw r;
+            }
+            throw new IllegalStateException(e.getCause());
+        }
+    }
+
+    /** The message sent at {@code clock}, numbered {@code index}; a state beyond double precision is a {@link RangeException}. */
+    private static Evaluated evaluateAt(Link link, long index, double clock) {
+        try {
+            return evaluate(link, clock);
+        } catch (ArithmeticException e) {
+            throw new RangeException("links." + link.name(), "message " + index + " (send clock " + clock
+                    + " s): " + e.getMessage(), e);
+        }
+    }
+
+    /**
+     * Messages {@code first}, {@code first + 1}, ... sent at {@code clocks[0..n)}; {@code before} is the send
+     * clock of message {@code first - 1} (NaN for the first message of the link).
+     */
+    private static <T> Done<T> chunk(Link link, long first, double[] clocks, int n, double before,
+                                     Function<List<MessageRow>, T> encode) {
+        Worldline sender = link.sender();
+        Worldline receiver = link.receiver();
+        Part part = new Part(link);
+        SignalPath previous = null;
+        if (first > 1) {
+            Evaluated e = evaluateAt(link, first - 1, before);
+            previous = e.arrival().isPresent() ? e.path() : null;
+        }
+        List<MessageRow> rows = new ArrayList<>(n);
+        for (int i = 0; i < n; i++) {
+            long index = first + i;
+            double clock = clocks[i];
+            Evaluated ev = evaluateAt(link, index, clock);
             SignalPath p = ev.path();
             Optional<MessageRow.Delivery> delivery = Optional.empty();
             if (ev.arrival().isPresent()) {
                 Arrival a = ev.arrival().get();
-                delivered++;
+                part.delivered++;
                 Doppler.Factor d = a.doppler();
                 double rxClock = p.receive().clock();
                 Optional<Budget> budget = a.budget();
@@ -128,23 +240,22 @@ public final class LinkSchedule {
                             + " s): its " + beyond.get() + " is beyond what a double holds (about 1.8e308)",
                             RangeException.EXTREME_VALUES, null);
                 }
-                budget.ifPresent(b -> budgets.orElseThrow().add(b));
+                budget.ifPresent(b -> part.budgets.orElseThrow().add(b));
                 delivery = Optional.of(arrived);
                 if (condition * Conditioning.EPSILON > ILL_CONDITIONED) {
-                    illConditioned++;
+                    part.illConditioned++;
                 }
                 previous = p;
-                lastArrivalClock = rxClock;
-                minD = min(minD, d.doppler());
-                maxD = max(maxD, d.doppler());
-                minT = min(minT, p.lightTimeSeconds());
-                maxT = max(maxT, p.lightTimeSeconds());
+                part.lastArrivalClock = rxClock;
+                part.minD = min(part.minD, d.doppler());
+                part.maxD = max(part.maxD, d.doppler());
+                part.minT = min(part.minT, p.lightTimeSeconds());
+                part.maxT = max(part.maxT, p.lightTimeSeconds());
             } else {
                 previous = null;
             }
-            sink.accept(new MessageRow(index, clock, p.send().timeSeconds(), delivery));
+            rows.add(new MessageRow(index, clock, p.send().timeSeconds(), delivery));
         }
-        return new LinkTally(link, index, delivered, index - delivered, minD, maxD, minT, maxT,
-                lastArrivalClock, budgets.map(BudgetTally::snapshot), illConditioned);
+        return new Done<>(encode.apply(rows), part);
     }
 }

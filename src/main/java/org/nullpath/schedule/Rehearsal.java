@@ -16,13 +16,13 @@ public final class Rehearsal {
     }
 
     /**
-     * Runs the mission's whole computation.
+     * Runs the mission's whole computation, its messages on {@code workers}.
      *
      * @throws RangeException at the first message, deadline or scan nullpath cannot compute
      */
-    public static void run(Mission mission) {
+    public static void run(Mission mission, Workers workers) {
         for (Link link : mission.links().values()) {
-            LinkSchedule.run(mission, link, row -> { });
+            LinkSchedule.run(mission, link, workers, rows -> rows.size(), rows -> { });
         }
         Deadlines.cutoffs(mission);
         Deadlines.horizons(mission);

@@ -1,0 +1,71 @@
+package org.nullpath.schedule;
+
+import java.util.concurrent.Callable;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.Future;
+import java.util.concurrent.atomic.AtomicInteger;
+
+/**
+ * The threads a plan computes on. With one thread every chunk of messages is computed on the calling thread
+ * as it is asked for; with more, chunks are computed ahead on a fixed pool of daemon threads (an interrupted
+ * run is not held up by them) and handed back in order, so the results are the same for any number of threads.
+ */
+public final class Workers implements AutoCloseable {
+    /** Computes on the calling thread. */
+    public static final Workers ONE = new Workers(1, null);
+
+    private final int threads;
+    private final ExecutorService pool;
+
+    private Workers(int threads, ExecutorService pool) {
+        this.threads = threads;
+        this.pool = pool;
+    }
+
+    /** {@code threads} threads (1: the calling thread only). */
+    public static Workers of(int threads) {
+        if (threads < 1) {
+            throw new IllegalArgumentException("at least one thread, got " + threads);
+        }
+        if (threads == 1) {
+            return ONE;
+        }
+        AtomicInteger n = new AtomicInteger();
+        return new Workers(threads, Executors.newFixedThreadPool(threads, r -> {
+            Thread t = new Thread(r, "nullpath-worker-" + n.incrementAndGet());
+            t.setDaemon(true);
+            return t;
+        }));
+    }
+
+    /** How many threads compute. */
+    public int threads() {
+        return threads;
+    }
+
+    /** How many chunks may be computed ahead of the one being written (1 when computing on the calling thread). */
+    int ahead() {
+        return pool == null ? 1 : 2 * threads;
+    }
+
+    /** Starts {@code work}; with one thread it is done before this returns. */
+    <T> Future<T> submit(Callable<T> work) {
+        if (pool != null) {
+            return pool.submit(work);
+        }
+        try {
+            return CompletableFuture.completedFuture(work.call());
+        } catch (Exception e) {
+            return CompletableFuture.failedFuture(e);
+        }
+    }
+
+    @Override
+    public void close() {
+        if (pool != null) {
+            pool.shutdownNow();
+        }
+    }
+}
