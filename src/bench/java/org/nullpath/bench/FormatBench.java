@@ -84,7 +84,7 @@ public class FormatBench {
     /** Per row: eleven cells of a link file, quoted by the CSV rule where needed. */
     @Benchmark
     @OperationsPerInvocation(N)
-    public String encodeRows() {
+    public byte[] encodeRows() {
         return writer.encode(rows);
     }
 }

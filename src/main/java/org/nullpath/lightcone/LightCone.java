@@ -212,16 +212,12 @@ public final class LightCone {
     private static SignalPath futureOffLine(State send, StraightLineCraft craft) {
         double b = craft.alongOf(send.position());
         Vec3 perpendicular = craft.perpendicularOf(send.position());
-        double rho2 = perpendicular.normSquared();
         LineState at = craft.lineAtTime(send.timeSeconds());
         double a0 = b - at.along();
-        DoubleUnaryOperator h = du -> {
-            StraightLineCraft.LineWalk w = craft.walkClock(at, du);
-            return (a0 + w.dU()) * (-a0 + w.dV()) - rho2;
-        };
-        double guess = Math.sqrt(a0 * a0 + rho2) / C / Math.cosh(Math.min(Math.abs(at.rapidity()), 700));
-        double du = solveAfterSignChange(h, guess > 0 ? guess : 1.0);
-        StraightLineCraft.LineWalk w = craft.walkClock(at, du);
+        State there = craft.toState(at);
+        // first guess: the light time to the craft were it to keep its present velocity, on its clock
+        double guess = inertialLightTime(there.position().minus(send.position()), there.velocity()) / there.gamma();
+        StraightLineCraft.LineWalk w = offLineRoot(du -> craft.walkClock(at, du), a0, 1, perpendicular.norm(), guess);
         double dz = 0.5 * (w.dV() - w.dU()) - a0;
         Vec3 path = craft.heading().times(dz).minus(perpendicular);
         return new SignalPath(send, craft.toState(w.end()), w.dt(), path, false);
@@ -231,16 +227,12 @@ public final class LightCone {
     private static SignalPath pastOffLine(State receive, StraightLineCraft craft) {
         double b = craft.alongOf(receive.position());
         Vec3 perpendicular = craft.perpendicularOf(receive.position());
-        double rho2 = perpendicular.normSquared();
         LineState at = craft.lineAtTime(receive.timeSeconds());
         double a0 = at.along() - b;
-        DoubleUnaryOperator h = du -> {
-            StraightLineCraft.LineWalk w = craft.walkClock(at, -du);
-            return (a0 - w.dU()) * (-a0 - w.dV()) - rho2;
-        };
-        double guess = Math.sqrt(a0 * a0 + rho2) / C / Math.cosh(Math.min(Math.abs(at.rapidity()), 700));
-        double du = solveAfterSignChange(h, guess > 0 ? guess : 1.0);
-        StraightLineCraft.LineWalk w = craft.walkClock(at, -du);
+        State there = craft.toState(at);
+        double guess = inertialLightTime(there.position().minus(receive.position()), there.velocity().times(-1))
+                / there.gamma();
+        StraightLineCraft.LineWalk w = offLineRoot(du -> craft.walkClock(at, -du), a0, -1, perpendicular.norm(), guess);
         // photon displacement: receive minus emit = (b - along_emit) heading + perpendicular
         double dzEmit = a0 + 0.5 * (w.dV() - w.dU()); // along_emit - b
         Vec3 path = perpendicular.minus(craft.heading().times(dzEmit));
@@ -248,21 +240,50 @@ public final class LightCone {
     }
 
     /**
-     * The root of a function negative at 0 that changes sign once: bracketed by doubling from {@code guess}
-     * (the last negative point is kept as the lower end), then Brent.
+     * The craft-clock step du > 0 at which the cone condition A B = rho^2 holds, with A = a0 + s dU and
+     * B = -a0 + s dV from {@code walk} (s = +1 walking forward, -1 backward). At du = 0 one of A, B is not
+     * positive; both grow with du (dU/dtau = c e^-eta, dV/dtau = c e^eta along any worldline of rapidity eta), so
+     * the root is unique and lies where both are positive. There Newton's method runs on
+     * g(du) = ln(A / rho) + ln(B / rho), nearly linear in du however fast the craft moves (A B itself grows like
+     * e^(2 eta)), with g' = c (e^-eta / A + e^eta / B); a step that would leave the bracket found so far is
+     * replaced by bisection, or by doubling while no upper end is known. Starting from the craft's inertial
+     * light time, a few steps meet {@value #RELATIVE_ACCURACY} relative in du.
      */
-    private static double solveAfterSignChange(DoubleUnaryOperator f, double guess) {
+    private static StraightLineCraft.LineWalk offLineRoot(java.util.function.DoubleFunction<StraightLineCraft.LineWalk> walk,
+                                                          double a0, double s, double rho, double guess) {
         double lo = 0;
-        double hi = guess;
-        int doublings = 0;
-        while (!(f.applyAsDouble(hi) > 0)) {
-            lo = hi;
-            hi *= 2;
-            if (++doublings > 2000 || !Double.isFinite(hi)) {
-                throw new ArithmeticException("light-cone solve: no bracket found");
+        double hi = Double.POSITIVE_INFINITY;
+        double x = guess > 0 && Double.isFinite(guess) ? guess : 1.0;
+        for (int i = 0; i < MAX_EVALUATIONS; i++) {
+            StraightLineCraft.LineWalk w = walk.apply(x);
+            double a = (a0 + s * w.dU()) / rho;
+            double b = (-a0 + s * w.dV()) / rho;
+            double next = Double.NaN;
+            if (a > 0 && b > 0) {
+                double g = Math.log(a) + Math.log(b);
+                if (g == 0) {
+                    return w;
+                }
+                if (g > 0) {
+                    hi = x;
+                } else {
+                    lo = x;
+                }
+                double eta = w.end().rapidity();
+                next = x - g / (C / rho * (Math.exp(-eta) / a + Math.exp(eta) / b));
+            } else {
+                lo = x;
             }
+            if (!(next > lo && next < hi)) {
+                next = hi == Double.POSITIVE_INFINITY ? 2 * x : 0.5 * (lo + hi);
+            }
+            if (Math.abs(next - x) <= RELATIVE_ACCURACY * next
+                    || hi < Double.POSITIVE_INFINITY && hi - lo <= RELATIVE_ACCURACY * hi) {
+                return walk.apply(next);
+            }
+            x = next;
         }
-        return brent(f, lo, hi);
+        throw new ArithmeticException("light-cone solve: no root found");
     }
 
     /**

@@ -71,7 +71,7 @@ public record Column<R>(String name, String unit, String meaning, Function<R, Ob
      */
     void appendCell(StringBuilder line, R row, boolean first) {
         Object v = value.apply(row);
-        if (v instanceof Double d && !Double.isNaN(d)) {
+        if (v instanceof Double d && !Double.isNaN(d) || v instanceof Long) {
             CsvText.appendPlain(line, cellOf(v), first);
         } else {
             CsvText.append(line, cellOf(v), first);

@@ -1,8 +1,8 @@
 package org.nullpath.report;
 
-import java.io.BufferedWriter;
+import java.io.BufferedOutputStream;
 import java.io.IOException;
-import java.io.OutputStreamWriter;
+import java.io.OutputStream;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
@@ -76,18 +76,17 @@ public record Table<R>(List<Column<R>> columns) {
      */
     public static final class Writer<R> implements AutoCloseable {
         private final Table<R> table;
-        private final java.io.Writer out;
+        private final OutputStream out;
 
         private Writer(Table<R> table, Path file) throws IOException {
             this.table = table;
-            this.out = new BufferedWriter(new OutputStreamWriter(Files.newOutputStream(file), StandardCharsets.UTF_8),
-                    1 << 16);
+            this.out = new BufferedOutputStream(Files.newOutputStream(file), 1 << 16);
             StringBuilder head = new StringBuilder();
             List<String> names = table.header();
             for (int i = 0; i < names.size(); i++) {
                 CsvText.append(head, names.get(i), i == 0);
             }
-            out.write(head.append('\n').toString());
+            out.write(head.append('\n').toString().getBytes(StandardCharsets.UTF_8));
         }
 
         /** Writes one row; an I/O failure surfaces as {@link UncheckedIOException}. */
@@ -95,13 +94,13 @@ public record Table<R>(List<Column<R>> columns) {
             append(encode(List.of(row)));
         }
 
-        /** The CSV text of {@code rows}; safe to call from several threads at once. */
-        public String encode(List<R> rows) {
-            return table.lines(rows);
+        /** The CSV text of {@code rows} in UTF-8; safe to call from several threads at once. */
+        public byte[] encode(List<R> rows) {
+            return table.lines(rows).getBytes(StandardCharsets.UTF_8);
         }
 
         /** Appends text made by {@link #encode}; an I/O failure surfaces as {@link UncheckedIOException}. */
-        public void append(String lines) {
+        public void append(byte[] lines) {
             try {
                 out.write(lines);
             } catch (IOException e) {
