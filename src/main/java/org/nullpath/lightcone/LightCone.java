@@ -254,6 +254,7 @@ public final class LightCone {
         double lo = 0;
         double hi = Double.POSITIVE_INFINITY;
         double x = guess > 0 && Double.isFinite(guess) ? guess : 1.0;
+        double lastStep = Double.NaN;
         for (int i = 0; i < MAX_EVALUATIONS; i++) {
             StraightLineCraft.LineWalk w = walk.apply(x);
             double a = (a0 + s * w.dU()) / rho;
@@ -270,15 +271,25 @@ public final class LightCone {
                     lo = x;
                 }
                 double eta = w.end().rapidity();
-                next = x - g / (C / rho * (Math.exp(-eta) / a + Math.exp(eta) / b));
+                double step = g / (C / rho * (Math.exp(-eta) / a + Math.exp(eta) / b));
+                next = x - step;
+                // converged: this step is below the tolerance, or Newton's quadratic convergence, seen in the
+                // last two steps (error of next ~ step^3 / lastStep^2), puts next within a tenth of it
+                double size = Math.abs(step);
+                if (size <= RELATIVE_ACCURACY * x || size < Math.abs(lastStep)
+                        && size * size * size <= 0.1 * RELATIVE_ACCURACY * x * lastStep * lastStep) {
+                    return walk.apply(Math.min(Math.max(next, lo), hi));
+                }
+                lastStep = step;
             } else {
                 lo = x;
+                lastStep = Double.NaN;
             }
             if (!(next > lo && next < hi)) {
                 next = hi == Double.POSITIVE_INFINITY ? 2 * x : 0.5 * (lo + hi);
+                lastStep = Double.NaN;
             }
-            if (Math.abs(next - x) <= RELATIVE_ACCURACY * next
-                    || hi < Double.POSITIVE_INFINITY && hi - lo <= RELATIVE_ACCURACY * hi) {
+            if (hi < Double.POSITIVE_INFINITY && hi - lo <= RELATIVE_ACCURACY * hi) {
                 return walk.apply(next);
             }
             x = next;
