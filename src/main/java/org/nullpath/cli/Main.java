@@ -9,7 +9,7 @@ import picocli.CommandLine.Command;
 
 /** The {@code nullpath} command: dispatches to {@code plan} and {@code check}. */
 @Command(name = "nullpath", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
-        subcommands = {PlanCommand.class, CheckCommand.class, CommandLine.HelpCommand.class},
+        subcommands = {PlanCommand.class, CheckCommand.class, SweepCommand.class, CommandLine.HelpCommand.class},
         description = {
             "Signal timing, Doppler, horizons and link budgets for craft that accelerate for long periods.",
             "Exit codes: 0 done, 2 the input is wrong, 1 anything else."})

@@ -6,6 +6,7 @@ import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
 
 import org.nullpath.mission.Mission;
 import org.nullpath.mission.ScenarioText;
@@ -99,17 +100,26 @@ public final class ScenarioDocument {
 
     /** True when {@code keyPath} names a value written in this document. */
     public boolean has(String keyPath) {
+        return find(keyPath) != null;
+    }
+
+    /** The text of the single value at {@code keyPath}, when there is one there (not a mapping or a list). */
+    public Optional<String> scalarAt(String keyPath) {
+        return find(keyPath) instanceof Scalar s ? Optional.of(s.text()) : Optional.empty();
+    }
+
+    private Node find(String keyPath) {
         Node n = root;
         String rest = keyPath;
         while (!rest.isEmpty()) {
             Step s = step(n, rest);
             if (s == null || s.child() == null) {
-                return false;
+                return null;
             }
             n = s.child();
             rest = s.rest();
         }
-        return true;
+        return n;
     }
 
     /**

@@ -5,7 +5,6 @@ import java.util.ArrayList;
 import java.util.Deque;
 import java.util.List;
 import java.util.Optional;
-import java.util.concurrent.ExecutionException;
 import java.util.concurrent.Future;
 import java.util.function.Consumer;
 import java.util.function.Function;
@@ -131,7 +130,7 @@ public final class LinkSchedule {
                     index += n;
                     lastClock = clocks[n - 1];
                 }
-                Done<T> done = take(ahead.poll());
+                Done<T> done = Workers.take(ahead.poll());
                 write.accept(done.encoded());
                 total.merge(done.part());
             }
@@ -173,23 +172,6 @@ public final class LinkSchedule {
             minT = min(minT, later.minT);
             maxT = max(maxT, later.maxT);
             budgets.ifPresent(b -> b.merge(later.budgets.orElseThrow()));
-        }
-    }
-
-    private static <T> Done<T> take(Future<Done<T>> f) {
-        try {
-            return f.get();
-        } catch (InterruptedException e) {
-            Thread.currentThread().interrupt();
-            throw new IllegalStateException("interrupted", e);
-        } catch (ExecutionException e) {
-            if (e.getCause() instanceof RuntimeException r) {
-                throw r;
-            }
-            if (e.getCause() instanceof Error r) {
-                throw r;
-            }
-            throw new IllegalStateException(e.getCause());
         }
     }
 

@@ -62,6 +62,45 @@ public final class Workers implements AutoCloseable {
         }
     }
 
+    /**
+     * Computes {@code work(1) .. work(n)} on these threads, up to {@link #ahead()} items ahead of the one handed
+     * on, and gives each result to {@code sink} on the calling thread in order: the same sequence for any number
+     * of threads. A failure of an item is thrown when its turn comes (later items are cancelled).
+     */
+    public <T> void inOrder(long n, java.util.function.LongFunction<T> work, java.util.function.Consumer<T> sink) {
+        java.util.ArrayDeque<Future<T>> pending = new java.util.ArrayDeque<>();
+        long next = 1;
+        try {
+            while (next <= n || !pending.isEmpty()) {
+                while (next <= n && pending.size() < ahead()) {
+                    long item = next++;
+                    pending.add(submit(() -> work.apply(item)));
+                }
+                sink.accept(take(pending.poll()));
+            }
+        } finally {
+            pending.forEach(f -> f.cancel(true));
+        }
+    }
+
+    /** The result of {@code f}, its failure rethrown as it was. */
+    static <T> T take(Future<T> f) {
+        try {
+            return f.get();
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+            throw new IllegalStateException("interrupted", e);
+        } catch (java.util.concurrent.ExecutionException e) {
+            if (e.getCause() instanceof RuntimeException r) {
+                throw r;
+            }
+            if (e.getCause() instanceof Error r) {
+                throw r;
+            }
+            throw new IllegalStateException(e.getCause());
+        }
+    }
+
     @Override
     public void close() {
         if (pool != null) {

@@ -1,0 +1,147 @@
+package org.nullpath.cli;
+
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.concurrent.Callable;
+
+import org.nullpath.mission.Mission;
+import org.nullpath.mission.Printable;
+import org.nullpath.mission.Sweep;
+import org.nullpath.report.OutputFolder;
+import org.nullpath.report.SweepOutput;
+import org.nullpath.report.Table;
+import org.nullpath.scenario.Problem;
+import org.nullpath.scenario.ScenarioDocument;
+import org.nullpath.scenario.ScenarioException;
+import org.nullpath.scenario.SweepReader;
+import org.nullpath.schedule.RangeException;
+import org.nullpath.schedule.StudyFigures;
+import org.nullpath.schedule.SweepRow;
+import org.nullpath.schedule.Workers;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code nullpath sweep SWEEP --out DIR}: a trade study over one scenario. */
+@Command(name = "sweep", mixinStandardHelpOptions = true,
+        description = "Run a trade study: the scenario a sweep file names, once per point of its grid and random"
+                + " draws, each point's figures as plan would write them, into sweep.csv and sweep-summary.json"
+                + " (all files appear together, or none on failure).")
+final class SweepCommand implements Callable<Integer> {
+    @Parameters(index = "0", paramLabel = "SWEEP", description = "the sweep file (YAML)")
+    Path sweepFile;
+
+    @Option(names = {"-o", "--out"}, required = true, paramLabel = "DIR", description = "folder to write into")
+    Path out;
+
+    @Option(names = "--threads", paramLabel = "N", description = "points computed at once (default: the machine's"
+            + " processors, ${DEFAULT-VALUE} here); the files are the same for any number")
+    int threads = Runtime.getRuntime().availableProcessors();
+
+    @Option(names = "--quiet", description = "no progress on standard error")
+    boolean quiet;
+
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public Integer call() {
+        PrintWriter err = spec.commandLine().getErr();
+        if (threads < 1) {
+            err.println("nullpath: --threads must be at least 1 (got " + threads + ")");
+            return Main.INPUT_ERROR;
+        }
+        try {
+            OutputFolder.checkTarget(out);
+        } catch (OutputFolder.Refused e) {
+            err.println("nullpath: --out: " + e.getMessage());
+            return Main.INPUT_ERROR;
+        }
+        SweepReader.Loaded loaded;
+        Mission base;
+        try {
+            loaded = SweepReader.read(sweepFile);
+            base = loaded.scenario().resolve();
+        } catch (ScenarioException e) {
+            for (Problem p : e.problems()) {
+                err.println(p.render());
+            }
+            return Main.INPUT_ERROR;
+        }
+        Sweep sweep = loaded.sweep();
+        List<String> keys = sweep.keys();
+        List<String> names = StudyFigures.names(base);
+        long points = sweep.points();
+        List<double[]> columns = new ArrayList<>();
+        for (int i = 0; i < names.size(); i++) {
+            columns.add(new double[(int) points]);
+        }
+        long[] invalid = {0};
+        Table<SweepRow> table = SweepOutput.table(keys, names);
+        Progress progress = Progress.start(err, quiet, points);
+        // interrupted (Ctrl-C, SIGTERM): the staged files are removed by the folder's own hook; DIR stays as it was
+        List<Path> inputs = new ArrayList<>(base.source().inputs());
+        inputs.add(sweepFile);
+        OutputFolder.Commit commit;
+        try (OutputFolder folder = OutputFolder.begin(out, inputs, () -> err.println("nullpath: another run is"
+                + " writing into " + out + "; waiting until it is done"));
+             Workers workers = Workers.of(threads);
+             Table.Writer<SweepRow> csv = table.open(folder.file(SweepOutput.CSV))) {
+            workers.inOrder(points, p -> point(loaded.scenario(), sweep, p, names.size()), row -> {
+                csv.write(row);
+                if (!row.valid()) {
+                    invalid[0]++;
+                }
+                for (int i = 0; i < names.size(); i++) {
+                    columns.get(i)[(int) (row.point() - 1)] = row.figure(i);
+                }
+                progress.step();
+            });
+            csv.close();
+            SweepOutput.summary(folder.file(SweepOutput.SUMMARY), sweep, names, points, invalid[0], columns);
+            commit = folder.commit();
+        } catch (OutputFolder.Refused e) {
+            err.println("nullpath: cannot write " + out + ": " + e.getMessage());
+            return Main.INPUT_ERROR;
+        } catch (IOException | UncheckedIOException e) {
+            err.println("nullpath: cannot write " + out + ": " + e.getMessage());
+            return Main.FAILURE;
+        } finally {
+            progress.close();
+        }
+        spec.commandLine().getOut().printf(Locale.ROOT, "%s: %d points (%d valid, %d invalid), written to %s%s%n",
+                sweepFile, points, points - invalid[0], invalid[0], out,
+                commit.replaced().isEmpty() ? "" : " (replacing " + commit.replaced().size() + " files already there)");
+        return 0;
+    }
+
+    /** Point {@code p}: its scenario resolved with the point's values, and its figures; invalid with one line. */
+    private static SweepRow point(ScenarioDocument doc, Sweep sweep, long p, int figures) {
+        Map<String, Sweep.Value> values = sweep.point(p);
+        double[] none = new double[figures];
+        java.util.Arrays.fill(none, Double.NaN);
+        List<Sweep.Value> row = List.copyOf(values.values());
+        try {
+            ScenarioDocument d = doc;
+            for (Map.Entry<String, Sweep.Value> e : values.entrySet()) {
+                d = d.with(e.getKey(), e.getValue().scenarioText());
+            }
+            Mission m = d.resolve();
+            return new SweepRow(p, row, "", StudyFigures.of(m));
+        } catch (ScenarioException e) {
+            Problem first = e.problems().get(0);
+            String more = e.problems().size() > 1 ? " (and " + (e.problems().size() - 1) + " more)" : "";
+            return new SweepRow(p, row, Printable.of(first.key() + ": " + first.message() + more), none);
+        } catch (RangeException e) {
+            return new SweepRow(p, row, Printable.of(e.key() + ": " + e.getMessage()), none);
+        }
+    }
+}
