@@ -281,7 +281,8 @@ public final class SweepReader {
         }
         for (int i = 0; i < n; i++) {
             // inclusive and linear; the ends exactly as written
-            double x = i == n - 1 ? to.number() : from.number() + (to.number() - from.number()) * i / (n - 1);
+            double w = (double) i / (n - 1);
+            double x = i == n - 1 ? to.number() : i == 0 ? from.number() : from.number() * (1 - w) + to.number() * w;
             out.add(Sweep.number(x, unit(expected.get())));
         }
         return new Sweep.Axis(key, out);
