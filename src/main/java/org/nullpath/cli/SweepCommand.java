@@ -7,20 +7,16 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
-import java.util.Map;
 import java.util.concurrent.Callable;
 
 import org.nullpath.mission.Mission;
-import org.nullpath.mission.Printable;
 import org.nullpath.mission.Sweep;
 import org.nullpath.report.OutputFolder;
 import org.nullpath.report.SweepOutput;
 import org.nullpath.report.Table;
 import org.nullpath.scenario.Problem;
-import org.nullpath.scenario.ScenarioDocument;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.SweepReader;
-import org.nullpath.schedule.RangeException;
 import org.nullpath.schedule.StudyFigures;
 import org.nullpath.schedule.SweepRow;
 import org.nullpath.schedule.Workers;
@@ -95,7 +91,7 @@ final class SweepCommand implements Callable<Integer> {
                 + " writing into " + out + "; waiting until it is done"));
              Workers workers = Workers.of(threads);
              Table.Writer<SweepRow> csv = table.open(folder.file(SweepOutput.CSV))) {
-            workers.inOrder(points, p -> point(loaded.scenario(), sweep, p, names.size()), row -> {
+            workers.inOrder(points, p -> SweepPoints.compute(loaded.scenario(), sweep, p, names.size()), row -> {
                 csv.write(row);
                 if (!row.valid()) {
                     invalid[0]++;
@@ -121,27 +117,5 @@ final class SweepCommand implements Callable<Integer> {
                 sweepFile, points, points - invalid[0], invalid[0], out,
                 commit.replaced().isEmpty() ? "" : " (replacing " + commit.replaced().size() + " files already there)");
         return 0;
-    }
-
-    /** Point {@code p}: its scenario resolved with the point's values, and its figures; invalid with one line. */
-    private static SweepRow point(ScenarioDocument doc, Sweep sweep, long p, int figures) {
-        Map<String, Sweep.Value> values = sweep.point(p);
-        double[] none = new double[figures];
-        java.util.Arrays.fill(none, Double.NaN);
-        List<Sweep.Value> row = List.copyOf(values.values());
-        try {
-            ScenarioDocument d = doc;
-            for (Map.Entry<String, Sweep.Value> e : values.entrySet()) {
-                d = d.with(e.getKey(), e.getValue().scenarioText());
-            }
-            Mission m = d.resolve();
-            return new SweepRow(p, row, "", StudyFigures.of(m));
-        } catch (ScenarioException e) {
-            Problem first = e.problems().get(0);
-            String more = e.problems().size() > 1 ? " (and " + (e.problems().size() - 1) + " more)" : "";
-            return new SweepRow(p, row, Printable.of(first.key() + ": " + first.message() + more), none);
-        } catch (RangeException e) {
-            return new SweepRow(p, row, Printable.of(e.key() + ": " + e.getMessage()), none);
-        }
     }
 }

@@ -58,6 +58,21 @@ public record Table<R>(List<Column<R>> columns) {
         }
     }
 
+    /** The header line and every row of {@code rows} as the file holds them, in UTF-8. */
+    public byte[] encodeWithHeader(List<R> rows) {
+        return (headerLine() + lines(rows)).getBytes(StandardCharsets.UTF_8);
+    }
+
+    /** The header line, ending in LF. */
+    String headerLine() {
+        StringBuilder head = new StringBuilder();
+        List<String> names = header();
+        for (int i = 0; i < names.size(); i++) {
+            CsvText.append(head, names.get(i), i == 0);
+        }
+        return head.append('\n').toString();
+    }
+
     /** The CSV text of {@code rows}, each line ending in LF (the header not included). */
     String lines(List<R> rows) {
         StringBuilder b = new StringBuilder(rows.size() * 24 * columns.size() + 16);
@@ -81,12 +96,7 @@ public record Table<R>(List<Column<R>> columns) {
         private Writer(Table<R> table, Path file) throws IOException {
             this.table = table;
             this.out = new BufferedOutputStream(Files.newOutputStream(file), 1 << 16);
-            StringBuilder head = new StringBuilder();
-            List<String> names = table.header();
-            for (int i = 0; i < names.size(); i++) {
-                CsvText.append(head, names.get(i), i == 0);
-            }
-            out.write(head.append('\n').toString().getBytes(StandardCharsets.UTF_8));
+            out.write(table.headerLine().getBytes(StandardCharsets.UTF_8));
         }
 
         /** Writes one row; an I/O failure surfaces as {@link UncheckedIOException}. */
