@@ -13,6 +13,7 @@ import org.nullpath.mission.Mission;
 import org.nullpath.mission.Sweep;
 import org.nullpath.report.OutputFolder;
 import org.nullpath.report.SweepOutput;
+import org.nullpath.report.SweepPage;
 import org.nullpath.report.Table;
 import org.nullpath.scenario.Problem;
 import org.nullpath.scenario.ScenarioException;
@@ -29,7 +30,7 @@ import picocli.CommandLine.Model.CommandSpec;
 /** {@code nullpath sweep SWEEP --out DIR}: a trade study over one scenario. */
 @Command(name = "sweep", mixinStandardHelpOptions = true,
         description = "Run a trade study: the scenario a sweep file names, once per point of its grid and random"
-                + " draws, each point's figures as plan would write them, into sweep.csv and sweep-summary.json"
+                + " draws, each point's figures as plan would write them, into sweep.csv, sweep-summary.json and sweep.html"
                 + " (all files appear together, or none on failure).")
 final class SweepCommand implements Callable<Integer> {
     @Parameters(index = "0", paramLabel = "SWEEP", description = "the sweep file (YAML)")
@@ -80,6 +81,10 @@ final class SweepCommand implements Callable<Integer> {
         for (int i = 0; i < names.size(); i++) {
             columns.add(new double[(int) points]);
         }
+        List<double[]> keyValues = new ArrayList<>();
+        for (int i = 0; i < keys.size(); i++) {
+            keyValues.add(new double[(int) points]);
+        }
         long[] invalid = {0};
         Table<SweepRow> table = SweepOutput.table(keys, names);
         Progress progress = Progress.start(err, quiet, points);
@@ -99,10 +104,15 @@ final class SweepCommand implements Callable<Integer> {
                 for (int i = 0; i < names.size(); i++) {
                     columns.get(i)[(int) (row.point() - 1)] = row.figure(i);
                 }
+                for (int i = 0; i < keys.size(); i++) {
+                    keyValues.get(i)[(int) (row.point() - 1)] = row.values().get(i).number();
+                }
                 progress.step();
             });
             csv.close();
             SweepOutput.summary(folder.file(SweepOutput.SUMMARY), sweep, names, points, invalid[0], columns);
+            SweepPage.write(folder.file(SweepOutput.PAGE), new SweepPage.Data(sweep, base.title(),
+                    sweepFile.getFileName().toString(), names, keyValues, columns, invalid[0]));
             commit = folder.commit();
         } catch (OutputFolder.Refused e) {
             err.println("nullpath: cannot write " + out + ": " + e.getMessage());

@@ -22,6 +22,7 @@ public final class SweepOutput {
     /** The files a sweep writes. */
     public static final String CSV = "sweep.csv";
     public static final String SUMMARY = "sweep-summary.json";
+    public static final String PAGE = "sweep.html";
 
     private SweepOutput() {
     }

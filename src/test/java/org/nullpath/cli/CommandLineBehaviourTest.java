@@ -254,7 +254,7 @@ class CommandLineBehaviourTest {
     void helpListsPlanAndCheckAndVersionPrintsTheVersion() {
         PlanRun.Outcome h = PlanRun.run("--help");
         assertEquals(0, h.exitCode());
-        assertTrue(h.out().contains("plan") && h.out().contains("check"), h.out());
+        assertTrue(h.out().contains("plan") && h.out().contains("check") && h.out().contains("sweep"), h.out());
         PlanRun.Outcome v = PlanRun.run("--version");
         assertEquals(0, v.exitCode());
         assertTrue(v.out().startsWith("nullpath "), v.out());
@@ -266,6 +266,14 @@ class CommandLineBehaviourTest {
             List<Path> files = demos.filter(p -> p.toString().endsWith(".yaml")).sorted().toList();
             assertTrue(files.size() >= 3, "at least three demos");
             for (Path demo : files) {
+                if (demo.getFileName().toString().endsWith("-sweep.yaml")) {
+                    // a demo trade study over one of the demo scenarios
+                    PlanRun.Outcome o = PlanRun.run("sweep", demo.toString(), "--out",
+                            tmp.resolve("sweep-" + demo.getFileName()).toString(), "--quiet");
+                    assertEquals(0, o.exitCode(), demo + ": " + o.err());
+                    assertTrue(o.out().contains(" 0 invalid)"), o.out());
+                    continue;
+                }
                 assertEquals(0, PlanRun.run("check", demo.toString()).exitCode(), demo.toString());
                 Path out = tmp.resolve("demo-" + demo.getFileName());
                 PlanRun.Outcome o = PlanRun.run("plan", demo.toString(), "--out", out.toString());

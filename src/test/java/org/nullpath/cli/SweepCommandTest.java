@@ -157,6 +157,29 @@ class SweepCommandTest {
             assertArrayEquals(Files.readAllBytes(tmp.resolve("one/" + f)), Files.readAllBytes(tmp.resolve("three/" + f)), f);
         }
         assertEquals(24, PlanRun.csv(tmp.resolve("one/sweep.csv")).size());
+        assertArrayEquals(Files.readAllBytes(tmp.resolve("one/sweep.html")), Files.readAllBytes(tmp.resolve("three/sweep.html")));
+    }
+
+    @Test
+    void thePageShowsEveryFigureTheGridAndTheDraws() throws IOException {
+        String draws = GRID + """
+                draws: 3
+                random:
+                  - {key: links.down.receiver.noise-temperature, uniform: [20 K, 40 K]}
+                """;
+        assertEquals(0, sweep(draws, "out").exitCode());
+        String page = Files.readString(tmp.resolve("out/sweep.html"));
+        List<String> header = PlanRun.csv(tmp.resolve("out/sweep.csv")).get(0).getParser().getHeaderNames();
+        // every figure has its row in the table of spreads (the columns after point, status, problem and 3 keys)
+        for (String figure : header.subList(6, header.size())) {
+            assertTrue(page.contains("<tr><td><code>" + figure + "</code></td>"), figure);
+        }
+        // two numeric grid keys: heat maps; draws: histograms; the caution; self-contained
+        assertTrue(page.contains("<figure id=\"heat-"), "heat maps");
+        assertTrue(page.contains("<figure id=\"hist-"), "histograms");
+        assertTrue(page.contains("licensed practice"), "the caution");
+        assertFalse(page.contains("<script") || page.contains("http://") && !page.contains("http://www.w3.org"), "offline");
+        assertTrue(page.contains("18 points (18 valid, 0 invalid)"));
     }
 
     @Test
