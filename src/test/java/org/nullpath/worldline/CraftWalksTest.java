@@ -296,4 +296,40 @@ class CraftWalksTest {
         acc[0] = 99;
         assertEquals(1.0, p.accelerationsMetresPerSecond2()[0], "a copy is handed out");
     }
+
+    @ParameterizedTest(name = "profile {0}: start {1}, end {2}, largest {3} (g0)")
+    @CsvSource({
+        // accelerations at clocks 0, 0.2, 0.5, 0.8 yr (g0); expected at start, at end, of largest size
+        "'0.2 1.5 -2.0 0.1', 0.2, 0.1, -2.0",   // largest at an inner knot
+        "'0.5 0.1 0.2 -0.7', 0.5, -0.7, -0.7",  // largest at the end
+        "'0.9 0.3 -0.2 0.4', 0.9, 0.4, 0.9",    // largest at the start
+    })
+    void aProfiledLegsAccelerationRangeIsReadAtItsKnotsAndEnds(String accelerations, double start, double end,
+                                                             double largest) {
+        double[] a = java.util.Arrays.stream(accelerations.split(" ")).mapToDouble(x -> Double.parseDouble(x) * G0)
+                .toArray();
+        StraightLineCraft c = StraightLineCraft.of(Vec3.ZERO, Vec3.of(1, 0, 0), 0, 0, 0, List.of(
+                new LegSpec.Burn(-0.3 * G0, new LegSpec.ClockDuration(0.1 * YR)),
+                new LegSpec.Profile(new double[] {0, 0.2 * YR, 0.5 * YR, 0.8 * YR}, a),
+                new LegSpec.Coast(new LegSpec.ClockDuration(YR))));
+        // linear between samples, so the values at the samples are the law's own (LegSpec.Profile)
+        assertEquals(new AccelerationRange(start * G0, end * G0, largest * G0), c.legs().get(1).acceleration());
+        assertEquals(new AccelerationRange(-0.3 * G0, -0.3 * G0, -0.3 * G0), c.legs().get(0).acceleration());
+        assertEquals(new AccelerationRange(0, 0, 0), c.legs().get(2).acceleration());
+    }
+
+    @ParameterizedTest(name = "linear at {0} = {1}")
+    @CsvSource({
+        // samples (0, 1), (2, 5), (6, -3): held outside, the sample's own value at a sample, linear between
+        "-1,  1",
+        "0,   1",
+        "1,   3",
+        "2,   5",
+        "4,   1",
+        "6,  -3",
+        "7,  -3",
+    })
+    void tabulatedValuesAreInterpolatedLinearly(double x, double expected) {
+        assertEquals(expected, Samples.linear(new double[] {0, 2, 6}, new double[] {1, 5, -3}, x));
+    }
 }
