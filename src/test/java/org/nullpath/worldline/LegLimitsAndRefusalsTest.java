@@ -232,4 +232,39 @@ class LegLimitsAndRefusalsTest {
         close("burn time", f.get("burn_time_s"), 750 * 0.01 * C / 2e3, 1e-15);
         assertEquals(-2.0, new LegSpec.ThrustRocket(-2e3, 1e3, 250, 0.01 * C).accelerationMetresPerSecond2());
     }
+
+    @Test
+    void aFlightKnowsItsOwnLimitAndWhetherItMayLastForEver() {
+        LegStart rest = new LegStart(2, new LineState(0, 0, 0, 0, 0, 0), Vec3.ZERO, Vec3.of(1, 0, 0));
+        LegFlight rocket = new LegSpec.Rocket(G0, VE, RATIO).fly(rest);
+        close("Ackeret burn time", rocket.limit(), BURN, 1e-15);
+        WorldlineException e = assertThrows(WorldlineException.class, rocket::forever);
+        assertEquals("the leg cannot last for ever: it ends when the propellant is spent", e.getMessage());
+        assertEquals(2, e.legIndex());
+        LegFlight burn = new LegSpec.Burn(G0, new LegSpec.Forever()).fly(rest);
+        assertEquals(Double.POSITIVE_INFINITY, burn.limit());
+        assertEquals(Double.POSITIVE_INFINITY, burn.forever());
+        assertTrue(fly(0, new LegSpec.Burn(G0, new LegSpec.Forever())).legs().get(0).openEnded());
+        assertTrue(!fly(0, new LegSpec.Burn(G0, new LegSpec.ClockDuration(1))).legs().get(0).openEnded());
+    }
+
+    @Test
+    void aFiniteLegBeyondWhatDoublesHoldIsRefused() {
+        // 1e30 m/s^2 for 1 s of clock: rapidity a tau / c = 3.3e21 (Rindler), far past the limit of 700
+        WorldlineException e = refused(0, new LegSpec.Burn(1e30, new LegSpec.ClockDuration(1)));
+        assertEquals("the leg reaches a rapidity or distance beyond what double precision can hold (rapidity limit 700.0)",
+                e.getMessage());
+        assertEquals(0, e.legIndex());
+    }
+
+    @Test
+    void aStateKnowsItsEventAndGamma() {
+        State s = fly(0.6 * C).atTime(1e6);
+        assertEquals(new org.nullpath.spacetime.Event(1e6, s.position()), s.event());
+        // 0.6 c: gamma = 1.25 (Einstein 1905)
+        close("gamma", s.gamma(), 1.25, 1e-15);
+        close("beta", s.beta(), 0.6, 1e-15);
+        close("velocity", s.velocity().x(), 0.6 * C, 1e-15);
+        close("clock", s.clock(), 1e6 / 1.25, 1e-15);
+    }
 }
