@@ -96,6 +96,8 @@ class CraftWalksTest {
         LineState start = craft.lineAtClock(from);
         String at = from / YR + " yr -> " + to / YR + " yr";
         StraightLineCraft.LineWalk byClock = craft.walkClock(start, to - from);
+        assertEnd(at + " by clock", craft, ref, heading, byClock.end(), to, tol);
+        close(at + " clock by clock", byClock.dClock(), dClock, tol);
         close(at + " dt by clock", byClock.dt(), d[0], tol);
         close(at + " along by clock", byClock.dAlong(), d[1], tol);
         close(at + " U by clock", byClock.dU(), d[2], tol);
@@ -109,7 +111,7 @@ class CraftWalksTest {
             close(at + " clock by " + names[k], w.dClock(), dClock, tol);
             close(at + " dt by " + names[k], w.dt(), d[0], tol);
             close(at + " along by " + names[k], w.dAlong(), d[1], tol);
-            close(at + " end clock by " + names[k], w.end().clock(), RefMath.bd(to), tol);
+            assertEnd(at + " by " + names[k], craft, ref, heading, w.end(), to, tol);
             assertTrue(Double.isNaN(w.dU()) && Double.isNaN(w.dV()), "only a walk by clock sums U and V");
         }
         // the Worldline interface's own moves
@@ -117,12 +119,33 @@ class CraftWalksTest {
         Step byTime = craft.advance(s, d[0].doubleValue());
         close(at + " advance: clock", byTime.dClockSeconds(), dClock, tol);
         close(at + " advance: end clock", byTime.end().clock(), RefMath.bd(to), tol);
+        close(at + " advance: end time", byTime.end().timeSeconds(), ref.atClock(RefMath.bd(to)).t(), tol);
+        close(at + " advance: end x", byTime.end().position().x(), ref.atClock(RefMath.bd(to)).position()[0], tol);
         Step clockStep = craft.advanceClock(s, to - from);
         close(at + " advanceClock: dt", clockStep.dtSeconds(), d[0], tol);
         close(at + " advanceClock: end time", clockStep.end().timeSeconds(), ref.atClock(RefMath.bd(to)).t(), tol);
         close(at + " advanceClock: along", heading[0] * clockStep.displacement().x() + heading[1]
                 * clockStep.displacement().y() + heading[2] * clockStep.displacement().z(), d[1], tol);
         assertEquals(to - from, clockStep.dClockSeconds());
+        close(at + " advanceClock: end clock", clockStep.end().clock(), RefMath.bd(to), tol);
+        close(at + " advanceClock: end x", clockStep.end().position().x(), ref.atClock(RefMath.bd(to)).position()[0], tol);
+    }
+
+    /** A walk's end state against the reference state at clock {@code to}: clock, time, along, speed. */
+    static void assertEnd(String at, StraightLineCraft craft, RefWorldline ref, double[] heading, LineState end,
+                          double to, double tol) {
+        RefState r = ref.atClock(RefMath.bd(to));
+        close(at + ": end clock", end.clock(), RefMath.bd(to), tol);
+        close(at + ": end time", end.timeSeconds(), r.t(), tol);
+        double[] origin = {craft.origin().x(), craft.origin().y(), craft.origin().z()};
+        double along = 0;
+        double beta = 0;
+        for (int i = 0; i < 3; i++) {
+            along += heading[i] * (r.position()[i].doubleValue() - origin[i]);
+            beta += heading[i] * r.velocity()[i].doubleValue() / C;
+        }
+        assertEquals(along, end.along(), tol * Math.abs(along) + 1e-3, at + ": end along");
+        assertEquals(beta, Math.tanh(end.rapidity()), 1e-12, at + ": end speed");
     }
 
     @ParameterizedTest(name = "kite {0} yr -> {1} yr")
