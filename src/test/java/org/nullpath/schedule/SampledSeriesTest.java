@@ -165,4 +165,16 @@ class SampledSeriesTest {
                 all.stream().map(SampledSeries.LinkSeries::link).toList());
         assertEquals(SampledSeries.MAX_SAMPLES, all.get(1).samples().size());
     }
+
+    @Test
+    void aLinkWithTermsCarriesThemAndABudgetInEverySample() throws ScenarioException {
+        Mission m = ScenarioLoader.load(ScheduleAgainstReferenceTest.scenario(), "schedule.yaml");
+        SampledSeries.LinkSeries up = series(m, "up", 4);
+        assertEquals(8.4e9, up.terms().orElseThrow().carrierHz());
+        assertEquals(4, up.samples().size());
+        for (SampledSeries.Sample x : up.samples()) {
+            // received frequency = carrier x D (the definition of the Doppler factor)
+            assertEquals(8.4e9 * x.doppler(), x.budget().orElseThrow().rxFrequencyHz(), 1e-6);
+        }
+    }
 }

@@ -160,4 +160,20 @@ class TallyPartsTest {
         assertFalse(new SendOrder(List.of()).hasNext());
         assertTrue(new SendOrder(List.of(new MessagePlan.At(link, List.of(1.0)))).hasNext());
     }
+
+    // ---------------------------------------------------------------- refusals
+
+    @Test
+    void aRangeRefusalNamesItsScenarioKeyAndAWindowNeedsLinkTerms() {
+        ArithmeticException cause = new ArithmeticException("beyond doubles");
+        RangeException e = new RangeException("links.up", "message 3: beyond doubles", cause);
+        assertEquals("links.up", e.key());
+        assertEquals("message 3: beyond doubles", e.getMessage());
+        assertEquals(cause, e.getCause());
+        Station home = new Station("home", org.nullpath.worldline.InertialWorldline.atRest(org.nullpath.spacetime.Vec3.ZERO));
+        Link bare = new Link("bare", home, home, Optional.empty());
+        IllegalArgumentException w = org.junit.jupiter.api.Assertions.assertThrows(IllegalArgumentException.class,
+                () -> Windows.scan(new org.nullpath.mission.WindowScan(bare, 0, 1)));
+        assertEquals("window on link bare needs link terms", w.getMessage());
+    }
 }
