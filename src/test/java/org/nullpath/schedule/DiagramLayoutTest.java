@@ -19,6 +19,7 @@ import org.nullpath.testkit.ScenarioText;
 import static org.junit.jupiter.api.Assertions.assertArrayEquals;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
+import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.nullpath.testkit.Si.AU;
 import static org.nullpath.testkit.Si.C;
@@ -260,5 +261,26 @@ class DiagramLayoutTest {
         close("top", d.lastTime(), 1.04 * DAY, 1e-12);
         close("left", d.firstAlong(), -0.5 * C * 1.06 * DAY, 1e-12);
         close("right", d.lastAlong(), 0.5 * C * 1.06 * DAY, 1e-12);
+        // a drawing far wider than high: the distance range stays 0.1 c t padded 4 % each side (0.08 x 0.106 c d)
+        // and the time range grows to match it
+        DiagramTraces.Diagram wide = DiagramTraces.of(lines.get(0), true, SampledSeries.of(m), 0.001);
+        double width = 0.1 * C * 1.06 * DAY;
+        close("wide left", wide.firstAlong(), -0.04 * width, 1e-12);
+        close("wide right", wide.lastAlong(), 0.04 * width, 1e-12);
+        close("wide top", wide.lastTime(), -0.02 * DAY + 0.08 * width / 0.001 / C, 1e-12);
+        for (double bad : new double[] {0, -1, Double.NaN, Double.POSITIVE_INFINITY}) {
+            assertThrows(IllegalArgumentException.class, () -> DiagramTraces.of(lines.get(0), true, SampledSeries.of(m), bad));
+        }
+        assertThrows(IllegalArgumentException.class, () -> DiagramTraces.of(lines.get(0), true, SampledSeries.of(m), 2, 1));
+    }
+
+    @Test
+    void aCraftWhoseOnlyBoundaryIsAtMissionTimeZeroIsDrawnOverOneDay() throws ScenarioException {
+        Mission m = ScenarioLoader.load(ScenarioText.homeAndCraft("probe", "burn: {acceleration: 1 g0, duration: forever}")
+                .yaml(), "one-day.yaml");
+        DiagramTraces.Diagram d = DiagramTraces.of(DiagramTraces.flightLines(m).get(0), true, SampledSeries.of(m), 1.0);
+        close("bottom", d.firstTime(), -0.02 * DAY, 1e-12);
+        // the distance range (the probe's 1.04 d of hyperbolic motion) is far below c t: the time range stays
+        close("top", d.lastTime(), 1.04 * DAY, 1e-12);
     }
 }

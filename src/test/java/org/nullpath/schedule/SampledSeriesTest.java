@@ -44,13 +44,18 @@ class SampledSeriesTest {
                           single: {from: probe, to: home}
                           late: {from: home, to: probe}
                           none: {from: probe, to: home}
+                          both: {from: home, to: probe}
+                          once: {from: home, to: probe}
                         messages:
                           - {link: up, first: 10 d, last: 400 d, every: 5 d}
                           - {link: down, first: 1 d, last: 50 d, every: 7 d}
                           - {link: single, at: [40 d]}
                           - {link: late, at: [380 d, 360 d]}
+                          - {link: both, at: [100 d]}
                         exchanges:
                           - {name: ask, query: lone, reply: down, turnaround: 1 h, first: 2 d, last: 300 d, every: 7 d}
+                          - {name: also, query: both, reply: down, turnaround: 1 h, first: 2 d, last: 300 d, every: 7 d}
+                          - {name: one, query: once, reply: down, turnaround: 1 h, first: 20 d, last: 20 d, every: 7 d}
                         """)
                 .yaml(), "series.yaml");
     }
@@ -145,6 +150,10 @@ class SampledSeriesTest {
         assertFalse(lone.horizonCutsRange(), "the horizon at 353.8 d lies after the range");
         // one planned send: one sample
         assertSamples(series(m, "single", 50), new double[] {40 * DAY}, PROBE, HOME);
+        // planned messages set the range even where exchange queries go on the same link
+        assertSamples(series(m, "both", 5), new double[] {100 * DAY}, HOME, PROBE);
+        // one exchange query: one sample
+        assertSamples(series(m, "once", 5), new double[] {20 * DAY}, HOME, PROBE);
     }
 
     @Test
@@ -161,7 +170,7 @@ class SampledSeriesTest {
         assertTrue(none.samples().isEmpty());
         assertThrows(IllegalArgumentException.class, () -> series(m, "down", 1));
         List<SampledSeries.LinkSeries> all = SampledSeries.of(m);
-        assertEquals(List.of("up", "down", "lone", "single", "late", "none"),
+        assertEquals(List.of("up", "down", "lone", "single", "late", "none", "both", "once"),
                 all.stream().map(SampledSeries.LinkSeries::link).toList());
         assertEquals(SampledSeries.MAX_SAMPLES, all.get(1).samples().size());
     }
