@@ -49,9 +49,7 @@ final class FlightPlan {
         boolean open = false;
         for (int i = 0; i < legSpecs.size(); i++) {
             LegSpec leg = legSpecs.get(i);
-            if (open) {
-                throw new WorldlineException(i - 1, "an open-ended leg must be the last leg");
-            }
+            // an open-ended leg that is not the last is refused here, so none is ever followed by another
             boolean openEnded = leg.end().openEnded();
             if (openEnded && i != legSpecs.size() - 1) {
                 throw new WorldlineException(i, "an open-ended leg (duration: forever) must be the last leg");

@@ -128,4 +128,30 @@ class WindowsTest {
         assertEquals("doppler-rate", w.get(0).closedBy());
         assertRelative(30 * 86400.0 - 1e12 / C, w.get(0).closesClock(), 1e-9);
     }
+
+    @Test
+    void aWindowOpensWhereTheReceivedFrequencyFallsBelowTheTopOfTheTuningRange() throws ScenarioException {
+        // D = 1 - a t / c (closed form above): in [7.0, 7.15] GHz for D in [7.0 / 7.2, 7.15 / 7.2]
+        List<WindowRow> w = windows(scenario("      tuning-range: [7.0 GHz, 7.15 GHz]", "1 GW",
+                "{link: up, from: 0 d, to: 60 d}"));
+        assertEquals(1, w.size());
+        assertRelative((1 - 7.15 / 7.2) * C / A, w.get(0).opensClock(), 1e-9);
+        assertRelative((1 - 7.0 / 7.2) * C / A, w.get(0).closesClock(), 1e-9);
+        assertEquals("tuning", w.get(0).closedBy());
+        assertEquals("up", w.get(0).link());
+    }
+
+    @Test
+    void aRangeThatEndsBeforeTheHorizonEndsItsWindowAtTheRangeEnd() throws ScenarioException {
+        // the horizon is at c / a = 707.5 d (physics.md), after the scanned range; 1e20 W keeps the margin up
+        List<WindowRow> w = windows(scenario("", "1e20 W", "{link: up, from: 10 d, to: 700 d}"));
+        assertEquals(List.of(new WindowRow("up", 10 * 86400.0, 700 * 86400.0, "end")), w);
+        // a range wholly beyond the horizon has no window at all
+        assertEquals(List.of(), windows(scenario("", "1e20 W", "{link: up, from: 710 d, to: 800 d}")));
+        // a range that starts open and straddles the horizon closes there
+        List<WindowRow> h = windows(scenario("", "1e20 W", "{link: up, from: 700 d, to: 800 d}"));
+        assertEquals(1, h.size());
+        assertEquals("horizon", h.get(0).closedBy());
+        assertRelative(C / A, h.get(0).closesClock(), 1e-12);
+    }
 }

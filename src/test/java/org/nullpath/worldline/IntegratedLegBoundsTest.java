@@ -106,5 +106,9 @@ class IntegratedLegBoundsTest {
         assertFalse(e.aboutEnd(), e.getMessage());
         assertTrue(e.getMessage().contains("more than " + LegIntegration.MAX_STEPS + " integration steps"),
                 e.getMessage());
+        // where it stopped, out of the planned span (the last knot)
+        assertTrue(e.getMessage().contains(") after "), e.getMessage());
+        assertTrue(e.getMessage().contains(" s of craft clock (of " + LegFlight.num(clock[n - 1])
+                + " s); shorten the leg, smooth its acceleration or weaken it"), e.getMessage());
     }
 }

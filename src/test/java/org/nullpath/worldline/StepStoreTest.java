@@ -40,12 +40,27 @@ class StepStoreTest {
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(0, 1e6, 1e-20, 1e-13);
         DenseOutputModel reference = new DenseOutputModel();
         StepStore store = new StepStore(100_000);
+        java.util.List<double[]> steps = new java.util.ArrayList<>(); // {start, end} of each step, as Hipparchus gives them
         integrator.addStepHandler(reference);
         integrator.addStepHandler(store);
+        integrator.addStepHandler(interpolator -> steps.add(new double[] {interpolator.getPreviousState().getTime(),
+            interpolator.getCurrentState().getTime()}));
         double end = 3e7;
         integrator.integrate(ode, new ODEState(0, new double[5]), end);
         assertTrue(store.steps() > 10, "steps " + store.steps());
         assertEquals(end, store.end());
+        assertEquals(steps.size(), store.steps());
+        double[] lastStep = steps.get(steps.size() - 1);
+        assertEquals(lastStep[1] - lastStep[0], store.lastLength(), "the last step's length");
+        // at the step ends themselves (where the binary search hits) and clamped outside the kept steps
+        double[] exact = {steps.get(0)[1], steps.get(1)[1], steps.get(steps.size() / 2)[0], -1e6, end, 2 * end};
+        for (double u : exact) {
+            double[] want = reference.getInterpolatedState(Math.max(0, Math.min(end, u))).getPrimaryState();
+            double[] got = store.at(u);
+            for (int k = 0; k < 5; k++) {
+                assertEquals(want[k], got[k], 1e-13 * Math.abs(want[k]) + 1e-300, "component " + k + " at " + u);
+            }
+        }
         Random random = new Random(42);
         double[] size = reference.getInterpolatedState(end).getPrimaryState();
         for (int i = 0; i < 2000; i++) {
