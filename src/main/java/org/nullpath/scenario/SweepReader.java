@@ -65,36 +65,10 @@ public final class SweepReader {
         doc.resolve(); // the scenario itself must be valid: its own problems, at its own lines
 
         Set<String> seen = new LinkedHashSet<>();
-        List<Sweep.Axis> grid = new ArrayList<>();
-        if (top.has("vary")) {
-            Node vary = top.get("vary");
-            if (!(vary instanceof ListNode l) || l.items().isEmpty()) {
-                problems.at(vary, "vary", "expected a list of grid keys such as [{key: links.down.transmitter.power,"
-                        + " values: [10 W, 40 W]}], got " + Values.describe(vary));
-            } else {
-                for (int i = 0; i < l.items().size(); i++) {
-                    Sweep.Axis ax = axis(l.items().get(i), KeyPaths.item("vary", i), values, doc, seen);
-                    if (ax != null) {
-                        grid.add(ax);
-                    }
-                }
-            }
-        }
-        List<Sweep.Draw> random = new ArrayList<>();
-        if (top.has("random")) {
-            Node r = top.get("random");
-            if (!(r instanceof ListNode l) || l.items().isEmpty()) {
-                problems.at(r, "random", "expected a list of drawn keys such as [{key: craft.heron.start-speed,"
-                        + " normal: [0 c, 0.001 c]}], got " + Values.describe(r));
-            } else {
-                for (int i = 0; i < l.items().size(); i++) {
-                    Sweep.Draw d = draw(l.items().get(i), KeyPaths.item("random", i), values, doc, seen);
-                    if (d != null) {
-                        random.add(d);
-                    }
-                }
-            }
-        }
+        List<Sweep.Axis> grid = items(top, problems, "vary", "a list of grid keys such as [{key:"
+                + " links.down.transmitter.power, values: [10 W, 40 W]}]", (n, at) -> axis(n, at, values, doc, seen));
+        List<Sweep.Draw> random = items(top, problems, "random", "a list of drawn keys such as [{key:"
+                + " craft.heron.start-speed, normal: [0 c, 0.001 c]}]", (n, at) -> draw(n, at, values, doc, seen));
         int draws = 0;
         if (top.has("draws")) {
             double d = top.number("draws");
@@ -138,6 +112,32 @@ public final class SweepReader {
             throw problems.exception();
         }
         return new Loaded(sweep, doc, file);
+    }
+
+    /** Reads one entry of a list at its key path; null on a problem (added). */
+    @FunctionalInterface
+    private interface EntryReader<T> {
+        T read(Node entry, String path);
+    }
+
+    /** The entries of the list under {@code key}, when given: a non-empty list, each entry read by {@code one}. */
+    private static <T> List<T> items(Fields top, Problems problems, String key, String what, EntryReader<T> one) {
+        List<T> out = new ArrayList<>();
+        if (!top.has(key)) {
+            return out;
+        }
+        Node n = top.get(key);
+        if (!(n instanceof ListNode l) || l.items().isEmpty()) {
+            problems.at(n, key, "expected " + what + ", got " + Values.describe(n));
+            return out;
+        }
+        for (int i = 0; i < l.items().size(); i++) {
+            T t = one.read(l.items().get(i), KeyPaths.item(key, i));
+            if (t != null) {
+                out.add(t);
+            }
+        }
+        return out;
     }
 
     /** The varied key of an entry, checked against the scenario; null on a problem (added). */
