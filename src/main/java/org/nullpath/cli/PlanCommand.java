@@ -57,15 +57,8 @@ final class PlanCommand implements Callable<Integer> {
              Workers workers = input.workers()) {
             result = PlanOutput.write(s, folder, !noReport, err, workers);
             commit = folder.commit();
-        } catch (OutputFolder.Refused e) {
-            err.println("nullpath: cannot write " + out + ": " + e.getMessage());
-            return Main.INPUT_ERROR;
         } catch (IOException | UncheckedIOException e) {
-            err.println("nullpath: cannot write " + out + ": " + e.getMessage());
-            if (debug) {
-                e.printStackTrace(err);
-            }
-            return Main.FAILURE;
+            return Main.cannotWrite(err, out, e, debug);
         } catch (RangeException e) {
             err.println(input.located(e));
             return Main.INPUT_ERROR;

@@ -114,12 +114,8 @@ final class SweepCommand implements Callable<Integer> {
             SweepPage.write(folder.file(SweepOutput.PAGE), new SweepPage.Data(sweep, base.title(),
                     sweepFile.getFileName().toString(), names, keyValues, columns, invalid[0]));
             commit = folder.commit();
-        } catch (OutputFolder.Refused e) {
-            err.println("nullpath: cannot write " + out + ": " + e.getMessage());
-            return Main.INPUT_ERROR;
         } catch (IOException | UncheckedIOException e) {
-            err.println("nullpath: cannot write " + out + ": " + e.getMessage());
-            return Main.FAILURE;
+            return Main.cannotWrite(err, out, e, false);
         } finally {
             progress.close();
         }
