@@ -35,6 +35,9 @@ class MotionFactorTest {
         "3.0, 0, 1, 0, 0.6, 0.8, 0",          // receding at an angle
         "-3.0, 0, 1, 0, 0.6, 0.8, 0",         // approaching at an angle
         "1.0, 1, 0, 0, 0, 1, 0",              // across the line of sight: gamma
+        "1e-9, 1, 0, 0, 0, 1, 0",             // slow, exactly across: the offset (gamma - 1 = 5e-19) keeps its digits
+        "1e-9, 1, 0, 0, 1e-12, 1, 0",         // slow, receding a hair off the perpendicular
+        "-1e-9, 1, 0, 0, 1e-12, 1, 0",        // slow, approaching a hair off the perpendicular
         "5.0, 1, 0, 0, 1, 1e-15, 0",          // within the on-line angle: taken as on the line
         "60.0, 1, 0, 0, 1, 1e-13, 0",         // beyond it: the small angle dominates exp(-60)
         "400, 1, 0, 0, -0.6, 0.8, 0",         // past |eta| = 300, where sinh^2 nears overflow
