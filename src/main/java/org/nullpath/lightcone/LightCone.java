@@ -219,8 +219,7 @@ public final class LightCone {
             StraightLineCraft.LineWalk w = craft.walkClock(at, du);
             return (a0 + w.dU()) * (-a0 + w.dV()) - rho2;
         };
-        double guess = Math.sqrt(a0 * a0 + rho2) / C / Math.cosh(Math.min(Math.abs(at.rapidity()), 700));
-        double du = solveAfterSignChange(h, guess > 0 ? guess : 1.0);
+        double du = solveAfterSignChange(h, offLineGuess(a0, rho2, at));
         StraightLineCraft.LineWalk w = craft.walkClock(at, du);
         double dz = 0.5 * (w.dV() - w.dU()) - a0;
         Vec3 path = craft.heading().times(dz).minus(perpendicular);
@@ -238,13 +237,21 @@ public final class LightCone {
             StraightLineCraft.LineWalk w = craft.walkClock(at, -du);
             return (a0 - w.dU()) * (-a0 - w.dV()) - rho2;
         };
-        double guess = Math.sqrt(a0 * a0 + rho2) / C / Math.cosh(Math.min(Math.abs(at.rapidity()), 700));
-        double du = solveAfterSignChange(h, guess > 0 ? guess : 1.0);
+        double du = solveAfterSignChange(h, offLineGuess(a0, rho2, at));
         StraightLineCraft.LineWalk w = craft.walkClock(at, -du);
         // photon displacement: receive minus emit = (b - along_emit) heading + perpendicular
         double dzEmit = a0 + 0.5 * (w.dV() - w.dU()); // along_emit - b
         Vec3 path = perpendicular.minus(craft.heading().times(dzEmit));
         return new SignalPath(craft.toState(w.end()), receive, -w.dt(), path, false);
+    }
+
+    /**
+     * Where the off-line solves start doubling: the craft-clock time the straight distance takes at the craft's
+     * time dilation (any positive start brackets the root; a poor one costs only doublings).
+     */
+    private static double offLineGuess(double a0, double rho2, LineState at) {
+        double guess = Math.sqrt(a0 * a0 + rho2) / C / Math.cosh(Math.min(Math.abs(at.rapidity()), 700));
+        return guess > 0 ? guess : 1.0;
     }
 
     /**
