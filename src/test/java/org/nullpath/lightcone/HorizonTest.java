@@ -140,8 +140,8 @@ class HorizonTest {
     @CsvSource({
         "0, 0, 0, 0.5, 2, 0",          // a craft chasing the receiver: the last send comes later than c/a
         "0, 0, 0, -0.5, 2, 0",         // a craft flying away from the receiver's escape: sooner
-        "0.5, -3, 0.2, 0.3, 1, -2",    // the receiver left 2 yr before mission time 0: the horizon lies before 0
-        "0.5, -3, -0.6, -0.3, 1, -2",
+        "-1, -3, 0.2, 0.3, 1, -2",     // the receiver left 2 yr before mission time 0: the horizon lies before 0
+        "-1, -3, -0.6, -0.3, 1, -2",
         "-1, -1, 0.4, 1.5, 0.5, 1",
         "2, 0.5, -0.3, 0, 0, -0.5",    // a coasting craft (no legs)
     })

@@ -194,6 +194,14 @@ class LightConeTest {
                 () -> "light time " + p.lightTimeSeconds() + " expected " + lightTime);
     }
 
+    @ParameterizedTest(name = "{0} m off the line at 1 m along it: on the line {1}")
+    @CsvSource({"1e-14, true", "1.0000000000000002e-14, false", "0, true"})
+    void aPointWithinTheOnLineAngleIsOnTheFlightLine(double off, boolean on) {
+        // LightCone.onLine: on the line "to within ON_LINE_ANGLE" (1e-14 rad), the edge included (nullpath's reading
+        // of "within", recorded here so that it does not change unnoticed)
+        assertEquals(on, LightCone.onLine(fromRest(G0), Vec3.of(1, off, 0)));
+    }
+
     /**
      * Reference for a station at rest at (0, d, 0) and a craft from rest at the origin at 1 g0 along +x:
      * the craft clock tau at which c (t(tau) - t_e) = sqrt(x(tau)^2 + d^2), t = (c/a) sinh(a tau/c),
