@@ -264,10 +264,7 @@ public final class LightCone {
         int doublings = 0;
         while (!(f.applyAsDouble(hi) > 0)) {
             lo = hi;
-            hi *= 2;
-            if (++doublings > 2000 || !Double.isFinite(hi)) {
-                throw new ArithmeticException("light-cone solve: no bracket found");
-            }
+            hi = doubled(hi, ++doublings, "light-cone solve: no bracket found");
         }
         return brent(f, lo, hi);
     }
@@ -299,12 +296,10 @@ public final class LightCone {
         double hi = guess > 0 ? guess : 1.0;
         int doublings = 0;
         while (f.applyAsDouble(hi) < 0) {
-            hi *= 2;
-            if (++doublings > 2000 || !Double.isFinite(hi)) {
-                throw new ArithmeticException("light-cone solve: no bracket found (signal never arrives?)");
-            }
+            hi = doubled(hi, ++doublings, "light-cone solve: no bracket found (signal never arrives?)");
         }
-        return brent(f, hi / 2 > 0 && f.applyAsDouble(hi / 2) < 0 ? hi / 2 : 0, hi);
+        double half = hi / 2;
+        return brent(f, half > 0 && f.applyAsDouble(half) < 0 ? half : 0, hi);
     }
 
     /** Root of an increasing function of any sign at 0, bracketed by doubling on the side it lies. */
@@ -317,18 +312,20 @@ public final class LightCone {
         double span = step;
         int doublings = 0;
         while (Math.signum(g.applyAsDouble(dir * span)) == Math.signum(g0)) {
-            span *= 2;
-            if (++doublings > 2000 || !Double.isFinite(span)) {
-                throw new ArithmeticException("horizon solve: no bracket found");
-            }
+            span = doubled(span, ++doublings, "horizon solve: no bracket found");
         }
-        double lo = dir > 0 ? span / 2 : -span;
-        double hi = dir > 0 ? span : -span / 2;
-        if (doublings == 0) {
-            lo = Math.min(0, dir * span);
-            hi = Math.max(0, dir * span);
+        // the root lies between the last two points tried: dir span and the one before it (0 when none)
+        double before = doublings == 0 ? 0 : dir * span / 2;
+        return brent(g, Math.min(before, dir * span), Math.max(before, dir * span));
+    }
+
+    /** {@code x} doubled, for the {@code doublings}-th time of a bracket search; past 2000 or infinity it fails. */
+    private static double doubled(double x, int doublings, String failure) {
+        double twice = x * 2;
+        if (doublings > 2000 || !Double.isFinite(twice)) {
+            throw new ArithmeticException(failure);
         }
-        return brent(g, lo, hi);
+        return twice;
     }
 
     private static double brent(DoubleUnaryOperator f, double lo, double hi) {
