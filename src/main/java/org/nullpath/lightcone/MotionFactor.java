@@ -23,7 +23,7 @@ public record MotionFactor(double value, double minusOne) {
     }
 
     private static boolean onLine(double sin2) {
-        return sin2 < LightCone.ON_LINE_ANGLE * LightCone.ON_LINE_ANGLE;
+        return sin2 <= LightCone.ON_LINE_ANGLE * LightCone.ON_LINE_ANGLE;
     }
 
     /** The factor of the body in state {@code s} for the photon direction {@code k} (a unit vector). */

@@ -68,6 +68,7 @@ class MotionFactorTest {
         "1, 0, 0, true",
         "-1, 0, 0, true",
         "-1, 9e-15, 0, true",
+        "1, 1e-14, 0, true",                  // exactly at the angle: "within" includes its edge, as LightCone.onLine
         "1, 0, 1.1e-14, false",
         "0.6, 0.8, 0, false",
     })
