@@ -144,11 +144,12 @@ class HorizonTest {
         "-1, -3, -0.6, -0.3, 1, -2",
         "-1, -1, 0.4, 1.5, 0.5, 1",
         "2, 0.5, -0.3, 0, 0, -0.5",    // a coasting craft (no legs)
+        "0, 0, 0, -1, -1, 0",          // running off for ever the other way (a clock duration of -1: open-ended)
     })
     void theHorizonOfACraftSenderMatchesTheReference(double x0Ly, double t0Years, double beta, double aG0,
                                                      double burnYears, double leaveYears) {
-        LegSpec[] legs = aG0 == 0 ? new LegSpec[0]
-                : new LegSpec[] {new LegSpec.Burn(aG0 * G0, new LegSpec.ClockDuration(burnYears * YR))};
+        LegSpec.LegEnd end = burnYears < 0 ? new LegSpec.Forever() : new LegSpec.ClockDuration(burnYears * YR);
+        LegSpec[] legs = aG0 == 0 ? new LegSpec[0] : new LegSpec[] {new LegSpec.Burn(aG0 * G0, end)};
         TwinCraft sender = TwinCraft.of(new double[] {x0Ly * LY, 0.1 * LY, 0}, new double[] {1, 0, 0}, t0Years * YR,
                 0, beta * C, legs);
         TwinCraft receiver = TwinCraft.of(new double[] {0, 0, 0}, new double[] {1, 0, 0}, leaveYears * YR, 0, 0,
