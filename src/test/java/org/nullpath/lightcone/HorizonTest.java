@@ -145,6 +145,9 @@ class HorizonTest {
         "-1, -1, 0.4, 1.5, 0.5, 1",
         "2, 0.5, -0.3, 0, 0, -0.5",    // a coasting craft (no legs)
         "0, 0, 0, -1, -1, 0",          // running off for ever the other way (a clock duration of -1: open-ended)
+        "-0.967746, 0, 0.99, 0, 0, 0",     // a fast chaser 1e-3 of the limit short of it: c t - x grows at only 0.01 c
+        "-0.967746, 0, 0.999, 0, 0, 0",
+        "-0.9687, 0, 0.9, 0.1, 1, 0",
     })
     void theHorizonOfACraftSenderMatchesTheReference(double x0Ly, double t0Years, double beta, double aG0,
                                                      double burnYears, double leaveYears) {
