@@ -162,17 +162,12 @@ public final class LightCone {
         double b = craft.alongOf(send.position());
         LineState at = craft.lineAtTime(send.timeSeconds());
         double gap = at.along() - b;
-        StraightLineCraft.LineWalk w;
-        double sign;
-        if (gap > 0) {
-            w = craft.walkU(at, gap);
-            sign = 1;
-        } else if (gap < 0) {
-            w = craft.walkV(at, -gap);
-            sign = -1;
-        } else {
+        // +1: the craft is ahead of the send along its heading, the photon follows it (walk in U); -1: behind (V)
+        double sign = Math.signum(gap);
+        if (sign == 0) {
             return new SignalPath(send, craft.toState(at), 0.0, Vec3.ZERO, true);
         }
+        StraightLineCraft.LineWalk w = sign == 1 ? craft.walkU(at, gap) : craft.walkV(at, -gap);
         if (w.never()) {
             return SignalPath.never(send);
         }
