@@ -122,6 +122,22 @@ class DopplerRateTest {
         assertEquals(expected, rate(sender, receiver, LightCone.future(send, receiver)), CENTRAL_REL * Math.abs(expected));
     }
 
+    @Test
+    void aReceiverCrossingTheLineOfSightMatchesTheReferenceDerivative() {
+        // a station at rest at the origin signals at t = 0 to one that passes (1 ly, 0, 0) across the line of sight
+        // at t = 1 yr: the photon runs along the sender's (default) direction, at right angles to the receiver's
+        // motion, and only the turning geometry changes D
+        double[] velocity = {0, -0.4 * C, 0.1 * C};
+        double[] atZero = {LY, 0.4 * LY, -0.1 * LY};
+        InertialWorldline home = InertialWorldline.atRest(Vec3.ZERO);
+        InertialWorldline mover = InertialWorldline.of(Vec3.of(atZero[0], atZero[1], atZero[2]),
+                Vec3.of(velocity[0], velocity[1], velocity[2]), 0);
+        double expected = RefSolver.dopplerRate(RefStation.atRest(new double[] {0, 0, 0}), BigDecimal.ZERO,
+                RefStation.of(atZero, velocity, 0)).doubleValue();
+        assertEquals(expected, rate(home, mover, LightCone.future(home.atClock(0), mover)),
+                CENTRAL_REL * Math.abs(expected));
+    }
+
     @ParameterizedTest(name = "{0} s before the horizon")
     @CsvSource({"1500", "4500"})
     void nextToAHorizonTheRateMatchesTheReferenceDerivative(double before) {
