@@ -162,17 +162,12 @@ public final class LightCone {
         double b = craft.alongOf(send.position());
         LineState at = craft.lineAtTime(send.timeSeconds());
         double gap = at.along() - b;
-        StraightLineCraft.LineWalk w;
-        double sign;
-        if (gap > 0) {
-            w = craft.walkU(at, gap);
-            sign = 1;
-        } else if (gap < 0) {
-            w = craft.walkV(at, -gap);
-            sign = -1;
-        } else {
+        // +1: the craft is ahead of the send along its heading, the photon follows it (walk in U); -1: behind (V)
+        double sign = Math.signum(gap);
+        if (sign == 0) {
             return new SignalPath(send, craft.toState(at), 0.0, Vec3.ZERO, true);
         }
+        StraightLineCraft.LineWalk w = sign == 1 ? craft.walkU(at, gap) : craft.walkV(at, -gap);
         if (w.never()) {
             return SignalPath.never(send);
         }
@@ -324,12 +319,10 @@ public final class LightCone {
         double hi = guess > 0 ? guess : 1.0;
         int doublings = 0;
         while (f.applyAsDouble(hi) < 0) {
-            hi *= 2;
-            if (++doublings > 2000 || !Double.isFinite(hi)) {
-                throw new ArithmeticException("light-cone solve: no bracket found (signal never arrives?)");
-            }
+            hi = doubled(hi, ++doublings, "light-cone solve: no bracket found (signal never arrives?)");
         }
-        return brent(f, hi / 2 > 0 && f.applyAsDouble(hi / 2) < 0 ? hi / 2 : 0, hi);
+        double half = hi / 2;
+        return brent(f, half > 0 && f.applyAsDouble(half) < 0 ? half : 0, hi);
     }
 
     /** Root of an increasing function of any sign at 0, bracketed by doubling on the side it lies. */
@@ -342,18 +335,20 @@ public final class LightCone {
         double span = step;
         int doublings = 0;
         while (Math.signum(g.applyAsDouble(dir * span)) == Math.signum(g0)) {
-            span *= 2;
-            if (++doublings > 2000 || !Double.isFinite(span)) {
-                throw new ArithmeticException("horizon solve: no bracket found");
-            }
+            span = doubled(span, ++doublings, "horizon solve: no bracket found");
         }
-        double lo = dir > 0 ? span / 2 : -span;
-        double hi = dir > 0 ? span : -span / 2;
-        if (doublings == 0) {
-            lo = Math.min(0, dir * span);
-            hi = Math.max(0, dir * span);
+        // the root lies between the last two points tried: dir span and the one before it (0 when none)
+        double before = doublings == 0 ? 0 : dir * span / 2;
+        return brent(g, Math.min(before, dir * span), Math.max(before, dir * span));
+    }
+
+    /** {@code x} doubled, for the {@code doublings}-th time of a bracket search; past 2000 or infinity it fails. */
+    private static double doubled(double x, int doublings, String failure) {
+        double twice = x * 2;
+        if (doublings > 2000 || !Double.isFinite(twice)) {
+            throw new ArithmeticException(failure);
         }
-        return brent(g, lo, hi);
+        return twice;
     }
 
     private static double brent(DoubleUnaryOperator f, double lo, double hi) {

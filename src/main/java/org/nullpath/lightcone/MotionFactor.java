@@ -6,7 +6,8 @@ import org.nullpath.worldline.State;
 /**
  * A body's factor gamma (1 - beta . k) for a photon travelling along the unit vector k, and that factor
  * minus one, both without cancellation: for a body receding along k it is
- * {@code exp(-|eta|) + |sinh eta| (1 - |mu|)}, otherwise {@code cosh eta + |sinh eta| |mu|}, with
+ * {@code exp(-|eta|) + |sinh eta| (1 - |mu|)} (minus one: {@code expm1(-|eta|) + ...} within 60 degrees of the
+ * line of motion, {@code (cosh eta - 1) - |sinh eta| |mu|} beyond), otherwise {@code cosh eta + |sinh eta| |mu|}, with
  * {@code 1 - |mu| = sin^2(theta) / (1 + |mu|)} from a cross product (mu = n . k). Directions within
  * {@link LightCone#ON_LINE_ANGLE} of the body's line of motion count as on it. The Doppler factor is the
  * receiver's over the sender's; the sender-frame distance is the sender's times c T.
@@ -22,7 +23,7 @@ public record MotionFactor(double value, double minusOne) {
     }
 
     private static boolean onLine(double sin2) {
-        return sin2 < LightCone.ON_LINE_ANGLE * LightCone.ON_LINE_ANGLE;
+        return sin2 <= LightCone.ON_LINE_ANGLE * LightCone.ON_LINE_ANGLE;
     }
 
     /** The factor of the body in state {@code s} for the photon direction {@code k} (a unit vector). */
@@ -41,15 +42,19 @@ public record MotionFactor(double value, double minusOne) {
         double absMu = Math.abs(mu);
         double oneMinusAbsMu = sin2 / (1 + absMu);
         double ash = Math.abs(Math.sinh(eta));
-        if (eta * mu >= 0) {
-            double a = Math.abs(eta);
-            return new MotionFactor(Math.exp(-a) + ash * oneMinusAbsMu, Math.expm1(-a) + ash * oneMinusAbsMu);
-        }
         double sh = Math.sinh(eta);
         // cosh eta - 1 without cancellation; past |eta| = 300 sinh^2 would overflow (at about 355), so the
         // equal 2 sinh^2(eta / 2) is used there (finite up to the rapidity limit of 700)
         double half = Math.sinh(eta / 2);
         double gm1 = Math.abs(eta) < 300 ? sh * sh / (Math.cosh(eta) + 1) : 2 * half * half;
+        if (eta * mu >= 0) {
+            double a = Math.abs(eta);
+            // value - 1: within 60 degrees of the line of motion from expm1(-|eta|); nearer the perpendicular the
+            // two terms of that form (about -|eta| and +|eta|) cancel for a slow body, and (cosh eta - 1) -
+            // |sinh eta| |mu| does not (it cancels only where the offset itself passes through zero)
+            double minusOne = absMu < 0.5 ? gm1 - ash * absMu : Math.expm1(-a) + ash * oneMinusAbsMu;
+            return new MotionFactor(Math.exp(-a) + ash * oneMinusAbsMu, minusOne);
+        }
         return new MotionFactor(Math.cosh(eta) + ash * absMu, gm1 + ash * absMu);
     }
 }

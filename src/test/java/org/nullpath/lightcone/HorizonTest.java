@@ -8,7 +8,10 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
 import org.junit.jupiter.params.provider.ValueSource;
+import org.nullpath.reference.RefHorizon;
+import org.nullpath.reference.RefSolver;
 import org.nullpath.spacetime.Decimal;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.worldline.InertialWorldline;
@@ -131,5 +134,61 @@ class HorizonTest {
                 List.of(new LegSpec.Burn(G0, new LegSpec.Forever())));
         assertFalse(LightCone.horizon(ahead, receiver).exists());
         assertTrue(LightCone.future(ahead.atClock(3 * YR), receiver).delivered());
+    }
+
+    @ParameterizedTest(name = "sender from {0} ly at {1} yr, {2} c, burning {3} g0 for {4} yr; receiver leaves at {5} yr")
+    @CsvSource({
+        "0, 0, 0, 0.5, 2, 0",          // a craft chasing the receiver: the last send comes later than c/a
+        "0, 0, 0, -0.5, 2, 0",         // a craft flying away from the receiver's escape: sooner
+        "-1, -3, 0.2, 0.3, 1, -2",     // the receiver left 2 yr before mission time 0: the horizon lies before 0
+        "-1, -3, -0.6, -0.3, 1, -2",
+        "-1, -1, 0.4, 1.5, 0.5, 1",
+        "2, 0.5, -0.3, 0, 0, -0.5",    // a coasting craft (no legs)
+        "0, 0, 0, -1, -1, 0",          // running off for ever the other way (a clock duration of -1: open-ended)
+        "-0.967746, 0, 0.99, 0, 0, 0",     // a fast chaser 1e-3 of the limit short of it: c t - x grows at only 0.01 c
+        "-0.967746, 0, 0.999, 0, 0, 0",
+        "-0.9687, 0, 0.9, 0.1, 1, 0",
+    })
+    void theHorizonOfACraftSenderMatchesTheReference(double x0Ly, double t0Years, double beta, double aG0,
+                                                     double burnYears, double leaveYears) {
+        LegSpec.LegEnd end = burnYears < 0 ? new LegSpec.Forever() : new LegSpec.ClockDuration(burnYears * YR);
+        LegSpec[] legs = aG0 == 0 ? new LegSpec[0] : new LegSpec[] {new LegSpec.Burn(aG0 * G0, end)};
+        TwinCraft sender = TwinCraft.of(new double[] {x0Ly * LY, 0.1 * LY, 0}, new double[] {1, 0, 0}, t0Years * YR,
+                0, beta * C, legs);
+        TwinCraft receiver = TwinCraft.of(new double[] {0, 0, 0}, new double[] {1, 0, 0}, leaveYears * YR, 0, 0,
+                new LegSpec.Burn(G0, new LegSpec.Forever()));
+        assertHorizon(sender, receiver);
+    }
+
+    @Test
+    void aHorizonWithinASecondOfMissionTimeZeroMatchesTheReference() {
+        // a coasting sender at -0.5 c whose null coordinate at t = 0 is 0.4 light seconds short of the receiver's
+        // limit c^2/g0: the last send is about 0.27 s after mission time 0
+        double x0 = 0.4 * C - C * C / G0;
+        TwinCraft sender = TwinCraft.of(new double[] {x0, 0, 0}, new double[] {1, 0, 0}, 0, 0, -0.5 * C);
+        assertHorizon(sender, TwinCraft.of(new double[] {0, 0, 0}, new double[] {1, 0, 0}, 0, 0, 0,
+                new LegSpec.Burn(G0, new LegSpec.Forever())));
+    }
+
+    /**
+     * Against the 50-digit reference: the last send's mission time and the sender's clock there, to 1e-12 of the
+     * receiver's time scale (c t - x = L fixes the time to about an ulp of L / c, whatever the time itself), and a
+     * send at it never arrives.
+     */
+    private static void assertHorizon(TwinCraft sender, TwinCraft receiver) {
+        Horizon h = LightCone.horizon(sender.craft(), receiver.craft());
+        RefHorizon ref = RefSolver.horizon(sender.ref(), receiver.ref());
+        assertTrue(h.exists() && ref.exists());
+        double scale = Math.max(Math.abs(ref.tDouble()), Math.abs(ref.limit().doubleValue()) / C);
+        assertEquals(ref.tDouble(), h.lastSend().timeSeconds(), 1e-12 * scale, "last send, mission time");
+        assertEquals(ref.clockDouble(), h.lastSend().clock(), 1e-12 * scale, "last send, sender's clock");
+        assertFalse(LightCone.future(h.lastSend(), receiver.craft()).delivered(), "a send at the horizon never arrives");
+    }
+
+    @Test
+    void aCraftAlwaysReachesItsOwnLaterSelf() {
+        // the same open burn as sender and receiver: the sender's null coordinate never exceeds its own limit
+        StraightLineCraft craft = openBurnFromRest(G0);
+        assertFalse(LightCone.horizon(craft, craft).exists());
     }
 }

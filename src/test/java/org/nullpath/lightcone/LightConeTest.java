@@ -174,6 +174,19 @@ class LightConeTest {
         assertTrue(relativeError(p.receive().clock(), clock) < TOL);
     }
 
+    @ParameterizedTest(name = "approaching head on at {0} c from {1} m")
+    @CsvSource({"0.9999999990686774, 1e12", "0.9999999990686774, 3e17", "0.5, 1e9", "0.9999, 7.5e15"})
+    void aStationComingHeadOnIsMetAfterDistanceOverCPlusV(double beta, double d) {
+        // a receiver at distance d coming straight at the sender at speed v meets the photon after d / (c + v)
+        // (special relativity, elementary); beta = 1 - 2^-30 is where a cancelling form of the quadratic's root
+        // would lose eight digits. The light time depends on v only through c + v: well conditioned.
+        double v = beta * C_MS;
+        Vec3 d0 = Vec3.of(0.6 * d, 0, -0.8 * d);
+        double t = LightCone.inertialLightTime(d0, d0.unit().times(-v));
+        BigDecimal expected = div(of(d0.norm()), add(C, of(d0.unit().times(-v).norm())));
+        assertTrue(relativeError(t, expected) < TOL, () -> t + " expected " + expected);
+    }
+
     @ParameterizedTest(name = "start clock {0} s, a = {1} m/s^2")
     @CsvSource({"0, 0.49134708620235", "2.3523837217799243e7, 0.49134708620235", "1e9, -0.49134708620235",
             "3e9, 0.49134708620235"})
@@ -192,6 +205,14 @@ class LightConeTest {
         BigDecimal lightTime = sub(tr, of(te));
         assertTrue(relativeError(p.lightTimeSeconds(), lightTime) < TOL,
                 () -> "light time " + p.lightTimeSeconds() + " expected " + lightTime);
+    }
+
+    @ParameterizedTest(name = "{0} m off the line at 1 m along it: on the line {1}")
+    @CsvSource({"1e-14, true", "1.0000000000000002e-14, false", "0, true"})
+    void aPointWithinTheOnLineAngleIsOnTheFlightLine(double off, boolean on) {
+        // LightCone.onLine: on the line "to within ON_LINE_ANGLE" (1e-14 rad), the edge included (nullpath's reading
+        // of "within", recorded here so that it does not change unnoticed)
+        assertEquals(on, LightCone.onLine(fromRest(G0), Vec3.of(1, off, 0)));
     }
 
     /**

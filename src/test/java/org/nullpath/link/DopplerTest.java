@@ -131,6 +131,18 @@ class DopplerTest {
     }
 
     @Test
+    void whereSenderAndReceiverMeetThePhotonIsTakenAlongTheReceiversMotion() {
+        // a zero path has no direction of its own; nullpath takes the receiver's direction of motion (Doppler's
+        // contract), so a receiver passing a sender at rest at 0.6 c recedes along k: D = sqrt((1 - b)/(1 + b)) = 0.5
+        // (Einstein 1905, sec. 7)
+        InertialWorldline passing = InertialWorldline.of(Vec3.ZERO, Vec3.of(0, 0, 0.6 * C), 0);
+        SignalPath p = LightCone.future(InertialWorldline.atRest(Vec3.ZERO).atTime(0), passing);
+        assertTrue(p.path().isZero());
+        assertEquals(0.5, Doppler.of(p).doppler(), 1e-15);
+        assertEquals(-0.5, Doppler.of(p).offset(), 1e-15);
+    }
+
+    @Test
     void aSignalThatNeverArrivesHasNoDopplerFactor() {
         StraightLineCraft craft = oneGeeFromRest();
         SignalPath never = LightCone.future(InertialWorldline.atRest(Vec3.ZERO).atTime(2 * YR), craft);
