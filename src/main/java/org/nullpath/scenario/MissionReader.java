@@ -48,6 +48,7 @@ final class MissionReader implements References {
     static {
         List<String> k = new ArrayList<>(List.of("from", "to"));
         k.addAll(LinkTermsReader.TERM_KEYS);
+        k.add("directions");
         LINK_KEYS = List.copyOf(k);
     }
 
@@ -233,10 +234,12 @@ final class MissionReader implements References {
             from = null;
         }
         Optional<LinkTerms> terms = hasTerms ? LinkTermsReader.read(f) : Optional.empty();
+        Optional<Boolean> directions = f.bool("directions", false);
         org.nullpath.mission.Node fromNode = from == null ? null : node(from);
         org.nullpath.mission.Node toNode = to == null ? null : node(to);
-        if (bad == null && fromNode != null && toNode != null && (!hasTerms || terms.isPresent())) {
-            links.put(e.key(), new Link(e.key(), fromNode, toNode, terms));
+        if (bad == null && fromNode != null && toNode != null && (!hasTerms || terms.isPresent())
+                && directions.isPresent()) {
+            links.put(e.key(), new Link(e.key(), fromNode, toNode, terms, directions.get()));
         }
     }
 
