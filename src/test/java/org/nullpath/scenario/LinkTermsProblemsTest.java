@@ -56,6 +56,8 @@ class LinkTermsProblemsTest {
         negative losses                 | "carrier: 8.4 GHz\ntransmitter: {power: 20 kW, antenna: {gain: 74 dBi}, losses: -1 dB}\n@RXG\n@RATE" | 9 | 66 | links.out.transmitter.losses | losses must not be negative
         zero power                      | "carrier: 8.4 GHz\ntransmitter: {power: 0 W, antenna: {gain: 74 dBi}}\n@RXG\n@RATE" | 9 | 26 | links.out.transmitter.power | power must be positive
         precompensate not a boolean     | "carrier: 8.4 GHz\nprecompensate: maybe\n@TX\n@RXD\n@RATE" | 9 | 20 | links.out.precompensate | expected true or false ~ 'maybe'
+        directions not a boolean        | "directions: always" | 8 | 17 | links.out.directions | expected true or false ~ 'always'
+        directions not a boolean, terms | "carrier: 8.4 GHz\n@TX\n@RXD\n@RATE\ndirections: 1" | 13 | 17 | links.out.directions | expected true or false
         """)
     void oneMistakeInTheTermsGivesOneProblemAtItsPlace(String mistake, String body, int line, int column, String key,
                                                        String gists) {
