@@ -104,6 +104,15 @@ public final class Tables {
                     + " the receiver at the send event (the receiver's light on the send event's past cone)",
                     d -> d.pointAheadRadians() * 1e6));
 
+    /** The antennas' pointing, after the pointing columns on a link with terms. */
+    public static final List<Column<Budget>> ANTENNA_POINTING = List.of(
+            Column.number("tx_off_boresight_deg", "deg", "transmit antenna: angle between aim and its boresight (its"
+                    + " pointing error when tracking)", b -> Math.toDegrees(b.pointing().txOffBoresightRadians())),
+            Column.number("rx_off_boresight_deg", "deg", "receive antenna: angle between look and its boresight (its"
+                    + " pointing error when tracking)", b -> Math.toDegrees(b.pointing().rxOffBoresightRadians())),
+            Column.number("pointing_loss_db", "dB", "both antennas' loss off boresight, included in rx_power_dbw and"
+                    + " everything after it", b -> b.pointing().lossDb()));
+
     /** The columns of {@code <link>.csv} for a link with these terms (if any), with an epoch (if given), without pointing. */
     public static Table<MessageRow> messages(Optional<LinkTerms> terms, Optional<Instant> epoch) {
         return messages(terms, false, epoch);
@@ -131,6 +140,11 @@ public final class Tables {
         if (pointing || terms.isPresent()) {
             for (Column<Directions> d : POINTING) {
                 c.add(d.from(r -> r.delivery().flatMap(Delivery::directions)));
+            }
+        }
+        if (terms.isPresent()) {
+            for (Column<Budget> b : ANTENNA_POINTING) {
+                c.add(b.from(r -> r.delivery().flatMap(Delivery::budget)));
             }
         }
         return new Table<>(c);

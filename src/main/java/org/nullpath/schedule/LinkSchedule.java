@@ -73,8 +73,9 @@ public final class LinkSchedule {
         MotionFactor fs = MotionFactor.of(p.send(), k);
         MotionFactor fr = MotionFactor.of(p.receive(), k);
         Doppler.Factor d = Doppler.of(fs, fr);
-        Optional<Budget> b = link.terms().map(t -> LinkBudget.evaluate(t, p, d, DopplerRate.of(sender, receiver, p, d)));
         Optional<Directions> dir = link.pointing() ? Optional.of(Directions.of(p, receiver)) : Optional.empty();
+        Optional<Budget> b = link.terms().map(t -> LinkBudget.evaluate(t, p, d, DopplerRate.of(sender, receiver, p, d),
+                dir.orElseThrow()));
         return new Evaluated(p, Optional.of(new Arrival(fs, fr, d, b, dir)));
     }
 
