@@ -12,11 +12,32 @@ import java.util.Optional;
  * @param frequency     transmitted and received frequency, Doppler rate and the receiver's limits
  * @param rxDataRateBps received data rate, D times the sender's rate
  * @param reception     received power, the detection's own figures, margin and the highest rate that closes
+ *                      (the pointing loss included)
+ * @param pointing      the antennas' angles off boresight and their pointing loss
  */
-public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception reception) {
+public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception reception, PointingLoss pointing) {
     public Budget {
         Objects.requireNonNull(frequency, "frequency");
         Objects.requireNonNull(reception, "reception");
+        Objects.requireNonNull(pointing, "pointing");
+    }
+
+    /** A budget whose antennas point exactly along the signal. */
+    public Budget(FrequencyPlan frequency, double rxDataRateBps, Reception reception) {
+        this(frequency, rxDataRateBps, reception, PointingLoss.NONE);
+    }
+
+    /**
+     * The antennas' pointing (docs/link-budget.md, "Pointing"); NaN where a value does not exist.
+     *
+     * @param txOffBoresightRadians the transmit antenna's angle between aim and its boresight (its pointing
+     *                              error when tracking)
+     * @param rxOffBoresightRadians the receive antenna's angle between look and its boresight
+     * @param lossDb                both antennas' loss off boresight, dB, included in the received power
+     */
+    public record PointingLoss(double txOffBoresightRadians, double rxOffBoresightRadians, double lossDb) {
+        /** Both antennas exactly on the signal. */
+        public static final PointingLoss NONE = new PointingLoss(0, 0, 0);
     }
 
     /**

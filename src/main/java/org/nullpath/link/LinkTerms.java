@@ -19,11 +19,24 @@ package org.nullpath.link;
  * @param dataRateBps            data rate in the sender's frame
  * @param requiredEbN0Db         required Eb/N0 (coherent), NaN otherwise
  * @param requiredPhotonsPerBit  required photons per bit (photon counting), NaN otherwise
+ * @param txPointing             how the transmit antenna is pointed
+ * @param rxPointing             how the receive antenna is pointed
  */
 public record LinkTerms(double carrierHz, boolean precompensate, double txPowerWatts, Antenna txAntenna,
                         double txLossDb, Antenna rxAntenna, double noiseTemperatureKelvin, double rxLossDb,
                         double tuningMinHz, double tuningMaxHz, double maxDopplerRateHzPerS, Detection detection,
-                        double dataRateBps, double requiredEbN0Db, double requiredPhotonsPerBit) {
+                        double dataRateBps, double requiredEbN0Db, double requiredPhotonsPerBit,
+                        Pointing txPointing, Pointing rxPointing) {
+
+    /** Terms whose antennas both track the signal exactly (no pointing loss). */
+    public LinkTerms(double carrierHz, boolean precompensate, double txPowerWatts, Antenna txAntenna,
+                     double txLossDb, Antenna rxAntenna, double noiseTemperatureKelvin, double rxLossDb,
+                     double tuningMinHz, double tuningMaxHz, double maxDopplerRateHzPerS, Detection detection,
+                     double dataRateBps, double requiredEbN0Db, double requiredPhotonsPerBit) {
+        this(carrierHz, precompensate, txPowerWatts, txAntenna, txLossDb, rxAntenna, noiseTemperatureKelvin, rxLossDb,
+                tuningMinHz, tuningMaxHz, maxDopplerRateHzPerS, detection, dataRateBps, requiredEbN0Db,
+                requiredPhotonsPerBit, Pointing.EXACT, Pointing.EXACT);
+    }
 
     /** How the receiver detects the signal. */
     public enum Detection {

@@ -12,14 +12,25 @@ import org.nullpath.worldline.Worldline;
  * @param name  its key in the scenario file (used in file names)
  * @param from  the sending node
  * @param to    the receiving node
- * @param terms radio or optical terms, when the link has a budget
+ * @param terms      radio or optical terms, when the link has a budget
+ * @param directions true when the scenario asks for each message's pointing directions ({@code directions: true})
  */
-public record Link(String name, Node from, Node to, Optional<LinkTerms> terms) {
+public record Link(String name, Node from, Node to, Optional<LinkTerms> terms, boolean directions) {
     public Link {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(from, "from");
         Objects.requireNonNull(to, "to");
         Objects.requireNonNull(terms, "terms");
+    }
+
+    /** A link without {@code directions: true}. */
+    public Link(String name, Node from, Node to, Optional<LinkTerms> terms) {
+        this(name, from, to, terms, false);
+    }
+
+    /** True when each message gets its pointing directions: every link with terms, and any asking for them. */
+    public boolean pointing() {
+        return directions || terms.isPresent();
     }
 
     /** The sender's worldline. */

@@ -9,6 +9,7 @@ import java.util.function.ToDoubleFunction;
 import org.nullpath.link.Budget;
 import org.nullpath.link.Budget.Reception.Coherent;
 import org.nullpath.link.Budget.Reception.PhotonCounting;
+import org.nullpath.link.Directions;
 import org.nullpath.link.LinkTerms;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.ExchangeRow;
@@ -86,8 +87,42 @@ public final class Tables {
                 WITHIN_DOPPLER_RATE);
     }
 
-    /** The columns of {@code <link>.csv} for a link with these terms (if any), with an epoch (if given). */
+    /**
+     * The pointing columns, last in {@code <link>.csv} on every link with terms and on any with
+     * {@code directions: true}: the signal's directions in the sender's and the receiver's rest frames.
+     */
+    public static final List<Column<Directions>> POINTING = List.of(
+            Column.number("aim_x", "", "x of the unit vector, sender's rest frame at the send event, along which the"
+                    + " signal must leave to meet the receiver (aberration included)", d -> d.aim().x()),
+            Column.number("aim_y", "", "its y", d -> d.aim().y()),
+            Column.number("aim_z", "", "its z", d -> d.aim().z()),
+            Column.number("look_x", "", "x of the unit vector, receiver's rest frame at arrival, towards where the"
+                    + " receiver sees the sender", d -> d.look().x()),
+            Column.number("look_y", "", "its y", d -> d.look().y()),
+            Column.number("look_z", "", "its z", d -> d.look().z()),
+            Column.number("point_ahead_urad", "urad", "sender's frame: angle between aim and where the sender sees"
+                    + " the receiver at the send event (the receiver's light on the send event's past cone)",
+                    d -> d.pointAheadRadians() * 1e6));
+
+    /** The antennas' pointing, after the pointing columns on a link with terms. */
+    public static final List<Column<Budget>> ANTENNA_POINTING = List.of(
+            Column.number("tx_off_boresight_deg", "deg", "transmit antenna: angle between aim and its boresight (its"
+                    + " pointing error when tracking)", b -> Math.toDegrees(b.pointing().txOffBoresightRadians())),
+            Column.number("rx_off_boresight_deg", "deg", "receive antenna: angle between look and its boresight (its"
+                    + " pointing error when tracking)", b -> Math.toDegrees(b.pointing().rxOffBoresightRadians())),
+            Column.number("pointing_loss_db", "dB", "both antennas' loss off boresight, included in rx_power_dbw and"
+                    + " everything after it", b -> b.pointing().lossDb()));
+
+    /** The columns of {@code <link>.csv} for a link with these terms (if any), with an epoch (if given), without pointing. */
     public static Table<MessageRow> messages(Optional<LinkTerms> terms, Optional<Instant> epoch) {
+        return messages(terms, false, epoch);
+    }
+
+    /**
+     * The columns of {@code <link>.csv} for a link with these terms (if any), with the pointing columns when
+     * {@code pointing} (they are there whenever there are terms), with an epoch (if given).
+     */
+    public static Table<MessageRow> messages(Optional<LinkTerms> terms, boolean pointing, Optional<Instant> epoch) {
         List<Column<MessageRow>> c = new ArrayList<>(MESSAGE);
         terms.ifPresent(t -> {
             List<Column<Budget>> part = t.detection() == LinkTerms.Detection.COHERENT ? COHERENT : PHOTON_COUNTING;
@@ -102,6 +137,16 @@ public final class Tables {
             c.add(Column.<Delivery>text("receive_time_utc", "receive_time_s as a calendar instant (with epoch)",
                     d -> Cells.utc(e, d.receiveTime())).from(MessageRow::delivery));
         });
+        if (pointing || terms.isPresent()) {
+            for (Column<Directions> d : POINTING) {
+                c.add(d.from(r -> r.delivery().flatMap(Delivery::directions)));
+            }
+        }
+        if (terms.isPresent()) {
+            for (Column<Budget> b : ANTENNA_POINTING) {
+                c.add(b.from(r -> r.delivery().flatMap(Delivery::budget)));
+            }
+        }
         return new Table<>(c);
     }
 

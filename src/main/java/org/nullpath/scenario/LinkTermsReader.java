@@ -5,8 +5,10 @@ import java.util.Optional;
 
 import org.nullpath.link.Antenna;
 import org.nullpath.link.LinkTerms;
+import org.nullpath.link.Pointing;
 import org.nullpath.scenario.YamlTree.ListNode;
 import org.nullpath.scenario.YamlTree.Node;
+import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
 import org.nullpath.units.Dimension;
 import org.nullpath.units.Spelling;
@@ -19,7 +21,9 @@ final class LinkTermsReader {
     static final List<String> TRANSMITTER_KEYS = List.of("power", "antenna", "losses");
     static final List<String> RECEIVER_KEYS = List.of("antenna", "noise-temperature", "losses", "tuning-range",
             "max-doppler-rate", "detection");
-    static final List<String> ANTENNA_KEYS = List.of("gain", "diameter", "efficiency");
+    static final List<String> ANTENNA_KEYS = List.of("gain", "diameter", "efficiency", "boresight", "beamwidth",
+            "pointing-error", "sidelobe-level");
+    static final List<String> BORESIGHTS = List.of("tracking", "forward", "aft");
     static final List<String> DETECTIONS = List.of("coherent", "photon-counting");
 
     private LinkTermsReader() {
@@ -30,8 +34,12 @@ final class LinkTermsReader {
         return TERM_KEYS.stream().anyMatch(link::has);
     }
 
-    /** The terms of a link whose mapping has term keys; empty when they have problems (all added). */
-    static Optional<LinkTerms> read(Fields link) {
+    /**
+     * The terms of a link whose mapping has term keys; empty when they have problems (all added). The sender
+     * and receiver are named as craft or not ({@code forward} and {@code aft} antennas need a craft's heading);
+     * null where the node is not known.
+     */
+    static Optional<LinkTerms> read(Fields link, Boolean senderIsCraft, Boolean receiverIsCraft) {
         Values values = link.values();
         boolean ok = true;
 
@@ -56,6 +64,7 @@ final class LinkTermsReader {
 
         double txPower = Double.NaN;
         Antenna txAntenna = null;
+        Pointing txPointing = null;
         double txLoss = Double.NaN;
         if (link.require("transmitter")) {
             Fields tx = Fields.of(link.get("transmitter"), link.path("transmitter"), values, "a transmitter",
@@ -63,14 +72,18 @@ final class LinkTermsReader {
             if (tx.ok()) {
                 txPower = atMost(tx, "power", positive(tx, "power", tx.quantity("power", Dimension.POWER)),
                         MAX_POWER_W, "W");
-                txAntenna = tx.require("antenna") ? antenna(tx.get("antenna"), tx.path("antenna"), values) : null;
+                AntennaRead a = tx.require("antenna") ? antenna(tx.get("antenna"), tx.path("antenna"), values,
+                        senderIsCraft) : null;
+                txAntenna = a == null ? null : a.antenna();
+                txPointing = a == null ? null : a.pointing();
                 txLoss = losses(tx);
             }
         }
-        ok &= !Double.isNaN(txPower) && txAntenna != null && !Double.isNaN(txLoss);
+        ok &= !Double.isNaN(txPower) && txAntenna != null && txPointing != null && !Double.isNaN(txLoss);
 
         Fields rx = null;
         Antenna rxAntenna = null;
+        Pointing rxPointing = null;
         double rxLoss = Double.NaN;
         double tuneLo = Double.NaN;
         double tuneHi = Double.NaN;
@@ -80,8 +93,11 @@ final class LinkTermsReader {
             rx = Fields.of(link.get("receiver"), link.path("receiver"), values, "a receiver", RECEIVER_KEYS);
             if (rx.ok()) {
                 rxOk = true;
-                rxAntenna = rx.require("antenna") ? antenna(rx.get("antenna"), rx.path("antenna"), values) : null;
-                rxOk &= rxAntenna != null;
+                AntennaRead a = rx.require("antenna") ? antenna(rx.get("antenna"), rx.path("antenna"), values,
+                        receiverIsCraft) : null;
+                rxAntenna = a == null ? null : a.antenna();
+                rxPointing = a == null ? null : a.pointing();
+                rxOk &= rxAntenna != null && rxPointing != null;
                 rxLoss = losses(rx);
                 rxOk &= !Double.isNaN(rxLoss);
                 if (rx.has("tuning-range")) {
@@ -168,15 +184,29 @@ final class LinkTermsReader {
             return Optional.empty();
         }
         return Optional.of(new LinkTerms(carrier, pre.get(), txPower, txAntenna, txLoss, rxAntenna, noise, rxLoss,
-                tuneLo, tuneHi, maxRate, detection, dataRate, ebn0, photons));
+                tuneLo, tuneHi, maxRate, detection, dataRate, ebn0, photons, txPointing, rxPointing));
     }
 
-    /** An antenna: {gain} or {diameter, efficiency}; null on a problem. */
-    private static Antenna antenna(Node n, String path, Values values) {
+    /** An antenna's gain model and its pointing; either is null on a problem. */
+    private record AntennaRead(Antenna antenna, Pointing pointing) {
+    }
+
+    /**
+     * An antenna: {gain} or {diameter, efficiency}, and how it is pointed; null when the mapping itself is
+     * wrong. {@code onCraft} says whether its node is a craft (null when not known).
+     */
+    private static AntennaRead antenna(Node n, String path, Values values, Boolean onCraft) {
         Fields a = Fields.of(n, path, values, "an antenna", ANTENNA_KEYS);
         if (!a.ok()) {
             return null;
         }
+        Antenna gain = gainModel(a);
+        Pointing pointing = pointing(a, onCraft, gain);
+        return new AntennaRead(gain, pointing);
+    }
+
+    /** The gain model: {gain} or {diameter, efficiency}; null on a problem. */
+    private static Antenna gainModel(Fields a) {
         if (a.has("gain") && (a.has("diameter") || a.has("efficiency"))) {
             a.problemAtKey(a.has("diameter") ? "diameter" : "efficiency", "give an antenna either a gain or a diameter"
                     + " and an efficiency, not both");
@@ -198,6 +228,84 @@ final class LinkTermsReader {
             e = Double.NaN;
         }
         return Double.isNaN(d) || Double.isNaN(e) ? null : new Antenna.Aperture(d, e);
+    }
+
+    /** Largest full half-power width: 360 degrees. */
+    static final double MAX_BEAMWIDTH_RAD = 2 * Math.PI;
+
+    /**
+     * How an antenna is pointed (docs/link-budget.md, "Pointing"): boresight, beamwidth, pointing error and
+     * sidelobe level; null on a problem. {@code gain} is the antenna's gain model (null when it has a problem).
+     */
+    private static Pointing pointing(Fields a, Boolean onCraft, Antenna gain) {
+        boolean ok = true;
+        Pointing.Boresight kind = Pointing.Boresight.TRACKING;
+        Vec3 fixed = null;
+        Node b = a.get("boresight");
+        if (b instanceof ListNode) {
+            fixed = a.values().vector(b, a.path("boresight"), Dimension.DIMENSIONLESS);
+            if (fixed != null && (fixed.isZero() || !Double.isFinite(fixed.norm()))) {
+                a.problemAt("boresight", fixed.isZero() ? "a boresight direction must not be zero; give where the"
+                        + " antenna points, e.g. [1, 0, 0]" : "the boresight direction is too long to normalise; scale it down");
+                fixed = null;
+            }
+            ok &= fixed != null;
+            kind = Pointing.Boresight.FIXED;
+            fixed = fixed == null ? null : fixed.unit();
+        } else if (b != null) {
+            String word = a.values().text(b, a.path("boresight"), "tracking, forward, aft or a direction [x, y, z]");
+            if (word == null) {
+                ok = false;
+            } else if (!BORESIGHTS.contains(word)) {
+                String hint = Spelling.closest(word, BORESIGHTS);
+                a.problemAt("boresight", "unknown boresight '" + word + "'" + (hint != null ? " (did you mean '" + hint
+                        + "'?)" : " (tracking, forward, aft or a direction [x, y, z])"));
+                ok = false;
+            } else {
+                kind = Pointing.Boresight.valueOf(word.toUpperCase(java.util.Locale.ROOT));
+                if (kind != Pointing.Boresight.TRACKING && Boolean.FALSE.equals(onCraft)) {
+                    a.problemAt("boresight", word + " follows a craft's heading, and this antenna is on a station"
+                            + " (give tracking or a direction [x, y, z])");
+                    ok = false;
+                }
+            }
+        }
+        double width = Double.NaN;
+        if (a.has("beamwidth")) {
+            width = a.quantity("beamwidth", Dimension.ANGLE);
+            if (!Double.isNaN(width) && !(width > 0 && width <= MAX_BEAMWIDTH_RAD)) {
+                a.problemAt("beamwidth", "a beamwidth (the full half-power width) lies in (0, 360 deg], got "
+                        + Values.format(width) + " rad");
+                width = Double.NaN;
+            }
+            ok &= !Double.isNaN(width);
+        }
+        double error = 0;
+        if (a.has("pointing-error")) {
+            error = a.quantity("pointing-error", Dimension.ANGLE);
+            if (!Double.isNaN(error) && !(error >= 0 && error <= Math.PI)) {
+                a.problemAt("pointing-error", "a pointing error lies in [0, 180 deg], got " + Values.format(error)
+                        + " rad");
+                error = Double.NaN;
+            } else if (!Double.isNaN(error) && b != null && kind != Pointing.Boresight.TRACKING) {
+                a.problemAtKey("pointing-error", "pointing-error is a tracking antenna's residual error; this"
+                        + " antenna's boresight is fixed, so its angle off the signal follows from the directions");
+                error = Double.NaN;
+            }
+            ok &= !Double.isNaN(error);
+        }
+        double sidelobe = Pointing.DEFAULT_SIDELOBE_DBI;
+        if (a.has("sidelobe-level")) {
+            sidelobe = within(a, "sidelobe-level", a.quantity("sidelobe-level", Dimension.GAIN), MAX_DB, "dBi");
+            ok &= !Double.isNaN(sidelobe);
+        }
+        boolean offSignal = kind != Pointing.Boresight.TRACKING || error > 0;
+        if (ok && offSignal && Double.isNaN(width) && gain instanceof Antenna.FixedGain) {
+            a.problemHere("an antenna given by its gain has no diameter to take a beamwidth from; give its"
+                    + " beamwidth (the full half-power width, e.g. 0.5 deg) to point it off the signal");
+            ok = false;
+        }
+        return ok ? new Pointing(kind, fixed, width, error, sidelobe) : null;
     }
 
     /** Losses in dB, default 0, not negative; NaN on a problem. */

@@ -48,6 +48,7 @@ final class MissionReader implements References {
     static {
         List<String> k = new ArrayList<>(List.of("from", "to"));
         k.addAll(LinkTermsReader.TERM_KEYS);
+        k.add("directions");
         LINK_KEYS = List.copyOf(k);
     }
 
@@ -232,12 +233,20 @@ final class MissionReader implements References {
             f.problemAt("to", "a link joins two different nodes; both ends are '" + from + "'");
             from = null;
         }
-        Optional<LinkTerms> terms = hasTerms ? LinkTermsReader.read(f) : Optional.empty();
         org.nullpath.mission.Node fromNode = from == null ? null : node(from);
         org.nullpath.mission.Node toNode = to == null ? null : node(to);
-        if (bad == null && fromNode != null && toNode != null && (!hasTerms || terms.isPresent())) {
-            links.put(e.key(), new Link(e.key(), fromNode, toNode, terms));
+        Optional<LinkTerms> terms = hasTerms ? LinkTermsReader.read(f, isCraft(fromNode), isCraft(toNode))
+                : Optional.empty();
+        Optional<Boolean> directions = f.bool("directions", false);
+        if (bad == null && fromNode != null && toNode != null && (!hasTerms || terms.isPresent())
+                && directions.isPresent()) {
+            links.put(e.key(), new Link(e.key(), fromNode, toNode, terms, directions.get()));
         }
+    }
+
+    /** Whether a node is a craft; null when it is not known. */
+    private static Boolean isCraft(org.nullpath.mission.Node n) {
+        return n == null ? null : n instanceof org.nullpath.mission.Craft;
     }
 
     /** A required reference to a station or craft; null when absent or unknown (problem added). */

@@ -14,6 +14,7 @@ import org.nullpath.lightcone.LightCone;
 import org.nullpath.lightcone.MotionFactor;
 import org.nullpath.lightcone.SignalPath;
 import org.nullpath.link.Budget;
+import org.nullpath.link.Directions;
 import org.nullpath.link.Doppler;
 import org.nullpath.link.DopplerRate;
 import org.nullpath.link.LinkBudget;
@@ -53,9 +54,10 @@ public final class LinkSchedule {
      * @param receiveFactor the receiver's motion factor
      * @param doppler       the Doppler factor
      * @param budget        the frequency plan and link budget, when the link has terms
+     * @param directions    the pointing directions, when the link has terms or asks for them
      */
     public record Arrival(MotionFactor sendFactor, MotionFactor receiveFactor, Doppler.Factor doppler,
-                          Optional<Budget> budget) {
+                          Optional<Budget> budget, Optional<Directions> directions) {
     }
 
     /** Evaluates the message sent on {@code link} at sender clock {@code sendClock}. */
@@ -70,8 +72,10 @@ public final class LinkSchedule {
         MotionFactor fs = MotionFactor.of(p.send(), k);
         MotionFactor fr = MotionFactor.of(p.receive(), k);
         Doppler.Factor d = Doppler.of(fs, fr);
-        Optional<Budget> b = link.terms().map(t -> LinkBudget.evaluate(t, p, d, DopplerRate.of(sender, receiver, p, d)));
-        return new Evaluated(p, Optional.of(new Arrival(fs, fr, d, b)));
+        Optional<Directions> dir = link.pointing() ? Optional.of(Directions.of(p, receiver)) : Optional.empty();
+        Optional<Budget> b = link.terms().map(t -> LinkBudget.evaluate(t, p, d, DopplerRate.of(sender, receiver, p, d),
+                dir.orElseThrow()));
+        return new Evaluated(p, Optional.of(new Arrival(fs, fr, d, b, dir)));
     }
 
     /** One signal on a link from a send clock: the path, or never. */
@@ -215,7 +219,7 @@ public final class LinkSchedule {
                 double interval = previous == null ? Double.NaN : arrivalInterval(sender, receiver, previous, p);
                 double condition = Conditioning.ofLightTime(p, a.sendFactor(), a.receiveFactor());
                 MessageRow.Delivery arrived = new MessageRow.Delivery(p.receive().timeSeconds(), rxClock,
-                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, condition, budget);
+                        p.lightTimeSeconds(), d.doppler(), d.offset(), interval, condition, budget, a.directions());
                 Optional<String> beyond = arrived.beyondDoubleRange();
                 if (beyond.isPresent()) {
                     throw new RangeException("links." + link.name(), "message " + index + " (send clock " + clock

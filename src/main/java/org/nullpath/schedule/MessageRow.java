@@ -4,6 +4,7 @@ import java.util.Objects;
 import java.util.Optional;
 
 import org.nullpath.link.Budget;
+import org.nullpath.link.Directions;
 
 /**
  * One planned message and its fate (a row of {@code <link>.csv}, docs/output-files.md).
@@ -35,12 +36,22 @@ public record MessageRow(long message, double sendClock, double sendTime, Option
      *                           the first and after one that never arrives)
      * @param lightTimeCondition relative condition number of the light time (see lightcone.Conditioning)
      * @param budget             frequency plan and link budget, when the link has terms
+     * @param directions         pointing directions, on links with terms or {@code directions: true}
      */
     public record Delivery(double receiveTime, double receiveClock, double lightTime, double doppler,
                            double frequencyOffset, double receiveInterval, double lightTimeCondition,
-                           Optional<Budget> budget) {
+                           Optional<Budget> budget, Optional<Directions> directions) {
         public Delivery {
             Objects.requireNonNull(budget, "budget");
+            Objects.requireNonNull(directions, "directions");
+        }
+
+        /** An arrival without pointing directions. */
+        public Delivery(double receiveTime, double receiveClock, double lightTime, double doppler,
+                        double frequencyOffset, double receiveInterval, double lightTimeCondition,
+                        Optional<Budget> budget) {
+            this(receiveTime, receiveClock, lightTime, doppler, frequencyOffset, receiveInterval, lightTimeCondition,
+                    budget, Optional.empty());
         }
 
         /**

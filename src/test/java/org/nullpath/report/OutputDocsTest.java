@@ -36,6 +36,8 @@ class OutputDocsTest {
         List<Column<org.nullpath.schedule.MessageRow>> all = Tables.messages(Optional.empty(),
                 Optional.of(Instant.EPOCH)).columns();
         out.put("### Last columns", columns(all.subList(Tables.MESSAGE.size(), all.size())));
+        out.put("### Pointing columns", columns(Tables.POINTING));
+        out.put("### Antenna pointing columns of a link with link terms", columns(Tables.ANTENNA_POINTING));
         out.put("## `cutoffs.csv`", columns(Tables.cutoffs(Optional.of(Instant.EPOCH)).columns()));
         out.put("## `horizons.csv`", columns(Tables.horizons(Optional.of(Instant.EPOCH)).columns()));
         out.put("## `exchanges-<name>.csv`", columns(Tables.EXCHANGES.columns()));

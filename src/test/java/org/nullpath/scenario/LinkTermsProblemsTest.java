@@ -56,6 +56,18 @@ class LinkTermsProblemsTest {
         negative losses                 | "carrier: 8.4 GHz\ntransmitter: {power: 20 kW, antenna: {gain: 74 dBi}, losses: -1 dB}\n@RXG\n@RATE" | 9 | 66 | links.out.transmitter.losses | losses must not be negative
         zero power                      | "carrier: 8.4 GHz\ntransmitter: {power: 0 W, antenna: {gain: 74 dBi}}\n@RXG\n@RATE" | 9 | 26 | links.out.transmitter.power | power must be positive
         precompensate not a boolean     | "carrier: 8.4 GHz\nprecompensate: maybe\n@TX\n@RXD\n@RATE" | 9 | 20 | links.out.precompensate | expected true or false ~ 'maybe'
+        directions not a boolean        | "directions: always" | 8 | 17 | links.out.directions | expected true or false ~ 'always'
+        directions not a boolean, terms | "carrier: 8.4 GHz\n@TX\n@RXD\n@RATE\ndirections: 1" | 13 | 17 | links.out.directions | expected true or false
+        forward on a station            | "carrier: 8.4 GHz\ntransmitter: {power: 20 kW, antenna: {gain: 74 dBi, boresight: forward, beamwidth: 1 deg}}\n@RXG\n@RATE" | 9 | 68 | links.out.transmitter.antenna.boresight | follows a craft's heading ~ on a station
+        zero boresight                  | "carrier: 8.4 GHz\n@TX\nreceiver: {antenna: {diameter: 4 m, efficiency: 0.6, boresight: [0, 0, 0]}, noise-temperature: 20 K}\n@RATE" | 10 | 69 | links.out.receiver.antenna.boresight | must not be zero
+        unknown boresight               | "carrier: 8.4 GHz\ntransmitter: {power: 20 kW, antenna: {diameter: 34 m, efficiency: 0.6, boresight: trackng}}\n@RXG\n@RATE" | 9 | 87 | links.out.transmitter.antenna.boresight | unknown boresight 'trackng' ~ did you mean 'tracking'?
+        non-finite boresight            | "carrier: 8.4 GHz\ntransmitter: {power: 20 kW, antenna: {diameter: 34 m, efficiency: 0.6, boresight: [1.5e308, 1.5e308, 0]}}\n@RXG\n@RATE" | 9 | 87 | links.out.transmitter.antenna.boresight | too long to normalise
+        zero beamwidth                  | "carrier: 8.4 GHz\ntransmitter: {power: 20 kW, antenna: {diameter: 34 m, efficiency: 0.6, beamwidth: 0 deg}}\n@RXG\n@RATE" | 9 | 87 | links.out.transmitter.antenna.beamwidth | (0, 360 deg]
+        beamwidth not an angle          | "carrier: 8.4 GHz\ntransmitter: {power: 20 kW, antenna: {diameter: 34 m, efficiency: 0.6, beamwidth: 2 m}}\n@RXG\n@RATE" | 9 | 87 | links.out.transmitter.antenna.beamwidth | expected an angle
+        negative pointing error         | "carrier: 8.4 GHz\n@TX\nreceiver: {antenna: {diameter: 4 m, efficiency: 0.6, pointing-error: -1 mrad}, noise-temperature: 20 K}\n@RATE" | 10 | 74 | links.out.receiver.antenna.pointing-error | [0, 180 deg]
+        pointing error on a fixed boresight | "carrier: 8.4 GHz\ntransmitter: {power: 20 kW, antenna: {diameter: 34 m, efficiency: 0.6, boresight: [1, 0, 0], pointing-error: 1 mrad}}\n@RXG\n@RATE" | 9 | 98 | links.out.transmitter.antenna.pointing-error | tracking antenna's residual error
+        gain only, fixed, no beamwidth  | "carrier: 8.4 GHz\ntransmitter: {power: 20 kW, antenna: {gain: 74 dBi, boresight: [1, 0, 0]}}\n@RXG\n@RATE" | 9 | 42 | links.out.transmitter.antenna | no diameter to take a beamwidth from
+        sidelobe level beyond range     | "carrier: 8.4 GHz\ntransmitter: {power: 20 kW, antenna: {diameter: 34 m, efficiency: 0.6, sidelobe-level: 400 dBi}}\n@RXG\n@RATE" | 9 | 92 | links.out.transmitter.antenna.sidelobe-level | beyond what nullpath budgets
         """)
     void oneMistakeInTheTermsGivesOneProblemAtItsPlace(String mistake, String body, int line, int column, String key,
                                                        String gists) {
