@@ -115,7 +115,7 @@ final class SweepCommand implements Callable<Integer> {
                     sweepFile.getFileName().toString(), names, keyValues, columns, invalid[0]));
             commit = folder.commit();
         } catch (IOException | UncheckedIOException e) {
-            return Main.cannotWrite(err, out, e, false);
+            return WriteFailure.report(err, out, e, false);
         } finally {
             progress.close();
         }
