@@ -20,21 +20,6 @@ public final class Main implements java.util.concurrent.Callable<Integer> {
     /** Exit code for any other failure. */
     public static final int FAILURE = 1;
 
-    /**
-     * Says that {@code out} could not be written and gives the exit code: a refused folder is wrong input, any
-     * other I/O failure a failure (its trace with {@code debug}).
-     */
-    static int cannotWrite(java.io.PrintWriter err, java.nio.file.Path out, Exception e, boolean debug) {
-        err.println("nullpath: cannot write " + out + ": " + e.getMessage());
-        if (e instanceof org.nullpath.report.OutputFolder.Refused) {
-            return INPUT_ERROR;
-        }
-        if (debug) {
-            e.printStackTrace(err);
-        }
-        return FAILURE;
-    }
-
     public static void main(String[] args) {
         System.exit(run(args));
     }

@@ -58,7 +58,7 @@ final class PlanCommand implements Callable<Integer> {
             result = PlanOutput.write(s, folder, !noReport, err, workers);
             commit = folder.commit();
         } catch (IOException | UncheckedIOException e) {
-            return Main.cannotWrite(err, out, e, debug);
+            return WriteFailure.report(err, out, e, debug);
         } catch (RangeException e) {
             err.println(input.located(e));
             return Main.INPUT_ERROR;

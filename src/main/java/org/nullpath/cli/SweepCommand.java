@@ -165,7 +165,7 @@ final class SweepCommand implements Callable<Integer> {
                     sweepFile.getFileName().toString(), names, keyValues, columns, invalid[0]));
             commit = folder.commit();
         } catch (IOException | UncheckedIOException e) {
-            return Main.cannotWrite(err, out, e, false);
+            return WriteFailure.report(err, out, e, false);
         } catch (Exception e) {
             if (engine == null && e instanceof RuntimeException r) {
                 throw r; // in process: as before, to the command line's own handler
