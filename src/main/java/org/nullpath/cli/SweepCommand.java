@@ -46,6 +46,13 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = "--quiet", description = "no progress on standard error")
     boolean quiet;
 
+    @Option(names = "--spark", paramLabel = "MASTER", description = "compute the points as an Apache Spark job on"
+            + " MASTER (local[N] in this process, or a cluster's master URL); the files are the same")
+    String spark;
+
+    /** The Spark engine, found by name only when asked for, so that Spark is not loaded otherwise. */
+    static final String SPARK_ENGINE = "org.nullpath.spark.SparkSweep";
+
     @Spec
     CommandSpec spec;
 
@@ -73,6 +80,21 @@ final class SweepCommand implements Callable<Integer> {
             }
             return Main.INPUT_ERROR;
         }
+        SweepEngine engine = null;
+        if (spark != null) {
+            if (!base.source().alsoRead().isEmpty()) {
+                err.println("nullpath: --spark: the scenario reads profile tables (" + base.source().alsoRead().get(0)
+                        + "), which a Spark job does not carry; run this sweep without --spark");
+                return Main.INPUT_ERROR;
+            }
+            try {
+                engine = Class.forName(SPARK_ENGINE).asSubclass(SweepEngine.class).getDeclaredConstructor().newInstance();
+            } catch (ReflectiveOperationException | LinkageError e) {
+                err.println("nullpath: --spark: Apache Spark is not on the class path (" + e + "); start nullpath with"
+                        + " the launcher ./nullpath, which adds it for --spark, or with spark-submit (docs/sweeps.md)");
+                return Main.INPUT_ERROR;
+            }
+        }
         Sweep sweep = loaded.sweep();
         List<String> keys = sweep.keys();
         List<String> names = StudyFigures.names(base);
@@ -96,19 +118,47 @@ final class SweepCommand implements Callable<Integer> {
                 + " writing into " + out + "; waiting until it is done"));
              Workers workers = Workers.of(threads);
              Table.Writer<SweepRow> csv = table.open(folder.file(SweepOutput.CSV))) {
-            workers.inOrder(points, p -> SweepPoints.compute(loaded.scenario(), sweep, p, names.size()), row -> {
-                csv.write(row);
-                if (!row.valid()) {
-                    invalid[0]++;
+            if (engine == null) {
+                workers.inOrder(points, p -> SweepPoints.compute(loaded.scenario(), sweep, p, names.size()), row -> {
+                    csv.write(row);
+                    if (!row.valid()) {
+                        invalid[0]++;
+                    }
+                    for (int i = 0; i < names.size(); i++) {
+                        columns.get(i)[(int) (row.point() - 1)] = row.figure(i);
+                    }
+                    for (int i = 0; i < keys.size(); i++) {
+                        keyValues.get(i)[(int) (row.point() - 1)] = row.values().get(i).number();
+                    }
+                    progress.step();
+                });
+            } else {
+                SweepEngine.Study study = new SweepEngine.Study(spark, loaded.scenario().source().text(),
+                        loaded.scenario().source().file().toString(), sweep, names);
+                long[] next = {1};
+                engine.run(study, block -> {
+                    if (block.first() != next[0]) {
+                        throw new IllegalStateException("the engine gave points from " + block.first() + ", expected "
+                                + next[0]);
+                    }
+                    next[0] += block.count();
+                    csv.append(block.csv());
+                    invalid[0] += block.invalid();
+                    for (int j = 0; j < block.count(); j++) {
+                        for (int i = 0; i < names.size(); i++) {
+                            columns.get(i)[(int) (block.first() - 1 + j)] = block.figures()[j * names.size() + i];
+                        }
+                        List<Sweep.Value> values = List.copyOf(sweep.point(block.first() + j).values());
+                        for (int i = 0; i < keys.size(); i++) {
+                            keyValues.get(i)[(int) (block.first() - 1 + j)] = values.get(i).number();
+                        }
+                        progress.step();
+                    }
+                });
+                if (next[0] != points + 1) {
+                    throw new IllegalStateException("the engine gave " + (next[0] - 1) + " of " + points + " points");
                 }
-                for (int i = 0; i < names.size(); i++) {
-                    columns.get(i)[(int) (row.point() - 1)] = row.figure(i);
-                }
-                for (int i = 0; i < keys.size(); i++) {
-                    keyValues.get(i)[(int) (row.point() - 1)] = row.values().get(i).number();
-                }
-                progress.step();
-            });
+            }
             csv.close();
             SweepOutput.summary(folder.file(SweepOutput.SUMMARY), sweep, names, points, invalid[0], columns);
             SweepPage.write(folder.file(SweepOutput.PAGE), new SweepPage.Data(sweep, base.title(),
@@ -116,6 +166,13 @@ final class SweepCommand implements Callable<Integer> {
             commit = folder.commit();
         } catch (IOException | UncheckedIOException e) {
             return WriteFailure.report(err, out, e, false);
+        } catch (Exception e) {
+            if (engine == null && e instanceof RuntimeException r) {
+                throw r; // in process: as before, to the command line's own handler
+            }
+            // the engine failed (Spark: a master that cannot be reached, a lost job); DIR stays as it was
+            err.println("nullpath: --spark " + spark + ": the job failed: " + e);
+            return Main.FAILURE;
         } finally {
             progress.close();
         }

@@ -1,5 +1,6 @@
 package org.nullpath.mission;
 
+import java.io.Serializable;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -18,7 +19,8 @@ import java.util.Objects;
  * @param seed     the seed of the draws
  * @param random   the randomly drawn keys
  */
-public record Sweep(String scenario, List<Axis> grid, int draws, long seed, List<Draw> random) {
+// Serializable: a study computed on other machines (the Spark engine) carries its sweep inside the job
+public record Sweep(String scenario, List<Axis> grid, int draws, long seed, List<Draw> random) implements Serializable {
     public Sweep {
         Objects.requireNonNull(scenario, "scenario");
         grid = List.copyOf(grid);
@@ -32,7 +34,7 @@ public record Sweep(String scenario, List<Axis> grid, int draws, long seed, List
      * One value a key takes: the scalar written into the scenario ({@code "9.80665 m/s^2"}) and its number in
      * sweep.csv (SI base units; decibels stay decibels), NaN for a word, which sweep.csv gives as written.
      */
-    public record Value(String scenarioText, double number) {
+    public record Value(String scenarioText, double number) implements Serializable {
         /** A word rather than a number ({@code forever}, {@code tracking}). */
         public boolean word() {
             return Double.isNaN(number);
@@ -40,7 +42,7 @@ public record Sweep(String scenario, List<Axis> grid, int draws, long seed, List
     }
 
     /** A grid key and its values, in order. */
-    public record Axis(String key, List<Value> values) {
+    public record Axis(String key, List<Value> values) implements Serializable {
         public Axis {
             values = List.copyOf(values);
             if (values.isEmpty()) {
@@ -61,7 +63,7 @@ public record Sweep(String scenario, List<Axis> grid, int draws, long seed, List
      * @param b        standard deviation (normal) or high end (uniform)
      * @param unit     the unit written after the drawn number in the scenario ("m/s", "dB", "" for a plain number)
      */
-    public record Draw(String key, Law law, double a, double b, String unit) {
+    public record Draw(String key, Law law, double a, double b, String unit) implements Serializable {
     }
 
     /** Number of grid points (1 for a study of draws alone). */

@@ -63,6 +63,11 @@ public record Table<R>(List<Column<R>> columns) {
         return (headerLine() + lines(rows)).getBytes(StandardCharsets.UTF_8);
     }
 
+    /** Every row of {@code rows} as the file holds them after its header, in UTF-8; keeps no state. */
+    public byte[] encode(List<R> rows) {
+        return lines(rows).getBytes(StandardCharsets.UTF_8);
+    }
+
     /** The header line, ending in LF. */
     String headerLine() {
         StringBuilder head = new StringBuilder();
@@ -106,7 +111,7 @@ public record Table<R>(List<Column<R>> columns) {
 
         /** The CSV text of {@code rows} in UTF-8; safe to call from several threads at once. */
         public byte[] encode(List<R> rows) {
-            return table.lines(rows).getBytes(StandardCharsets.UTF_8);
+            return table.encode(rows);
         }
 
         /** Appends text made by {@link #encode}; an I/O failure surfaces as {@link UncheckedIOException}. */
