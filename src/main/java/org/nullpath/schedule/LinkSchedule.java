@@ -1,11 +1,8 @@
 package org.nullpath.schedule;
 
-import java.util.ArrayDeque;
 import java.util.ArrayList;
-import java.util.Deque;
 import java.util.List;
 import java.util.Optional;
-import java.util.concurrent.Future;
 import java.util.function.Consumer;
 import java.util.function.Function;
 
@@ -116,32 +113,29 @@ public final class LinkSchedule {
                                     Consumer<T> write) {
         SendOrder order = new SendOrder(mission.plansOn(link));
         Part total = new Part(link);
-        Deque<Future<Done<T>>> ahead = new ArrayDeque<>();
-        long index = 0;
-        double lastClock = Double.NaN;
-        try {
-            while (order.hasNext() || !ahead.isEmpty()) {
-                while (order.hasNext() && ahead.size() < workers.ahead()) {
-                    double[] clocks = new double[CHUNK];
-                    int n = 0;
-                    while (n < CHUNK && order.hasNext()) {
-                        clocks[n++] = order.next();
-                    }
-                    long first = index + 1;
-                    double before = lastClock;
-                    int count = n;
-                    ahead.add(workers.submit(() -> chunk(link, first, clocks, count, before, encode)));
-                    index += n;
-                    lastClock = clocks[n - 1];
-                }
-                Done<T> done = Workers.take(ahead.poll());
-                write.accept(done.encoded());
-                total.merge(done.part());
+        long[] index = {0};
+        double[] lastClock = {Double.NaN};
+        workers.inOrder(() -> {
+            if (!order.hasNext()) {
+                return null;
             }
-        } finally {
-            ahead.forEach(f -> f.cancel(true));
-        }
-        return new LinkTally(link, index, total.delivered, index - total.delivered, total.minD, total.maxD,
+            double[] clocks = new double[CHUNK];
+            int n = 0;
+            while (n < CHUNK && order.hasNext()) {
+                clocks[n++] = order.next();
+            }
+            long first = index[0] + 1;
+            double before = lastClock[0];
+            int count = n;
+            index[0] += n;
+            lastClock[0] = clocks[n - 1];
+            return () -> chunk(link, first, clocks, count, before, encode);
+        }, (Done<T> done) -> {
+            write.accept(done.encoded());
+            total.merge(done.part());
+        });
+        long messages = index[0];
+        return new LinkTally(link, messages, total.delivered, messages - total.delivered, total.minD, total.maxD,
                 total.minT, total.maxT, total.lastArrivalClock, total.budgets.map(BudgetTally::snapshot),
                 total.illConditioned);
     }

@@ -46,12 +46,12 @@ public final class Workers implements AutoCloseable {
     }
 
     /** How many chunks may be computed ahead of the one being written (1 when computing on the calling thread). */
-    int ahead() {
+    private int ahead() {
         return pool == null ? 1 : 2 * threads;
     }
 
     /** Starts {@code work}; with one thread it is done before this returns. */
-    <T> Future<T> submit(Callable<T> work) {
+    private <T> Future<T> submit(Callable<T> work) {
         if (pool != null) {
             return pool.submit(work);
         }
@@ -63,18 +63,34 @@ public final class Workers implements AutoCloseable {
     }
 
     /**
-     * Computes {@code work(1) .. work(n)} on these threads, up to {@link #ahead()} items ahead of the one handed
-     * on, and gives each result to {@code sink} on the calling thread in order: the same sequence for any number
-     * of threads. A failure of an item is thrown when its turn comes (later items are cancelled).
+     * Computes {@code work(1) .. work(n)} on these threads and gives each result to {@code sink} on the calling
+     * thread in order (see {@link #inOrder(java.util.function.Supplier, java.util.function.Consumer)}).
      */
     public <T> void inOrder(long n, java.util.function.LongFunction<T> work, java.util.function.Consumer<T> sink) {
+        long[] next = {1};
+        inOrder(() -> {
+            if (next[0] > n) {
+                return null;
+            }
+            long item = next[0]++;
+            return () -> work.apply(item);
+        }, sink);
+    }
+
+    /**
+     * Runs the pieces of work that {@code next} hands out (on the calling thread, in order; null when there are no
+     * more) on these threads, up to {@link #ahead()} pieces ahead of the one handed on, and gives each result to
+     * {@code sink} on the calling thread in the order handed out: the same sequence for any number of threads. A
+     * failure of a piece is thrown when its turn comes (the pieces after it are cancelled).
+     */
+    <T> void inOrder(java.util.function.Supplier<Callable<T>> next, java.util.function.Consumer<T> sink) {
         java.util.ArrayDeque<Future<T>> pending = new java.util.ArrayDeque<>();
-        long next = 1;
         try {
-            while (next <= n || !pending.isEmpty()) {
-                while (next <= n && pending.size() < ahead()) {
-                    long item = next++;
-                    pending.add(submit(() -> work.apply(item)));
+            Callable<T> piece = next.get();
+            while (piece != null || !pending.isEmpty()) {
+                while (piece != null && pending.size() < ahead()) {
+                    pending.add(submit(piece));
+                    piece = next.get();
                 }
                 sink.accept(take(pending.poll()));
             }
