@@ -103,10 +103,6 @@ final class SweepCommand implements Callable<Integer> {
         for (int i = 0; i < names.size(); i++) {
             columns.add(new double[(int) points]);
         }
-        List<double[]> keyValues = new ArrayList<>();
-        for (int i = 0; i < keys.size(); i++) {
-            keyValues.add(new double[(int) points]);
-        }
         long[] invalid = {0};
         Table<SweepRow> table = SweepOutput.table(keys, names);
         Progress progress = Progress.start(err, quiet, points);
@@ -124,12 +120,7 @@ final class SweepCommand implements Callable<Integer> {
                     if (!row.valid()) {
                         invalid[0]++;
                     }
-                    for (int i = 0; i < names.size(); i++) {
-                        columns.get(i)[(int) (row.point() - 1)] = row.figure(i);
-                    }
-                    for (int i = 0; i < keys.size(); i++) {
-                        keyValues.get(i)[(int) (row.point() - 1)] = row.values().get(i).number();
-                    }
+                    keep(columns, row.point(), row::figure);
                     progress.step();
                 });
             } else {
@@ -145,13 +136,8 @@ final class SweepCommand implements Callable<Integer> {
                     csv.append(block.csv());
                     invalid[0] += block.invalid();
                     for (int j = 0; j < block.count(); j++) {
-                        for (int i = 0; i < names.size(); i++) {
-                            columns.get(i)[(int) (block.first() - 1 + j)] = block.figures()[j * names.size() + i];
-                        }
-                        List<Sweep.Value> values = List.copyOf(sweep.point(block.first() + j).values());
-                        for (int i = 0; i < keys.size(); i++) {
-                            keyValues.get(i)[(int) (block.first() - 1 + j)] = values.get(i).number();
-                        }
+                        int at = j * names.size();
+                        keep(columns, block.first() + j, i -> block.figures()[at + i]);
                         progress.step();
                     }
                 });
@@ -160,9 +146,10 @@ final class SweepCommand implements Callable<Integer> {
                 }
             }
             csv.close();
-            SweepOutput.summary(folder.file(SweepOutput.SUMMARY), sweep, names, points, invalid[0], columns);
+            List<SweepOutput.Spread> spreads = columns.stream().map(SweepOutput.Spread::of).toList();
+            SweepOutput.summary(folder.file(SweepOutput.SUMMARY), sweep, names, points, invalid[0], spreads);
             SweepPage.write(folder.file(SweepOutput.PAGE), new SweepPage.Data(sweep, base.title(),
-                    sweepFile.getFileName().toString(), names, keyValues, columns, invalid[0]));
+                    sweepFile.getFileName().toString(), names, columns, spreads, invalid[0]));
             commit = folder.commit();
         } catch (IOException | UncheckedIOException e) {
             return WriteFailure.report(err, out, e, false);
@@ -180,5 +167,12 @@ final class SweepCommand implements Callable<Integer> {
                 sweepFile, points, points - invalid[0], invalid[0], out,
                 commit.replaced().isEmpty() ? "" : " (replacing " + commit.replaced().size() + " files already there)");
         return 0;
+    }
+
+    /** Keeps point {@code p}'s figures (figure i given by {@code figure}) in the columns the summary reads. */
+    private static void keep(List<double[]> columns, long p, java.util.function.IntToDoubleFunction figure) {
+        for (int i = 0; i < columns.size(); i++) {
+            columns.get(i)[(int) (p - 1)] = figure.applyAsDouble(i);
+        }
     }
 }

@@ -93,13 +93,10 @@ public record Sweep(String scenario, List<Axis> grid, int draws, long seed, List
         if (p < 1 || p > points()) {
             throw new IllegalArgumentException("no point " + p);
         }
-        long perGrid = Math.max(1, draws);
-        long g = (p - 1) / perGrid;
+        int[] index = gridIndex(p);
         Map<String, Value> values = new LinkedHashMap<>();
-        long stride = gridPoints();
-        for (Axis ax : grid) {
-            stride /= ax.values().size();
-            values.put(ax.key(), ax.values().get((int) (g / stride % ax.values().size())));
+        for (int k = 0; k < grid.size(); k++) {
+            values.put(grid.get(k).key(), grid.get(k).values().get(index[k]));
         }
         if (!random.isEmpty()) {
             Draws r = new Draws(seed, p);
@@ -112,6 +109,19 @@ public record Sweep(String scenario, List<Axis> grid, int draws, long seed, List
             }
         }
         return values;
+    }
+
+    /** Which value of each grid key point {@code p} (1-based) takes, in grid order: the first key varies slowest. */
+    public int[] gridIndex(long p) {
+        long g = (p - 1) / Math.max(1, draws);
+        int[] index = new int[grid.size()];
+        long stride = gridPoints();
+        for (int k = 0; k < grid.size(); k++) {
+            int n = grid.get(k).values().size();
+            stride /= n;
+            index[k] = (int) (g / stride % n);
+        }
+        return index;
     }
 
     /** The value {@code x} in {@code unit}, written for the scenario in digits that read back to {@code x}. */

@@ -54,7 +54,7 @@ public final class SweepOutput {
      * default of R's quantile and of numpy.percentile).
      */
     public record Spread(long points, double min, double max, double mean, double p5, double p50, double p95) {
-        static Spread of(double[] values) {
+        public static Spread of(double[] values) {
             double[] v = Arrays.stream(values).filter(x -> !Double.isNaN(x)).sorted().toArray();
             if (v.length == 0) {
                 return new Spread(0, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN, Double.NaN);
@@ -81,9 +81,12 @@ public final class SweepOutput {
         }
     }
 
-    /** Writes sweep-summary.json: the study, the count of valid and invalid points and each figure's spread. */
+    /**
+     * Writes sweep-summary.json: the study, the count of valid and invalid points and each figure's spread
+     * ({@code spreads}, in the order of {@code names}).
+     */
     public static void summary(Path file, Sweep sweep, List<String> names, long points, long invalid,
-                               List<double[]> columns) throws IOException {
+                               List<Spread> spreads) throws IOException {
         Map<String, Object> root = new LinkedHashMap<>();
         root.put("scenario", sweep.scenario());
         root.put("points", points);
@@ -94,7 +97,7 @@ public final class SweepOutput {
                 + " with a value");
         Map<String, Object> figures = new LinkedHashMap<>();
         for (int i = 0; i < names.size(); i++) {
-            Spread s = Spread.of(columns.get(i));
+            Spread s = spreads.get(i);
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("points", s.points());
             m.put("min", json(s.min()));

@@ -23,11 +23,11 @@ public final class SweepPage {
     }
 
     /**
-     * The study's values: {@code keys.get(k)[p]} is key k's number at point p + 1 (NaN for a word),
-     * {@code figures.get(f)[p]} figure f there (NaN for none or an invalid point).
+     * The study's values: {@code figures.get(f)[p]} is figure f at point p + 1 (NaN for none or an invalid
+     * point), {@code spreads.get(f)} its spread.
      */
-    public record Data(Sweep sweep, String title, String sweepFile, List<String> names, List<double[]> keys,
-                       List<double[]> figures, long invalid) {
+    public record Data(Sweep sweep, String title, String sweepFile, List<String> names, List<double[]> figures,
+                       List<SweepOutput.Spread> spreads, long invalid) {
     }
 
     public static void write(Path file, Data d) throws IOException {
@@ -73,7 +73,7 @@ public final class SweepPage {
     private static List<Integer> charted(Data d) {
         List<Integer> out = new ArrayList<>();
         for (int f = 0; f < d.names().size() && out.size() < CHARTED; f++) {
-            SweepOutput.Spread s = SweepOutput.Spread.of(d.figures().get(f));
+            SweepOutput.Spread s = d.spreads().get(f);
             if (s.points() > 1 && s.max() > s.min()) {
                 out.add(f);
             }
@@ -87,7 +87,7 @@ public final class SweepPage {
                 .append("<th>points</th><th>min</th><th>5th</th><th>median</th><th>95th</th><th>max</th><th>mean</th>")
                 .append("</tr></thead>\n<tbody>\n");
         for (int f = 0; f < d.names().size(); f++) {
-            SweepOutput.Spread s = SweepOutput.Spread.of(d.figures().get(f));
+            SweepOutput.Spread s = d.spreads().get(f);
             h.append("<tr><td><code>").append(Html.escape(d.names().get(f))).append("</code></td><td>").append(s.points());
             for (double v : new double[] {s.min(), s.p5(), s.p50(), s.p95(), s.max(), s.mean()}) {
                 h.append("</td><td>").append(SweepCharts.shown(v));
@@ -147,18 +147,11 @@ public final class SweepPage {
         double[][] sum = new double[na][nb];
         long[][] n = new long[na][nb];
         double[] fig = d.figures().get(f);
-        long perGrid = Math.max(1, d.sweep().draws());
         for (int p = 0; p < fig.length; p++) {
             if (Double.isNaN(fig[p])) {
                 continue;
             }
-            long g = p / perGrid;
-            int[] idx = new int[grid.size()];
-            long stride = d.sweep().gridPoints();
-            for (int k = 0; k < grid.size(); k++) {
-                stride /= grid.get(k).values().size();
-                idx[k] = (int) (g / stride % grid.get(k).values().size());
-            }
+            int[] idx = d.sweep().gridIndex(p + 1);
             int i = idx[a];
             int j = b < 0 ? 0 : idx[b];
             sum[i][j] += fig[p];
