@@ -10,6 +10,7 @@ import org.nullpath.scenario.ScenarioDocument;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.schedule.RangeException;
 import org.nullpath.schedule.Workers;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -29,9 +30,8 @@ final class ScenarioInput {
     @Option(names = "--max-messages", paramLabel = "N", description = "cap on messages per plan (default: ${DEFAULT-VALUE})")
     long maxMessages = DEFAULT_MAX_MESSAGES;
 
-    @Option(names = "--threads", paramLabel = "N", description = "threads that compute messages (default: the"
-            + " machine's processors, ${DEFAULT-VALUE} here); the results are the same for any number")
-    int threads = Runtime.getRuntime().availableProcessors();
+    @Mixin
+    ThreadCount threads;
 
     @Option(names = "--tables-anywhere", description = "let profile tables lie outside the scenario's folder and"
             + " the folders below it (by default they must lie inside, symbolic links resolved)")
@@ -53,8 +53,7 @@ final class ScenarioInput {
     /** Loads and validates; on problems prints them on standard error, one per line, and returns empty. */
     Optional<Mission> load() {
         PrintWriter err = err();
-        if (threads < 1) {
-            err.println("nullpath: --threads must be at least 1 (got " + threads + ")");
+        if (!threads.valid(err)) {
             return Optional.empty();
         }
         if (maxMessages < 1) {
@@ -91,6 +90,6 @@ final class ScenarioInput {
 
     /** The threads to compute on, as asked for; close them when done. */
     Workers workers() {
-        return Workers.of(threads);
+        return threads.workers();
     }
 }

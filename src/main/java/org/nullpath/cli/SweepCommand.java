@@ -22,6 +22,7 @@ import org.nullpath.schedule.StudyFigures;
 import org.nullpath.schedule.SweepRow;
 import org.nullpath.schedule.Workers;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
@@ -39,9 +40,8 @@ final class SweepCommand implements Callable<Integer> {
     @Option(names = {"-o", "--out"}, required = true, paramLabel = "DIR", description = "folder to write into")
     Path out;
 
-    @Option(names = "--threads", paramLabel = "N", description = "points computed at once (default: the machine's"
-            + " processors, ${DEFAULT-VALUE} here); the files are the same for any number")
-    int threads = Runtime.getRuntime().availableProcessors();
+    @Mixin
+    ThreadCount threads;
 
     @Option(names = "--quiet", description = "no progress on standard error")
     boolean quiet;
@@ -59,8 +59,7 @@ final class SweepCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         PrintWriter err = spec.commandLine().getErr();
-        if (threads < 1) {
-            err.println("nullpath: --threads must be at least 1 (got " + threads + ")");
+        if (!threads.valid(err)) {
             return Main.INPUT_ERROR;
         }
         try {
@@ -112,7 +111,7 @@ final class SweepCommand implements Callable<Integer> {
         OutputFolder.Commit commit;
         try (OutputFolder folder = OutputFolder.begin(out, inputs, () -> err.println("nullpath: another run is"
                 + " writing into " + out + "; waiting until it is done"));
-             Workers workers = Workers.of(threads);
+             Workers workers = threads.workers();
              Table.Writer<SweepRow> csv = table.open(folder.file(SweepOutput.CSV))) {
             if (engine == null) {
                 workers.inOrder(points, p -> SweepPoints.compute(loaded.scenario(), sweep, p, names.size()), row -> {
