@@ -186,22 +186,21 @@ public final class SweepReader {
         return doc.scalarAt(key).flatMap(SweepReader::quantity).map(Read::dimension);
     }
 
-    /** A number of the key's dimension, at {@code path}; null on a problem (added). */
-    private static Read numberAt(Fields f, String field, Optional<Dimension> expected, String key) {
-        Node n = f.get(field);
+    /** A number of the key's dimension {@code expected} (any, when empty), at {@code at}; null on a problem (added). */
+    private static Read numberAt(Node n, String at, Problems problems, Optional<Dimension> expected, String key) {
         String text = textOf(n);
         Optional<Read> r = text == null ? Optional.empty() : quantity(text);
         if (r.isEmpty()) {
-            f.problemAt(field, "expected a number with its unit, got " + Values.describe(n));
+            problems.at(n, at, "expected a number with its unit, got " + Values.describe(n));
             return null;
         }
         if (expected.isPresent() && r.get().dimension() != expected.get()) {
-            f.problemAt(field, "'" + key + "' is " + expected.get().description() + " in the scenario, got "
+            problems.at(n, at, "'" + key + "' is " + expected.get().description() + " in the scenario, got "
                     + r.get().dimension().description() + " ('" + text.trim() + "')");
             return null;
         }
         if (!Double.isFinite(r.get().number())) {
-            f.problemAt(field, "expected a finite number, got '" + text.trim() + "'");
+            problems.at(n, at, "expected a finite number, got '" + text.trim() + "'");
             return null;
         }
         return r.get();
@@ -242,17 +241,16 @@ public final class SweepReader {
                     values.problems().at(e, at, "expected a value, got " + Values.describe(e));
                     return null;
                 }
-                Optional<Read> r = quantity(text);
                 if (expected.isEmpty()) {
                     // the scenario gives a word there (such as forever): values are written as they are
-                    out.add(new Sweep.Value(text, r.map(Read::number).orElse(Double.NaN)));
-                } else if (r.isEmpty() || r.get().dimension() != expected.get()) {
-                    values.problems().at(e, at, "'" + key + "' is " + expected.get().description()
-                            + " in the scenario, got '" + text.trim() + "'");
-                    return null;
-                } else {
-                    out.add(Sweep.number(r.get().number(), unit(expected.get())));
+                    out.add(new Sweep.Value(text, quantity(text).map(Read::number).orElse(Double.NaN)));
+                    continue;
                 }
+                Read r = numberAt(e, at, values.problems(), expected, key);
+                if (r == null) {
+                    return null;
+                }
+                out.add(Sweep.number(r.number(), unit(expected.get())));
             }
             return new Sweep.Axis(key, out);
         }
@@ -263,8 +261,8 @@ public final class SweepReader {
             f.problemAt("from", "'" + key + "' is not a number in the scenario; vary it with values: [...]");
             return null;
         }
-        Read from = numberAt(f, "from", expected, key);
-        Read to = numberAt(f, "to", expected, key);
+        Read from = numberAt(f.get("from"), f.path("from"), values.problems(), expected, key);
+        Read to = numberAt(f.get("to"), f.path("to"), values.problems(), expected, key);
         double steps = f.number("steps");
         if (from == null || to == null || Double.isNaN(steps)) {
             return null;
@@ -311,16 +309,11 @@ public final class SweepReader {
         }
         double[] ab = new double[2];
         for (int i = 0; i < 2; i++) {
-            Node e = l.items().get(i);
-            String text = textOf(e);
-            Optional<Read> r = text == null ? Optional.empty() : quantity(text);
-            String at = KeyPaths.item(f.path(law), i);
-            if (r.isEmpty() || r.get().dimension() != expected.get() || !Double.isFinite(r.get().number())) {
-                values.problems().at(e, at, "'" + key + "' is " + expected.get().description() + " in the scenario, got "
-                        + Values.describe(e));
+            Read r = numberAt(l.items().get(i), KeyPaths.item(f.path(law), i), values.problems(), expected, key);
+            if (r == null) {
                 return null;
             }
-            ab[i] = r.get().number();
+            ab[i] = r.number();
         }
         if (law.equals("normal") && !(ab[1] >= 0)) {
             f.problemAt(law, "the standard deviation must not be negative");

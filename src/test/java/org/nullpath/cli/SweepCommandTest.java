@@ -210,6 +210,10 @@ class SweepCommandTest {
                         2, 1, "random", "random keys need a number of draws"),
                 Arguments.of("scenario: base.yaml\nvary:\n  - {key: links.down, values: [1 W]}\n", 3, 11, "vary[0].key",
                         "is a mapping or a list in the scenario"),
+                Arguments.of("scenario: base.yaml\nvary:\n  - {key: links.down.transmitter.power, values: [1 W, 2 K]}\n",
+                        3, 55, "vary[0].values[1]", "is a power in the scenario, got a temperature ('2 K')"),
+                Arguments.of("scenario: base.yaml\ndraws: 2\nrandom:\n  - {key: links.down.transmitter.power, uniform: [1 W, 2 s]}\n",
+                        4, 56, "random[0].uniform[1]", "is a power in the scenario, got a time ('2 s')"),
                 Arguments.of("scenario: missing.yaml\nvary:\n  - {key: a, values: [1 W]}\n", 0, 0, "", "missing.yaml"));
     }
 
