@@ -126,7 +126,7 @@ final class SweepCommand implements Callable<Integer> {
                 SweepEngine.Study study = new SweepEngine.Study(spark, loaded.scenario().source().text(),
                         loaded.scenario().source().file().toString(), sweep, names);
                 long[] next = {1};
-                engine.run(study, block -> {
+                engine.run(study, quiet, block -> {
                     if (block.first() != next[0]) {
                         throw new IllegalStateException("the engine gave points from " + block.first() + ", expected "
                                 + next[0]);

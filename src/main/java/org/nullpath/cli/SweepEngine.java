@@ -20,8 +20,11 @@ import org.nullpath.schedule.SweepRow;
  * path), and its rows are encoded by the same table as the in-process run, so the files are the same bytes.
  */
 public interface SweepEngine {
-    /** Runs {@code study}, handing {@code sink} every block in point order, on the calling thread. */
-    void run(Study study, Consumer<Block> sink) throws Exception;
+    /**
+     * Runs {@code study}, handing {@code sink} every block in point order, on the calling thread. With
+     * {@code quiet} the engine's own log says only what went wrong.
+     */
+    void run(Study study, boolean quiet, Consumer<Block> sink) throws Exception;
 
     /**
      * What a computer of points needs, all of it carried with the job.

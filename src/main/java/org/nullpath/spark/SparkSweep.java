@@ -30,7 +30,8 @@ public final class SparkSweep implements SweepEngine {
     }
 
     @Override
-    public void run(Study study, Consumer<Block> sink) throws Exception {
+    public void run(Study study, boolean quiet, Consumer<Block> sink) throws Exception {
+        quietLog(quiet);
         SparkSession active = SparkSession.getActiveSession().getOrElse(() -> null);
         SparkSession session = active != null ? active : open(study);
         try {
@@ -55,6 +56,24 @@ public final class SparkSweep implements SweepEngine {
                 session.stop();
             }
         }
+    }
+
+    /** The log configuration used when nullpath starts the job itself: warnings (errors only when quiet). */
+    static final String LOG_CONFIGURATION = "org/nullpath/spark/sweep-log4j2.properties";
+
+    /**
+     * Started by nullpath rather than by spark-submit and with no log configuration of the user's own, Spark
+     * logs through {@link #LOG_CONFIGURATION}: warnings and errors on standard error (errors only with
+     * {@code quiet}), not Spark's default stream of INFO lines. Takes effect only before Spark's logging
+     * starts, which is here: nothing of Spark has run yet in a process started for one sweep.
+     */
+    private static void quietLog(boolean quiet) {
+        if (System.getProperty("spark.master") != null || System.getProperty("log4j2.configurationFile") != null
+                || System.getProperty("log4j.configurationFile") != null) {
+            return;
+        }
+        System.setProperty("nullpath.spark.log", quiet ? "error" : "warn");
+        System.setProperty("log4j2.configurationFile", LOG_CONFIGURATION);
     }
 
     private static SparkSession open(Study study) {
