@@ -1,6 +1,6 @@
 package org.nullpath.report;
 
-import com.fasterxml.jackson.core.io.schubfach.DoubleToDecimal;
+import java.nio.charset.StandardCharsets;
 
 /** How numbers appear in output files: full precision (parses back to the same double), empty when absent. */
 public final class Cells {
@@ -9,7 +9,7 @@ public final class Cells {
 
     /**
      * The shortest decimal text that parses back to {@code v} exactly (Raffaello Giulietti's Schubfach
-     * algorithm, as jackson-core ships it; the same text as Double.toString from Java 19 on, which Java 17's
+     * algorithm, {@link ShortestDecimal}; the same text as Double.toString from Java 19 on, which Java 17's
      * sometimes lengthens by a digit); whole numbers below 1e15 without a fraction; empty for NaN (a value that
      * does not exist). An infinite value is a bug upstream and is refused rather than written.
      */
@@ -20,10 +20,16 @@ public final class Cells {
         if (Double.isInfinite(v)) {
             throw new IllegalStateException("an infinite value reached an output file");
         }
-        if (v == Math.rint(v) && Math.abs(v) < 1e15 && !(v == 0 && 1 / v < 0)) {
+        if (whole(v)) {
             return Long.toString((long) v);
         }
-        return DoubleToDecimal.toString(v);
+        byte[] b = new byte[ShortestDecimal.MAX_BYTES];
+        return new String(b, 0, ShortestDecimal.write(v, b, 0), StandardCharsets.ISO_8859_1);
+    }
+
+    /** Whether {@code v} is written as an integer: a whole number below 1e15 in magnitude, not -0. */
+    static boolean whole(double v) {
+        return v == Math.rint(v) && Math.abs(v) < 1e15 && !(v == 0 && 1 / v < 0);
     }
 
     /**

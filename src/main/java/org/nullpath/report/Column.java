@@ -17,29 +17,44 @@ import java.util.function.ToLongFunction;
  * @param unit    the unit of its values ("" for counts, flags, words and ratios without a unit)
  * @param meaning one line for the docs
  * @param value   the row's value: a Double, Long, Boolean or String; null where the row has none
+ * @param bytes   how the CSV cell is written into a row's bytes: the same text as {@link #cell}, without
+ *                boxing for numbers
  * @param <R>     the row type
  */
-public record Column<R>(String name, String unit, String meaning, Function<R, Object> value) {
+public record Column<R>(String name, String unit, String meaning, Function<R, Object> value, Bytes<R> bytes) {
     public Column {
         Objects.requireNonNull(name, "name");
         Objects.requireNonNull(unit, "unit");
         Objects.requireNonNull(meaning, "meaning");
         Objects.requireNonNull(value, "value");
+        Objects.requireNonNull(bytes, "bytes");
+    }
+
+    /** A column of any of the value kinds, its cell written from the value. */
+    public Column(String name, String unit, String meaning, Function<R, Object> value) {
+        this(name, unit, meaning, value, (out, r) -> any(out, value.apply(r), name));
+    }
+
+    /** Writes one row's cell into a row's bytes (nothing for no value). */
+    @FunctionalInterface
+    interface Bytes<R> {
+        void write(RowBytes out, R row);
     }
 
     /** A number at full precision (it parses back to the same double); NaN where it does not exist. */
     public static <R> Column<R> number(String name, String unit, String meaning, ToDoubleFunction<R> value) {
-        return new Column<>(name, unit, meaning, r -> value.applyAsDouble(r));
+        return new Column<>(name, unit, meaning, r -> value.applyAsDouble(r),
+                (out, r) -> out.number(value.applyAsDouble(r), name));
     }
 
     /** A whole number. */
     public static <R> Column<R> count(String name, String meaning, ToLongFunction<R> value) {
-        return new Column<>(name, "", meaning, r -> value.applyAsLong(r));
+        return new Column<>(name, "", meaning, r -> value.applyAsLong(r), (out, r) -> out.count(value.applyAsLong(r)));
     }
 
     /** {@code true} or {@code false}. */
     public static <R> Column<R> flag(String name, String meaning, Predicate<R> value) {
-        return new Column<>(name, "", meaning, r -> value.test(r));
+        return new Column<>(name, "", meaning, r -> value.test(r), (out, r) -> out.flag(value.test(r)));
     }
 
     /** Text as it is. */
@@ -52,6 +67,11 @@ public record Column<R>(String name, String unit, String meaning, Function<R, Ob
         return new Column<>(name, unit, meaning, p -> {
             Optional<R> r = part.apply(p);
             return r.isPresent() ? value.apply(r.get()) : null;
+        }, (out, p) -> {
+            Optional<R> r = part.apply(p);
+            if (r.isPresent()) {
+                bytes.write(out, r.get());
+            }
         });
     }
 
@@ -62,20 +82,6 @@ public record Column<R>(String name, String unit, String meaning, Function<R, Ob
      */
     public String cell(R row) {
         return cellOf(value.apply(row));
-    }
-
-    /**
-     * Appends this column's cell of {@code row} to a CSV row's text, after a comma unless it is the first:
-     * the same text as {@link #cell}, quoted by the RFC 4180 rule ({@link CsvText}); a number, which never
-     * needs quotes, without the scan.
-     */
-    void appendCell(StringBuilder line, R row, boolean first) {
-        Object v = value.apply(row);
-        if (v instanceof Double d && !Double.isNaN(d) || v instanceof Long) {
-            CsvText.appendPlain(line, cellOf(v), first);
-        } else {
-            CsvText.append(line, cellOf(v), first);
-        }
     }
 
     private String cellOf(Object v) {
@@ -92,6 +98,21 @@ public record Column<R>(String name, String unit, String meaning, Function<R, Ob
             return Cells.text(s);
         }
         return v == null ? "" : v.toString();
+    }
+
+    /** A value of any kind into a row's bytes, as {@link #cellOf} writes it and quoted by the RFC 4180 rule. */
+    private static void any(RowBytes out, Object v, String name) {
+        if (v instanceof Double d) {
+            out.number(d, name);
+        } else if (v instanceof Long l) {
+            out.count(l);
+        } else if (v instanceof Boolean b) {
+            out.flag(b);
+        } else if (v instanceof String s) {
+            out.text(Cells.text(s));
+        } else if (v != null) {
+            out.text(v.toString());
+        }
     }
 
     /** The JSON value: null where there is none (JSON has no NaN or infinity). */

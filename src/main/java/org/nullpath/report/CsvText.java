@@ -32,14 +32,6 @@ final class CsvText {
         row.append('"');
     }
 
-    /** Appends a cell known to need no quotes (a number's digits, sign, point and exponent), after a comma unless first. */
-    static void appendPlain(StringBuilder row, String cell, boolean first) {
-        if (!first) {
-            row.append(',');
-        }
-        row.append(cell);
-    }
-
     static boolean needsQuotes(String cell, boolean first) {
         int n = cell.length();
         if (n == 0) {

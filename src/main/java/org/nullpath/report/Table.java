@@ -60,12 +60,35 @@ public record Table<R>(List<Column<R>> columns) {
 
     /** The header line and every row of {@code rows} as the file holds them, in UTF-8. */
     public byte[] encodeWithHeader(List<R> rows) {
-        return (headerLine() + lines(rows)).getBytes(StandardCharsets.UTF_8);
+        byte[] head = headerLine().getBytes(StandardCharsets.UTF_8);
+        byte[] body = encode(rows);
+        byte[] all = java.util.Arrays.copyOf(head, head.length + body.length);
+        System.arraycopy(body, 0, all, head.length, body.length);
+        return all;
     }
 
-    /** Every row of {@code rows} as the file holds them after its header, in UTF-8; keeps no state. */
+    /**
+     * Every row of {@code rows} as the file holds them after its header, in UTF-8; keeps no state. Cells are
+     * separated by commas; a row whose first cell is empty starts with {@code ""} (the RFC 4180 rule of
+     * {@link CsvText}, so that a row of one empty cell is not an empty line).
+     */
     public byte[] encode(List<R> rows) {
-        return lines(rows).getBytes(StandardCharsets.UTF_8);
+        RowBytes b = new RowBytes(rows.size() * 16 * columns.size());
+        int k = columns.size();
+        for (R r : rows) {
+            int start = b.length();
+            columns.get(0).bytes().write(b, r);
+            if (b.length() == start) {
+                b.put('"');
+                b.put('"');
+            }
+            for (int i = 1; i < k; i++) {
+                b.put(',');
+                columns.get(i).bytes().write(b, r);
+            }
+            b.put('\n');
+        }
+        return b.toArray();
     }
 
     /** The header line, ending in LF. */
@@ -76,18 +99,6 @@ public record Table<R>(List<Column<R>> columns) {
             CsvText.append(head, names.get(i), i == 0);
         }
         return head.append('\n').toString();
-    }
-
-    /** The CSV text of {@code rows}, each line ending in LF (the header not included). */
-    String lines(List<R> rows) {
-        StringBuilder b = new StringBuilder(rows.size() * 24 * columns.size() + 16);
-        for (R r : rows) {
-            for (int i = 0; i < columns.size(); i++) {
-                columns.get(i).appendCell(b, r, i == 0);
-            }
-            b.append('\n');
-        }
-        return b.toString();
     }
 
     /**

@@ -1,0 +1,123 @@
+package org.nullpath.report;
+
+import java.nio.charset.StandardCharsets;
+import java.util.Arrays;
+
+/**
+ * CSV rows built straight as UTF-8 bytes: numbers by {@link ShortestDecimal} and integer digits with no
+ * String on the way, text by the quoting rule of {@link CsvText}. One buffer serves one chunk of rows on one
+ * thread; it grows as needed.
+ */
+final class RowBytes {
+    private static final byte[] TRUE = {'t', 'r', 'u', 'e'};
+    private static final byte[] FALSE = {'f', 'a', 'l', 's', 'e'};
+
+    private byte[] b;
+    private int n;
+
+    RowBytes(int capacity) {
+        b = new byte[Math.max(64, capacity)];
+    }
+
+    int length() {
+        return n;
+    }
+
+    byte[] toArray() {
+        return Arrays.copyOf(b, n);
+    }
+
+    private void room(int more) {
+        if (n + more > b.length) {
+            b = Arrays.copyOf(b, Math.max(b.length * 2, n + more));
+        }
+    }
+
+    void put(char ascii) {
+        room(1);
+        b[n++] = (byte) ascii;
+    }
+
+    /**
+     * A number as {@link Cells#num} writes it (whole numbers below 1e15 as integers, otherwise the shortest
+     * decimal); nothing for NaN; an infinite value is refused, naming {@code column}.
+     */
+    void number(double v, String column) {
+        if (Double.isNaN(v)) {
+            return;
+        }
+        if (Double.isInfinite(v)) {
+            throw new IllegalStateException("an infinite value reached column " + column);
+        }
+        if (Cells.whole(v)) {
+            count((long) v);
+            return;
+        }
+        room(ShortestDecimal.MAX_BYTES);
+        n = ShortestDecimal.write(v, b, n);
+    }
+
+    /** A whole number's digits. */
+    void count(long v) {
+        room(20);
+        if (v == Long.MIN_VALUE) {
+            byte[] s = Long.toString(v).getBytes(StandardCharsets.US_ASCII);
+            System.arraycopy(s, 0, b, n, s.length);
+            n += s.length;
+            return;
+        }
+        if (v < 0) {
+            b[n++] = '-';
+            v = -v;
+        }
+        int digits = 1;
+        for (long p = 10; digits < 19 && v >= p; p *= 10) {
+            digits++;
+        }
+        for (int i = n + digits - 1; i >= n; i--) {
+            b[i] = (byte) ('0' + v % 10);
+            v /= 10;
+        }
+        n += digits;
+    }
+
+    void flag(boolean v) {
+        byte[] s = v ? TRUE : FALSE;
+        room(s.length);
+        System.arraycopy(s, 0, b, n, s.length);
+        n += s.length;
+    }
+
+    /**
+     * A text cell, quoted when {@link CsvText#needsQuotes} says so; nothing for an empty one (an empty first
+     * cell is quoted by the table, which knows it is first).
+     */
+    void text(String cell) {
+        if (cell.isEmpty()) {
+            return;
+        }
+        StringBuilder quoted = new StringBuilder(cell.length() + 2);
+        CsvText.append(quoted, cell, true); // true: no comma before it (the table writes commas)
+        String s = quoted.toString();
+        if (ascii(s)) {
+            room(s.length());
+            for (int i = 0; i < s.length(); i++) {
+                b[n++] = (byte) s.charAt(i);
+            }
+            return;
+        }
+        byte[] u = s.getBytes(StandardCharsets.UTF_8);
+        room(u.length);
+        System.arraycopy(u, 0, b, n, u.length);
+        n += u.length;
+    }
+
+    private static boolean ascii(String s) {
+        for (int i = 0; i < s.length(); i++) {
+            if (s.charAt(i) >= 0x80) {
+                return false;
+            }
+        }
+        return true;
+    }
+}

@@ -1,0 +1,261 @@
+package org.nullpath.report;
+
+import java.math.BigInteger;
+
+/**
+ * The shortest decimal that parses back to a double, written as ASCII bytes straight into a caller's array:
+ * Raffaello Giulietti's Schubfach algorithm ("The Schubfach way to render doubles", 2020; the algorithm of
+ * {@code Double.toString} from Java 19 on), in the text layout of {@code Double.toString}: plain notation
+ * ({@code 123.45}, {@code 0.00123}) for magnitudes in [1e-3, 1e7), otherwise one digit, a point and an
+ * exponent ({@code 1.2345E7}, {@code 1.0E-5}); at least one digit after the point.
+ *
+ * <p>Numbers are the bulk of every output file, and this writes them without a String or any other object
+ * per number. {@code ShortestDecimalTest} holds it, byte for byte, to the same algorithm as jackson-core
+ * ships it, and every value to {@code Double.parseDouble}. The table of 126-bit powers of ten is computed
+ * once, exactly, with BigInteger: g(k) = floor(10^-k 2^-r) + 1 with 2^125 <= 10^-k 2^-r < 2^126.
+ */
+final class ShortestDecimal {
+    /** Most bytes one double takes: sign, 17 digits, point, 'E', exponent sign and three digits. */
+    static final int MAX_BYTES = 24;
+
+    private static final int P = 53; // the precision of a double, in bits
+    private static final int Q_MIN = -1074; // the least binary exponent of a subnormal
+    private static final long C_MIN = 1L << (P - 1);
+    private static final int BQ_MASK = (1 << 11) - 1;
+    private static final long T_MASK = (1L << (P - 1)) - 1;
+    private static final long C_TINY = 3; // below this, a subnormal's significand takes one more digit
+    private static final int K_MIN = -324;
+    private static final int K_MAX = 292;
+    private static final int H = 17; // digits of the decimal significand kept
+    private static final long MASK_63 = (1L << 63) - 1;
+    private static final int MASK_28 = (1 << 28) - 1;
+
+    private static final long[] POW10 = new long[H + 1];
+    /** g1(k) and g0(k) for k = K_MIN..K_MAX, at 2 (k - K_MIN) and 2 (k - K_MIN) + 1. */
+    private static final long[] G = new long[2 * (K_MAX - K_MIN + 1)];
+
+    static {
+        long p = 1;
+        for (int i = 0; i <= H; i++) {
+            POW10[i] = p;
+            p *= 10;
+        }
+        BigInteger mask63 = BigInteger.ONE.shiftLeft(63).subtract(BigInteger.ONE);
+        for (int k = K_MIN; k <= K_MAX; k++) {
+            BigInteger beta;
+            if (k <= 0) { // 10^-k is a whole number N: beta = N 2^-r with r = bitLength(N) - 126
+                BigInteger n = BigInteger.TEN.pow(-k);
+                int r = n.bitLength() - 126;
+                beta = r >= 0 ? n.shiftRight(r) : n.shiftLeft(-r);
+            } else { // 10^-k = 1 / D: beta = 2^s / D with s = bitLength(D) + 125 (D is not a power of two)
+                BigInteger d = BigInteger.TEN.pow(k);
+                beta = BigInteger.ONE.shiftLeft(d.bitLength() + 125).divide(d);
+            }
+            BigInteger g = beta.add(BigInteger.ONE);
+            G[2 * (k - K_MIN)] = g.shiftRight(63).longValueExact();
+            G[2 * (k - K_MIN) + 1] = g.and(mask63).longValueExact();
+        }
+    }
+
+    private ShortestDecimal() {
+    }
+
+    /**
+     * Writes {@code v} (finite) into {@code b} from {@code at} and returns the index after the last byte;
+     * {@code b} must have {@link #MAX_BYTES} free from {@code at}.
+     */
+    static int write(double v, byte[] b, int at) {
+        long bits = Double.doubleToRawLongBits(v);
+        long t = bits & T_MASK;
+        int bq = (int) (bits >>> (P - 1)) & BQ_MASK;
+        if (bq == BQ_MASK) {
+            throw new IllegalArgumentException("not a finite number: " + v);
+        }
+        int i = at;
+        if (bits < 0) {
+            b[i++] = '-';
+        }
+        if (bq != 0) { // normal
+            int mq = -Q_MIN + 1 - bq;
+            long c = C_MIN | t;
+            if (0 < mq && mq < P) { // a whole number: its digits as they are
+                long f = c >> mq;
+                if (f << mq == c) {
+                    return chars(f, 0, b, i);
+                }
+            }
+            return decimal(-mq, c, 0, b, i);
+        }
+        if (t != 0) { // subnormal
+            return t < C_TINY ? decimal(Q_MIN, 10 * t, -1, b, i) : decimal(Q_MIN, t, 0, b, i);
+        }
+        // zero: "0.0" or "-0.0"
+        b[i++] = '0';
+        b[i++] = '.';
+        b[i++] = '0';
+        return i;
+    }
+
+    /** The shortest decimal of c 2^q, times 10^-dk. */
+    private static int decimal(int q, long c, int dk, byte[] b, int at) {
+        int out = (int) c & 0x1;
+        long cb = c << 2;
+        long cbr = cb + 2;
+        long cbl;
+        int k;
+        if (c != C_MIN || q == Q_MIN) {
+            cbl = cb - 2;
+            k = flog10pow2(q);
+        } else { // the rounding interval is asymmetric at a power of two
+            cbl = cb - 1;
+            k = flog10threeQuartersPow2(q);
+        }
+        int h = q + flog2pow10(-k) + 2;
+        long g1 = G[2 * (k - K_MIN)];
+        long g0 = G[2 * (k - K_MIN) + 1];
+        long vb = rop(g1, g0, cb << h);
+        long vbl = rop(g1, g0, cbl << h);
+        long vbr = rop(g1, g0, cbr << h);
+        long s = vb >> 2;
+        if (s >= 100) {
+            long sp10 = 10 * Math.multiplyHigh(s, 115_292_150_460_684_698L << 4); // 10 floor(s / 10)
+            long tp10 = sp10 + 10;
+            boolean upin = vbl + out <= sp10 << 2;
+            boolean wpin = (tp10 << 2) + out <= vbr;
+            if (upin != wpin) {
+                return chars(upin ? sp10 : tp10, k, b, at);
+            }
+        }
+        long tt = s + 1;
+        boolean uin = vbl + out <= s << 2;
+        boolean win = (tt << 2) + out <= vbr;
+        if (uin != win) {
+            return chars(uin ? s : tt, k + dk, b, at);
+        }
+        long cmp = vb - (s + tt << 1);
+        return chars(cmp < 0 || cmp == 0 && (s & 0x1) == 0 ? s : tt, k + dk, b, at);
+    }
+
+    /** Round to odd of g cp 2^-127 (g = g1 2^63 + g0). */
+    private static long rop(long g1, long g0, long cp) {
+        long x1 = Math.multiplyHigh(g0, cp);
+        long y0 = g1 * cp;
+        long y1 = Math.multiplyHigh(g1, cp);
+        long z = (y0 >>> 1) + x1;
+        long vbp = y1 + (z >>> 63);
+        return vbp | (z & MASK_63) + MASK_63 >>> 63;
+    }
+
+    /** The digits of f 10^e in Double.toString's layout. */
+    private static int chars(long f, int e, byte[] b, int at) {
+        int len = flog10pow2(Long.SIZE - Long.numberOfLeadingZeros(f));
+        if (f >= POW10[len]) {
+            len += 1;
+        }
+        f *= POW10[H - len]; // 17 digits
+        e += len;
+        long hm = Math.multiplyHigh(f, 193_428_131_138_340_668L) >>> 20; // f / 10^8
+        int l = (int) (f - 100_000_000L * hm);
+        int h = (int) (hm * 1_441_151_881L >>> 57); // hm / 10^8
+        int m = (int) (hm - 100_000_000 * h);
+        int i = at;
+        if (0 < e && e <= 7) { // plain: ddd.ddd
+            b[i++] = (byte) ('0' + h);
+            int y = y(m);
+            int j = 1;
+            for (; j < e; ++j) {
+                int t = 10 * y;
+                b[i++] = (byte) ('0' + (t >>> 28));
+                y = t & MASK_28;
+            }
+            b[i++] = '.';
+            for (; j <= 8; ++j) {
+                int t = 10 * y;
+                b[i++] = (byte) ('0' + (t >>> 28));
+                y = t & MASK_28;
+            }
+            return lowDigits(l, b, i);
+        }
+        if (-3 < e && e <= 0) { // plain: 0.00ddd
+            b[i++] = '0';
+            b[i++] = '.';
+            for (; e < 0; ++e) {
+                b[i++] = '0';
+            }
+            b[i++] = (byte) ('0' + h);
+            i = eightDigits(m, b, i);
+            return lowDigits(l, b, i);
+        }
+        b[i++] = (byte) ('0' + h); // d.dddEx
+        b[i++] = '.';
+        i = eightDigits(m, b, i);
+        i = lowDigits(l, b, i);
+        return exponent(e - 1, b, i);
+    }
+
+    private static int lowDigits(int l, byte[] b, int i) {
+        if (l != 0) {
+            i = eightDigits(l, b, i);
+        }
+        // no trailing zeroes, but one digit after the point
+        while (b[i - 1] == '0') {
+            i--;
+        }
+        if (b[i - 1] == '.') {
+            i++;
+        }
+        return i;
+    }
+
+    private static int eightDigits(int m, byte[] b, int i) {
+        int y = y(m);
+        for (int j = 0; j < 8; ++j) {
+            int t = 10 * y;
+            b[i++] = (byte) ('0' + (t >>> 28));
+            y = t & MASK_28;
+        }
+        return i;
+    }
+
+    /** m 10^-8 2^28, rounded up, for digit extraction by multiplication (0 <= m < 10^8). */
+    private static int y(int m) {
+        return (int) (Math.multiplyHigh((long) (m + 1) << 28, 193_428_131_138_340_668L) >>> 20) - 1;
+    }
+
+    private static int exponent(int e, byte[] b, int i) {
+        b[i++] = 'E';
+        if (e < 0) {
+            b[i++] = '-';
+            e = -e;
+        }
+        if (e < 10) {
+            b[i++] = (byte) ('0' + e);
+            return i;
+        }
+        int d;
+        if (e >= 100) {
+            d = e * 1_311 >>> 17; // e / 100
+            b[i++] = (byte) ('0' + d);
+            e -= 100 * d;
+        }
+        d = e * 103 >>> 10; // e / 10
+        b[i++] = (byte) ('0' + d);
+        b[i++] = (byte) ('0' + e - 10 * d);
+        return i;
+    }
+
+    /** floor(e log10 2), for |e| <= 5456721. */
+    private static int flog10pow2(int e) {
+        return (int) (e * 661_971_961_083L >> 41);
+    }
+
+    /** floor(e log10 (3/4 2)), for |e| <= 5456721. */
+    private static int flog10threeQuartersPow2(int e) {
+        return (int) (e * 661_971_961_083L + -274_743_187_321L >> 41);
+    }
+
+    /** floor(e log2 10), for |e| <= 1838394. */
+    private static int flog2pow10(int e) {
+        return (int) (e * 913_124_641_741L >> 38);
+    }
+}
