@@ -112,7 +112,7 @@ final class SweepCommand implements Callable<Integer> {
         try (OutputFolder folder = OutputFolder.begin(out, inputs, () -> err.println("nullpath: another run is"
                 + " writing into " + out + "; waiting until it is done"));
              Workers workers = threads.workers();
-             Table.Writer<SweepRow> csv = table.open(folder.file(SweepOutput.CSV))) {
+             Table.Writer<SweepRow> csv = table.open(folder.create(SweepOutput.CSV))) {
             if (engine == null) {
                 workers.inOrder(points, p -> SweepPoints.compute(loaded.scenario(), sweep, p, names.size()), row -> {
                     csv.write(row);

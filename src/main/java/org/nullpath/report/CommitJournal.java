@@ -2,6 +2,7 @@ package org.nullpath.report;
 
 import java.io.IOException;
 import java.io.InputStream;
+import java.io.OutputStream;
 import java.nio.ByteBuffer;
 import java.nio.channels.FileChannel;
 import java.nio.file.AtomicMoveNotSupportedException;
@@ -189,14 +190,54 @@ final class CommitJournal {
         }
     }
 
-    /** The SHA-256 digest of a file's content, in lower-case hex. */
-    static String sha256(Path file) throws IOException {
-        MessageDigest md;
+    /** A file's SHA-256 digest (lower-case hex) as it was written, and how many bytes it had then. */
+    record Digested(String sha256, long bytes) {
+    }
+
+    /** {@code out}, digesting what passes through it; {@code done} gets the digest when it is closed. */
+    static OutputStream digesting(OutputStream out, java.util.function.Consumer<Digested> done) {
+        MessageDigest md = newSha256();
+        return new OutputStream() {
+            private long bytes;
+
+            @Override
+            public void write(int b) throws IOException {
+                out.write(b);
+                md.update((byte) b);
+                bytes++;
+            }
+
+            @Override
+            public void write(byte[] b, int off, int len) throws IOException {
+                out.write(b, off, len);
+                md.update(b, off, len);
+                bytes += len;
+            }
+
+            @Override
+            public void flush() throws IOException {
+                out.flush();
+            }
+
+            @Override
+            public void close() throws IOException {
+                out.close();
+                done.accept(new Digested(HexFormat.of().formatHex(md.digest()), bytes));
+            }
+        };
+    }
+
+    private static MessageDigest newSha256() {
         try {
-            md = MessageDigest.getInstance("SHA-256");
+            return MessageDigest.getInstance("SHA-256");
         } catch (NoSuchAlgorithmException e) {
             throw new IllegalStateException("every Java has SHA-256", e);
         }
+    }
+
+    /** The SHA-256 digest of a file's content, in lower-case hex. */
+    static String sha256(Path file) throws IOException {
+        MessageDigest md = newSha256();
         try (InputStream in = Files.newInputStream(file, LinkOption.NOFOLLOW_LINKS)) {
             byte[] buf = new byte[1 << 16];
             for (int n; (n = in.read(buf)) > 0; ) {

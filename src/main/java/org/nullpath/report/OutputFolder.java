@@ -1,6 +1,7 @@
 package org.nullpath.report;
 
 import java.io.IOException;
+import java.io.OutputStream;
 import java.nio.file.DirectoryStream;
 import java.nio.file.FileAlreadyExistsException;
 import java.nio.file.Files;
@@ -13,6 +14,7 @@ import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import java.util.concurrent.ConcurrentHashMap;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
@@ -80,6 +82,8 @@ public final class OutputFolder implements AutoCloseable {
 
     private final Path target;
     private final Path staging;
+    /** Digests taken while writing, by staged file name (see {@link #create}). */
+    private final Map<String, CommitJournal.Digested> digested = new ConcurrentHashMap<>();
     private final Path firstCreated;
     private final List<Path> inputs;
     private final FolderLock lock;
@@ -208,9 +212,19 @@ public final class OutputFolder implements AutoCloseable {
     public Map<String, String> stagedDigests() throws IOException {
         Map<String, String> out = new TreeMap<>();
         for (String n : stagedNames()) {
-            out.put(n, CommitJournal.sha256(staging.resolve(n)));
+            Path f = staging.resolve(n);
+            CommitJournal.Digested d = digested.get(n);
+            out.put(n, d != null && d.bytes() == Files.size(f) ? d.sha256() : CommitJournal.sha256(f));
         }
         return out;
+    }
+
+    /**
+     * Opens the staged file {@code name} for writing; its SHA-256 digest is taken from the bytes as they are
+     * written, so that {@link #stagedDigests} need not read a large file again.
+     */
+    public OutputStream create(String name) throws IOException {
+        return CommitJournal.digesting(Files.newOutputStream(file(name)), d -> digested.put(name, d));
     }
 
     /** The path to write a file named {@code name} to (inside the staging folder). */

@@ -114,7 +114,7 @@ public final class PlanOutput {
     private static void linkFiles(Run run) throws IOException {
         for (Link link : run.mission.links().values()) {
             Table<MessageRow> table = Tables.messages(link.terms(), link.pointing(), run.mission.epoch());
-            try (Table.Writer<MessageRow> w = table.open(run.out.file(OutputNames.ofLink(link.name())))) {
+            try (Table.Writer<MessageRow> w = table.open(run.out.create(OutputNames.ofLink(link.name())))) {
                 run.links.add(LinkSchedule.run(run.mission, link, run.workers, w::encode, w::append));
             }
         }

@@ -46,7 +46,12 @@ public record Table<R>(List<Column<R>> columns) {
 
     /** Opens {@code file} and writes the header; rows follow with {@link Writer#write}. */
     public Writer<R> open(Path file) throws IOException {
-        return new Writer<>(this, file);
+        return new Writer<>(this, Files.newOutputStream(file));
+    }
+
+    /** Writes the header to {@code out}, which the writer then owns (and closes); rows follow. */
+    public Writer<R> open(OutputStream out) throws IOException {
+        return new Writer<>(this, out);
     }
 
     /** Writes a whole table at once. */
@@ -109,9 +114,9 @@ public record Table<R>(List<Column<R>> columns) {
         private final Table<R> table;
         private final OutputStream out;
 
-        private Writer(Table<R> table, Path file) throws IOException {
+        private Writer(Table<R> table, OutputStream file) throws IOException {
             this.table = table;
-            this.out = new BufferedOutputStream(Files.newOutputStream(file), 1 << 16);
+            this.out = new BufferedOutputStream(file, 1 << 16);
             out.write(table.headerLine().getBytes(StandardCharsets.UTF_8));
         }
 
