@@ -115,7 +115,7 @@ public final class PlanOutput {
         for (Link link : run.mission.links().values()) {
             Table<MessageRow> table = Tables.messages(link.terms(), link.pointing(), run.mission.epoch());
             try (Table.Writer<MessageRow> w = table.open(run.out.create(OutputNames.ofLink(link.name())))) {
-                run.links.add(LinkSchedule.run(run.mission, link, run.workers, w::encode, w::append));
+                run.links.add(LinkSchedule.run(run.mission, link, run.workers, w::encodeInPlace, w::append));
             }
         }
     }

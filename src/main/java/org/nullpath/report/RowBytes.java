@@ -27,6 +27,10 @@ final class RowBytes {
         return Arrays.copyOf(b, n);
     }
 
+    void writeTo(java.io.OutputStream out) throws java.io.IOException {
+        out.write(b, 0, n);
+    }
+
     private void room(int more) {
         if (n + more > b.length) {
             b = Arrays.copyOf(b, Math.max(b.length * 2, n + more));

@@ -78,8 +78,13 @@ public record Table<R>(List<Column<R>> columns) {
      * {@link CsvText}, so that a row of one empty cell is not an empty line).
      */
     public byte[] encode(List<R> rows) {
-        RowBytes b = new RowBytes(rows.size() * 16 * columns.size());
+        return bytes(rows).toArray();
+    }
+
+    /** {@link #encode} into a buffer of its own, which the caller writes without a copy. */
+    RowBytes bytes(List<R> rows) {
         int k = columns.size();
+        RowBytes b = new RowBytes(rows.size() * 16 * k);
         for (R r : rows) {
             int start = b.length();
             columns.get(0).bytes().write(b, r);
@@ -93,7 +98,7 @@ public record Table<R>(List<Column<R>> columns) {
             }
             b.put('\n');
         }
-        return b.toArray();
+        return b;
     }
 
     /** The header line, ending in LF. */
@@ -128,6 +133,20 @@ public record Table<R>(List<Column<R>> columns) {
         /** The CSV text of {@code rows} in UTF-8; safe to call from several threads at once. */
         public byte[] encode(List<R> rows) {
             return table.encode(rows);
+        }
+
+        /** {@link #encode} without the copy into an array of its own; safe to call from several threads at once. */
+        RowBytes encodeInPlace(List<R> rows) {
+            return table.bytes(rows);
+        }
+
+        /** Appends rows made by {@link #encodeInPlace}; an I/O failure surfaces as {@link UncheckedIOException}. */
+        void append(RowBytes rows) {
+            try {
+                rows.writeTo(out);
+            } catch (IOException e) {
+                throw new UncheckedIOException(e);
+            }
         }
 
         /** Appends text made by {@link #encode}; an I/O failure surfaces as {@link UncheckedIOException}. */
