@@ -80,6 +80,9 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
                 implements Reception {
             @Override
             public Optional<String> beyondDoubleRange() {
+                if (noneInfinite(rxPowerDbw, cn0DbHz, ebN0Db, marginDb, maxDataRateBps)) {
+                    return Optional.empty();
+                }
                 return firstInfinite("received power", rxPowerDbw, "C/N0", cn0DbHz, "Eb/N0", ebN0Db, "margin", marginDb,
                         "highest closing data rate", maxDataRateBps);
             }
@@ -98,6 +101,9 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
                               double maxDataRateBps) implements Reception {
             @Override
             public Optional<String> beyondDoubleRange() {
+                if (noneInfinite(rxPowerDbw, rxPhotonRatePerS, photonsPerBit, marginDb, maxDataRateBps)) {
+                    return Optional.empty();
+                }
                 return firstInfinite("received power", rxPowerDbw, "received photon rate", rxPhotonRatePerS,
                         "photons per bit", photonsPerBit, "margin", marginDb, "highest closing data rate", maxDataRateBps);
             }
@@ -148,9 +154,21 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
      * absent (NaN).
      */
     public Optional<String> beyondDoubleRange() {
+        if (noneInfinite(rxFrequencyHz(), dopplerRateHzPerS(), rxDataRateBps, 0, 0)) {
+            return reception.beyondDoubleRange();
+        }
         Optional<String> shared = firstInfinite("received frequency", rxFrequencyHz(), "Doppler rate", dopplerRateHzPerS(),
                 "received data rate", rxDataRateBps);
         return shared.isPresent() ? shared : reception.beyondDoubleRange();
+    }
+
+    /**
+     * Whether none of five values is infinite (NaN, no value, is not); the check every message passes, so it
+     * allocates nothing, and the names are looked up only when one is.
+     */
+    public static boolean noneInfinite(double a, double b, double c, double d, double e) {
+        return !(Double.isInfinite(a) || Double.isInfinite(b) || Double.isInfinite(c) || Double.isInfinite(d)
+                || Double.isInfinite(e));
     }
 
     /** The name before the first infinite value among names and values given in turn. */

@@ -59,6 +59,10 @@ public record MessageRow(long message, double sendClock, double sendTime, Option
          * range, or a budget figure: {@link Budget#beyondDoubleRange()}); empty when all are finite or absent.
          */
         public Optional<String> beyondDoubleRange() {
+            if (Budget.noneInfinite(receiveTime, receiveClock, lightTime, doppler, frequencyOffset)
+                    && Budget.noneInfinite(receiveInterval, lightTimeCondition, 0, 0, 0)) {
+                return budget.isPresent() ? budget.get().beyondDoubleRange() : Optional.empty();
+            }
             double[] values = {receiveTime, receiveClock, lightTime, doppler, frequencyOffset, receiveInterval,
                 lightTimeCondition};
             for (int i = 0; i < values.length; i++) {
