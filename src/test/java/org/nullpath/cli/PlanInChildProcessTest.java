@@ -91,7 +91,8 @@ class PlanInChildProcessTest {
 
     /** A long plan into {@code dir} in a child process, returned once it has begun writing its staged files. */
     private Process longPlanWriting(Path dir) throws IOException, InterruptedException {
-        Process p = longPlanWriting(dir);
+        Process p = startLongPlan(dir);
+        awaitStaging(p, dir);
         return p;
     }
 
