@@ -12,38 +12,64 @@ import me.tongfei.progressbar.ProgressBarStyle;
  * Progress of a long run on standard error: a bar (me.tongfei:progressbar) when standard error is a terminal,
  * otherwise one line at every tenth of the work, nothing when asked to be quiet.
  */
-final class Progress implements AutoCloseable {
-    private final ProgressBar bar;
-    private final PrintWriter lines;
-    private final long total;
-    private long done;
-    private int tenths;
+interface Progress extends AutoCloseable {
+    /** One more unit of work done. */
+    void step();
 
-    private Progress(ProgressBar bar, PrintWriter lines, long total) {
-        this.bar = bar;
-        this.lines = lines;
-        this.total = total;
-    }
+    @Override
+    void close();
 
     static Progress start(PrintWriter err, boolean quiet, long total) {
         if (quiet) {
-            return new Progress(null, null, total);
+            return new Quiet();
         }
         if (System.console() != null) {
-            ProgressBar bar = new ProgressBarBuilder().setTaskName("points").setInitialMax(total)
+            return new Bar(new ProgressBarBuilder().setTaskName("points").setInitialMax(total)
                     .setStyle(ProgressBarStyle.ASCII).setUpdateIntervalMillis(200)
-                    .setConsumer(new ConsoleProgressBarConsumer(System.err)).build();
-            return new Progress(bar, null, total);
+                    .setConsumer(new ConsoleProgressBarConsumer(System.err)).build());
         }
-        return new Progress(null, err, total);
+        return new Lines(err, total);
     }
 
-    /** One more unit of work done. */
-    void step() {
-        done++;
-        if (bar != null) {
+    /** Nothing shown. */
+    record Quiet() implements Progress {
+        @Override
+        public void step() {
+        }
+
+        @Override
+        public void close() {
+        }
+    }
+
+    /** A bar on the terminal. */
+    record Bar(ProgressBar bar) implements Progress {
+        @Override
+        public void step() {
             bar.step();
-        } else if (lines != null) {
+        }
+
+        @Override
+        public void close() {
+            bar.close();
+        }
+    }
+
+    /** One line at every tenth of the work. */
+    final class Lines implements Progress {
+        private final PrintWriter lines;
+        private final long total;
+        private long done;
+        private int tenths;
+
+        Lines(PrintWriter lines, long total) {
+            this.lines = lines;
+            this.total = total;
+        }
+
+        @Override
+        public void step() {
+            done++;
             int t = (int) (10 * done / total);
             if (t > tenths) {
                 tenths = t;
@@ -51,12 +77,9 @@ final class Progress implements AutoCloseable {
                 lines.flush();
             }
         }
-    }
 
-    @Override
-    public void close() {
-        if (bar != null) {
-            bar.close();
+        @Override
+        public void close() {
         }
     }
 }

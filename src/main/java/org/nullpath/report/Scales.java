@@ -29,34 +29,53 @@ final class Scales {
         }
     }
 
+    /** A unit of a ladder, used from {@code from} (in SI, by magnitude) up to the next larger unit's own start. */
+    private record Rung(double from, Unit unit) {
+        Rung(double from, String symbol, double size) {
+            this(from, new Unit(symbol, size));
+        }
+    }
+
+    private static final Rung[] TIME = {
+        new Rung(2 * Constants.JULIAN_YEAR, "yr", Constants.JULIAN_YEAR),
+        new Rung(2 * Constants.DAY, "d", Constants.DAY),
+        new Rung(2 * 3600, "h", 3600),
+        new Rung(120, "min", 60),
+        new Rung(0, "s", 1),
+    };
+
+    private static final Rung[] LENGTH = {
+        new Rung(0.05 * Constants.LIGHT_YEAR, "ly", Constants.LIGHT_YEAR),
+        new Rung(0.05 * Constants.AU, "au", Constants.AU),
+        new Rung(0, "km", 1000),
+    };
+
+    private static final Rung[] DATA_RATE = {
+        new Rung(1e9, "Gbit/s", 1e9),
+        new Rung(1e6, "Mbit/s", 1e6),
+        new Rung(1e3, "kbit/s", 1e3),
+        new Rung(0, "bit/s", 1),
+    };
+
+    /** The first unit, largest first, whose start |value| reaches; the smallest otherwise (NaN included). */
+    private static Unit pick(double value, Rung[] ladder) {
+        double a = Math.abs(value);
+        for (int i = 0; i < ladder.length - 1; i++) {
+            if (a >= ladder[i].from()) {
+                return ladder[i].unit();
+            }
+        }
+        return ladder[ladder.length - 1].unit();
+    }
+
     /** Time: yr from 2 yr, d from 2 d, h from 2 h, else min or s. */
     static Unit time(double largestSeconds) {
-        double a = Math.abs(largestSeconds);
-        if (a >= 2 * Constants.JULIAN_YEAR) {
-            return new Unit("yr", Constants.JULIAN_YEAR);
-        }
-        if (a >= 2 * Constants.DAY) {
-            return new Unit("d", Constants.DAY);
-        }
-        if (a >= 2 * 3600) {
-            return new Unit("h", 3600);
-        }
-        if (a >= 120) {
-            return new Unit("min", 60);
-        }
-        return new Unit("s", 1);
+        return pick(largestSeconds, TIME);
     }
 
     /** Distance: ly from 0.05 ly, au from 0.05 au, else km. */
     static Unit length(double largestMetres) {
-        double a = Math.abs(largestMetres);
-        if (a >= 0.05 * Constants.LIGHT_YEAR) {
-            return new Unit("ly", Constants.LIGHT_YEAR);
-        }
-        if (a >= 0.05 * Constants.AU) {
-            return new Unit("au", Constants.AU);
-        }
-        return new Unit("km", 1000);
+        return pick(largestMetres, LENGTH);
     }
 
     /** Frequency: the SI prefix that puts the value between 1 and 1000. */
@@ -72,17 +91,7 @@ final class Scales {
 
     /** Data rate: bit/s, kbit/s, Mbit/s or Gbit/s, by the planned rate. */
     static Unit dataRate(double typicalBps) {
-        double a = Math.abs(typicalBps);
-        if (a >= 1e9) {
-            return new Unit("Gbit/s", 1e9);
-        }
-        if (a >= 1e6) {
-            return new Unit("Mbit/s", 1e6);
-        }
-        if (a >= 1e3) {
-            return new Unit("kbit/s", 1e3);
-        }
-        return new Unit("bit/s", 1);
+        return pick(typicalBps, DATA_RATE);
     }
 
     /** A tick step of 1, 2 or 5 times a power of ten giving about {@code ticks} intervals over {@code span}. */

@@ -30,8 +30,17 @@ import org.nullpath.units.Constants;
  * increase strictly with u. End conditions on the rapidity or the distance, which may turn, are found
  * by {@link #firstReach} on monotonic stretches of the dense output; a leg ended early keeps the
  * dense output and only moves its end ({@link #endedAt}).
+ *
+ * @param start    the state at the leg start
+ * @param law      the proper acceleration the leg integrates
+ * @param model    the dense output of the integration
+ * @param duration proper time the leg lasts (at most the integrated span)
+ * @param knots    the proper times where the law may change its form, from 0
+ * @param cut      why the integration stopped before the leg's own limit (a sentence for the user), or null when
+ *                 it did not
  */
-final class IntegratedPiece implements Piece {
+record IntegratedPiece(LineState start, Law law, StepStore model, double duration, double[] knots, String cut)
+        implements Piece {
     /** Relative tolerance of each integration step. */
     static final double RELATIVE_TOLERANCE = 1e-13;
 
@@ -58,33 +67,12 @@ final class IntegratedPiece implements Piece {
         double at(double u, double eta);
     }
 
-    private final LineState start;
-    private final Law law;
-    private final StepStore model;
-    private final double uEnd;
-    private final double[] knots;
-    private final String cut;
-
-    IntegratedPiece(LineState start, Law law, StepStore model, double uEnd, double[] knots, String cut) {
-        this.start = start;
-        this.law = law;
-        this.model = model;
-        this.uEnd = uEnd;
-        this.knots = knots;
-        this.cut = cut;
-    }
-
-    /** Why the integration stopped before the leg's own limit (a sentence for the user), or null when it did not. */
-    String cut() {
-        return cut;
-    }
-
     /** The same motion ended after proper time {@code du} (at most the integrated span). */
     IntegratedPiece endedAt(double du) {
-        if (du == uEnd) {
+        if (du == duration) {
             return this;
         }
-        if (!(du >= 0 && du < uEnd)) {
+        if (!(du >= 0 && du < duration)) {
             throw new IllegalArgumentException("a leg can only end inside its integrated span");
         }
         return new IntegratedPiece(start, law, model, du, knots, cut);
@@ -100,7 +88,7 @@ final class IntegratedPiece implements Piece {
      * {@link #ROOT_TOLERANCE}.
      */
     double firstReach(int k, double target) {
-        double[] cuts = k == T ? new double[] {0, uEnd} : monotoneParts(k == S);
+        double[] cuts = k == T ? new double[] {0, duration} : monotoneParts(k == S);
         for (int i = 0; i + 1 < cuts.length; i++) {
             double a = cuts[i];
             double b = cuts[i + 1];
@@ -120,9 +108,9 @@ final class IntegratedPiece implements Piece {
     private double[] monotoneParts(boolean distance) {
         java.util.List<Double> cuts = new java.util.ArrayList<>();
         cuts.add(0.0);
-        for (int i = 0; i + 1 < knots.length && knots[i] < uEnd; i++) {
+        for (int i = 0; i + 1 < knots.length && knots[i] < duration; i++) {
             double a = knots[i];
-            double b = Math.min(knots[i + 1], uEnd);
+            double b = Math.min(knots[i + 1], duration);
             UnivariateFunction acc = x -> law.at(x, y(x)[ETA]);
             double turn = signChange(acc, a, b);
             double[] parts = Double.isNaN(turn) ? new double[] {a, b} : new double[] {a, turn, b};
@@ -151,13 +139,8 @@ final class IntegratedPiece implements Piece {
 
     private double solve(UnivariateFunction f, double a, double b) {
         BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(ROOT_TOLERANCE,
-                ROOT_TOLERANCE * Math.max(uEnd, Double.MIN_NORMAL), 0.0, 5);
+                ROOT_TOLERANCE * Math.max(duration, Double.MIN_NORMAL), 0.0, 5);
         return solver.solve(400, f, a, b, AllowedSolution.ANY_SIDE);
-    }
-
-    /** Proper time the leg lasts. */
-    double duration() {
-        return uEnd;
     }
 
     private double[] y(double u) {
@@ -167,7 +150,7 @@ final class IntegratedPiece implements Piece {
         if (model.steps() == 0) {
             return new double[] {start.rapidity(), 0, 0, 0, 0};
         }
-        double[] y = model.at(Math.min(u, uEnd));
+        double[] y = model.at(Math.min(u, duration));
         y[S] *= C;
         y[U] *= C;
         y[V] *= C;
@@ -187,7 +170,7 @@ final class IntegratedPiece implements Piece {
         double u0 = local(cur);
         double target = y(u0)[k] + amount;
         double lo = amount >= 0 ? u0 : 0;
-        double hi = amount >= 0 ? uEnd : u0;
+        double hi = amount >= 0 ? duration : u0;
         double fLo = y(lo)[k] - target;
         double fHi = y(hi)[k] - target;
         if (fLo > 0 || fHi < 0) {
@@ -199,7 +182,7 @@ final class IntegratedPiece implements Piece {
         if (fHi == 0) {
             return hi - u0;
         }
-        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(ROOT_TOLERANCE, ROOT_TOLERANCE * Math.max(uEnd, Double.MIN_NORMAL),
+        BracketingNthOrderBrentSolver solver = new BracketingNthOrderBrentSolver(ROOT_TOLERANCE, ROOT_TOLERANCE * Math.max(duration, Double.MIN_NORMAL),
                 0.0, 5);
         double u = solver.solve(400, x -> y(x)[k] - target, lo, hi, AllowedSolution.ANY_SIDE);
         return u - u0;

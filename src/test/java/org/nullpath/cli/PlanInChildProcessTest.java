@@ -89,6 +89,25 @@ class PlanInChildProcessTest {
         return listing.keySet().stream().anyMatch(n -> n.startsWith("."));
     }
 
+    /** A long plan into {@code dir} in a child process, returned once it has begun writing its staged files. */
+    private Process longPlanWriting(Path dir) throws IOException, InterruptedException {
+        Process p = startLongPlan(dir);
+        awaitStaging(p, dir);
+        return p;
+    }
+
+    /** A long plan into {@code dir} stopped while writing: SIGTERM, or SIGKILL when {@code hard}; it has ended. */
+    private Process longPlanStopped(Path dir, boolean hard) throws IOException, InterruptedException {
+        Process p = longPlanWriting(dir);
+        if (hard) {
+            p.destroyForcibly();
+        } else {
+            p.destroy();
+        }
+        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        return p;
+    }
+
     private Process startLongPlan(Path dir) throws IOException {
         Path big = tmp.resolve("heron-long.yaml");
         Files.writeString(big, scenario("200 s")); // 172 802 messages, about 30 MB of CSV
@@ -135,10 +154,7 @@ class PlanInChildProcessTest {
     void sigtermWhileWritingLeavesTheEarlierPlanAndNoStaging() throws Exception {
         Path dir = earlierPlan();
         Map<String, String> before = listing(dir);
-        Process p = startLongPlan(dir);
-        awaitStaging(p, dir);
-        p.destroy();
-        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        Process p = longPlanStopped(dir, false);
         Map<String, String> after = listing(dir);
         assertFalse(hidden(after), "left after SIGTERM: " + after.keySet());
         if (p.exitValue() == 0) {
@@ -153,10 +169,7 @@ class PlanInChildProcessTest {
     void sigkillWhileWritingLeavesStagingThatTheNextPlanClears() throws Exception {
         Path dir = earlierPlan();
         Map<String, String> before = listing(dir);
-        Process p = startLongPlan(dir);
-        awaitStaging(p, dir);
-        p.destroyForcibly();
-        assertTrue(p.waitFor(60, TimeUnit.SECONDS));
+        Process p = longPlanStopped(dir, true);
         assertEquals(137, p.exitValue());
         Map<String, String> killed = listing(dir);
         Map<String, String> visible = new TreeMap<>(killed);
@@ -172,8 +185,7 @@ class PlanInChildProcessTest {
     void aPlanIntoAFolderAnotherProcessWritesWaitsForIt() throws Exception {
         Path dir = earlierPlan();
         Map<String, String> small = listing(dir);
-        Process p = startLongPlan(dir);
-        awaitStaging(p, dir);
+        Process p = longPlanWriting(dir);
         Path again = tmp.resolve("heron.yaml");
         PlanRun.Outcome o = PlanRun.run("plan", again.toString(), "--out", dir.toString(), "--no-report");
         assertTrue(p.waitFor(60, TimeUnit.SECONDS));

@@ -106,13 +106,7 @@ class PlanTalliesMatchReferenceTest {
                 .link("up", "home", "probe")
                 .link("down", "probe", "home")
                 .link("chase", "chaser", "probe")
-                .link("rate", "aside", "probe", """
-                        carrier: 8.4 GHz
-                        transmitter: {power: 200 W, antenna: {diameter: 3 m, efficiency: 0.6}, losses: 1 dB}
-                        receiver: {antenna: {diameter: 34 m, efficiency: 0.7}, noise-temperature: 30 K}
-                        data-rate: 50 bit/s
-                        required-eb-n0: 2 dB
-                        """)
+                .link("rate", "aside", "probe", ScenarioText.radioTerms("200 W")) // its carrier is CARRIER
                 .message("{link: up, first: 1 d, last: 1.3 yr, every: 30 d}")
                 .message("{link: up, at: [10 d, 0.5 yr]}")
                 .message("{link: down, first: 2 d, last: 2 yr, every: 90 d}")

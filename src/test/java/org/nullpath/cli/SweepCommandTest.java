@@ -41,13 +41,7 @@ class SweepCommandTest {
                 .craft("skua", "heading: [1, 0, 0]", "burn: {acceleration: " + acceleration + ", duration: 60 d}",
                         "coast: {duration: forever}")
                 .link("up", "yard", "skua")
-                .link("down", "skua", "yard", """
-                        carrier: 8.4 GHz
-                        transmitter: {power: %s, antenna: {diameter: 2 m, efficiency: 0.6}}
-                        receiver: {antenna: {diameter: 34 m, efficiency: 0.6}, noise-temperature: 30 K}
-                        data-rate: 1 kbit/s
-                        required-eb-n0: 2.5 dB
-                        """.formatted(power))
+                .link("down", "skua", "yard", ScenarioText.radioTerms(power))
                 .message("{link: up, first: 0 d, last: 100 d, every: 4 d}")
                 .message("{link: down, first: 0 d, last: 100 d, every: 4 d}")
                 .cutoff("{name: trim, link: up, arrive-by: 80 d}")

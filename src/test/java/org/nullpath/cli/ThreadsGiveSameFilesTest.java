@@ -30,13 +30,7 @@ class ThreadsGiveSameFilesTest {
             .station("mast", "{position: [0 ly, 0.05 ly, 0 ly], velocity: [0 c, 0.01 c, 0 c]}")
             .craft("gull", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: forever}")
             .link("up", "pier", "gull").link("back", "gull", "pier")
-            .link("down", "gull", "mast", """
-                    carrier: 8.4 GHz
-                    transmitter: {power: 100 W, antenna: {gain: 40 dBi}}
-                    receiver: {antenna: {diameter: 34 m, efficiency: 0.6}, noise-temperature: 25 K}
-                    data-rate: 10 kbit/s
-                    required-eb-n0: 2.5 dB
-                    """)
+            .link("down", "gull", "mast", ScenarioText.radioTerms("100 W"))
             .message("{link: up, first: 0 d, last: 400 d, every: 0.04 d}")
             .message("{link: up, at: [0.5 d, 353 d]}")
             .message("{link: down, first: 0 d, last: 300 d, every: 0.05 d}")

@@ -8,10 +8,13 @@ import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.junit.jupiter.params.provider.ValueSource;
 import org.nullpath.reference.RefHorizon;
 import org.nullpath.reference.RefSolver;
+import org.nullpath.reference.RefStation;
 import org.nullpath.spacetime.Decimal;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.worldline.InertialWorldline;
@@ -183,6 +186,43 @@ class HorizonTest {
         assertEquals(ref.tDouble(), h.lastSend().timeSeconds(), 1e-12 * scale, "last send, mission time");
         assertEquals(ref.clockDouble(), h.lastSend().clock(), 1e-12 * scale, "last send, sender's clock");
         assertFalse(LightCone.future(h.lastSend(), receiver.craft()).delivered(), "a send at the horizon never arrives");
+    }
+
+    /**
+     * Stations beside, behind and ahead of a receiver that leaves on an open-ended burn, at rest and moving: the
+     * station formula t = (L + k.r0) / (c - k.v) (Rindler 2006, the asymptote c t - k.r = L of hyperbolic motion)
+     * lands a few ulps either side of the supremum, and the last send is then moved up until the future cone
+     * itself classes it as never arriving. Each case against the 50-digit reference, and the send at the horizon
+     * never arrives. The grid (every position with every velocity and acceleration) is invented for the test.
+     */
+    @ParameterizedTest(name = "station at ({0}, {1}, 0) ly moving at {2} c along x; receiver burning {3} g0 from {4} yr")
+    @MethodSource("stationGrid")
+    void theHorizonOfAStationMatchesTheReference(double xLy, double yLy, double beta, double aG0, double leaveYears) {
+        TwinCraft receiver = TwinCraft.of(new double[] {0, 0, 0}, new double[] {1, 0, 0}, leaveYears * YR, 0, 0,
+                new LegSpec.Burn(aG0 * G0, new LegSpec.Forever()));
+        double[] r0 = {xLy * LY, yLy * LY, 0};
+        double[] v = {beta * C, 0, 0};
+        InertialWorldline station = InertialWorldline.of(TwinCraft.vec(r0), TwinCraft.vec(v), 0);
+        Horizon h = LightCone.horizon(station, receiver.craft());
+        RefHorizon ref = RefSolver.horizon(RefStation.of(r0, v, 0), receiver.ref());
+        assertTrue(h.exists() && ref.exists());
+        double scale = Math.max(Math.abs(ref.tDouble()), Math.abs(ref.limit().doubleValue()) / C);
+        assertEquals(ref.tDouble(), h.lastSend().timeSeconds(), 1e-12 * scale, "last send, mission time");
+        assertFalse(LightCone.future(h.lastSend(), receiver.craft()).delivered(), "a send at the horizon never arrives");
+    }
+
+    static java.util.stream.Stream<Arguments> stationGrid() {
+        java.util.stream.Stream.Builder<Arguments> grid = java.util.stream.Stream.builder();
+        for (double x : new double[] {-2.3, -0.41, 0.17, 1.9}) {
+            for (double y : new double[] {0, 0.37}) {
+                for (double beta : new double[] {0, 0.31, -0.53}) {
+                    for (double a : new double[] {0.7, 1, 2.3}) {
+                        grid.add(Arguments.of(x, y, beta, a, x < 0 ? 0.6 : -0.2));
+                    }
+                }
+            }
+        }
+        return grid.build();
     }
 
     @Test

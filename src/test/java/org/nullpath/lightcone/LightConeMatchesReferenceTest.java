@@ -8,7 +8,9 @@ import static org.nullpath.testkit.Si.LY;
 import static org.nullpath.testkit.Si.YR;
 
 import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.Arguments;
 import org.junit.jupiter.params.provider.CsvSource;
+import org.junit.jupiter.params.provider.MethodSource;
 import org.nullpath.reference.RefArrival;
 import org.nullpath.reference.RefEvent;
 import org.nullpath.reference.RefSolver;
@@ -83,8 +85,12 @@ class LightConeMatchesReferenceTest {
     }
 
     private static void assertArrival(State send, boolean hidden, boolean onFlightLine) {
-        SignalPath p = LightCone.future(send, target(hidden));
-        RefArrival ref = RefSolver.futureCone(send.timeSeconds(), at(send), FLIGHT.ref());
+        assertArrival(send, target(hidden), FLIGHT, onFlightLine);
+    }
+
+    private static void assertArrival(State send, Worldline receiver, TwinCraft flight, boolean onFlightLine) {
+        SignalPath p = LightCone.future(send, receiver);
+        RefArrival ref = RefSolver.futureCone(send.timeSeconds(), at(send), flight.ref());
         assertTrue(p.delivered());
         assertEquals(onFlightLine, p.onFlightLine(), "the signal is said to run along the flight line");
         assertEquals(ref.lightTimeDouble(), p.lightTimeSeconds(), TOL * ref.lightTimeDouble(), "light time");
@@ -116,10 +122,61 @@ class LightConeMatchesReferenceTest {
         assertEmission(InertialWorldline.atRest(TwinCraft.vec(onTheLine(alongLy))).atTime(deadlineYears * YR), hidden);
     }
 
+    /**
+     * Stations 0.02 to 2 ly off the flight line, level with the craft, behind it or ahead of it at the moment of
+     * the send (or of the deadline), on each leg: light times from a week to years, so that the off-line solve
+     * runs from guesses both good and poor. The grid is invented for the test; each point against the 50-digit
+     * reference at 1e-12 (all well conditioned: docs/physics.md, "How well a light time is known").
+     */
+    @ParameterizedTest(name = "{0} m off the line, {1} of that along it, at {2} yr")
+    @MethodSource("offLineGrid")
+    void stationsNearAndFarOffTheLineMatchTheReference(double offMetres, double alongRatio, double years) {
+        assertBothCones(FLIGHT, offMetres, alongRatio, years * YR);
+    }
+
+    static java.util.stream.Stream<Arguments> offLineGrid() {
+        java.util.stream.Stream.Builder<Arguments> grid = java.util.stream.Stream.builder();
+        for (double along : new double[] {-20, -1, 0, 1, 20}) {
+            for (double off : new double[] {0.02 * LY, 0.3 * LY, 2 * LY}) {
+                for (double years : new double[] {0.2, 0.9, 1.5, 2.4}) {
+                    grid.add(Arguments.of(off, along, years));
+                }
+            }
+        }
+        return grid.build();
+    }
+
+    /**
+     * Stations 100 km and 3000 km off the line of a craft 100 s into a 1 g0 burn from rest at the origin, level
+     * with it, ahead or behind: light times from 0.33 ms, 2e5 times shorter than the send time, so that a light time taken
+     * as the difference of two rounded times would already be off by 1e-11 relative.
+     */
+    @ParameterizedTest(name = "{0} m off the line, {1} of that along it")
+    @CsvSource({"1e5, -1", "1e5, 1", "1e5, 0", "3e6, -20", "3e6, 20"})
+    void aStationAHundredKilometresOffTheLineMatchesTheReference(double offMetres, double alongRatio) {
+        assertBothCones(ALONG_X, offMetres, alongRatio, 100.0);
+    }
+
+    private static void assertBothCones(TwinCraft flight, double offMetres, double alongRatio, double seconds) {
+        Vec3 heading = flight.craft().heading();
+        Vec3 tilt = Vec3.of(1, -2, 0.5);
+        Vec3 across = tilt.minus(heading.times(heading.dot(tilt))).unit();
+        Vec3 where = flight.craft().atTime(seconds).position().plus(across.times(offMetres))
+                .plus(heading.times(alongRatio * offMetres));
+        InertialWorldline station = InertialWorldline.atRest(where);
+        assertArrival(station.atTime(seconds), flight.craft(), flight, false);
+        assertEmission(station.atTime(seconds), flight.craft(), flight);
+    }
+
     private static void assertEmission(State receive, boolean hidden) {
-        SignalPath p = LightCone.past(receive, target(hidden));
-        RefEvent ref = RefSolver.pastCone(RefEvent.of(receive.timeSeconds(), at(receive)), FLIGHT.ref());
-        double lightTime = receive.timeSeconds() - ref.tDouble();
+        assertEmission(receive, target(hidden), FLIGHT);
+    }
+
+    private static void assertEmission(State receive, Worldline sender, TwinCraft flight) {
+        SignalPath p = LightCone.past(receive, sender);
+        RefEvent ref = RefSolver.pastCone(RefEvent.of(receive.timeSeconds(), at(receive)), flight.ref());
+        // the light time as the reference's own difference, rounded once (not a difference of two rounded times)
+        double lightTime = new java.math.BigDecimal(receive.timeSeconds()).subtract(ref.t()).doubleValue();
         assertEquals(lightTime, p.lightTimeSeconds(), TOL * lightTime, "light time");
         assertEquals(ref.clockDouble(), p.send().clock(), TOL * Math.abs(ref.clockDouble()), "craft clock at the send");
         assertEquals(ref.tDouble(), p.send().timeSeconds(), TOL * Math.abs(ref.tDouble()), "send time");

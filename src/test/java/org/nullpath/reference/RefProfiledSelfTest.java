@@ -18,6 +18,7 @@ import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.hipparchus.util.Pair;
 import org.junit.jupiter.api.Test;
+import org.nullpath.testkit.Ode;
 
 /**
  * Self-test of the profiled-leg reference {@link RefProfiledCraft}: the Gauss–Legendre rule against its defining
@@ -399,17 +400,8 @@ class RefProfiledSelfTest {
 
     /** Integrates d(eta, t, s)/du = (a(u, eta)/c, cosh eta, c sinh eta) with Hipparchus DormandPrince853 in double. */
     private static double[] integrate(DoubleBinaryOperator accel, double eta0, double length) {
-        OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
-            @Override
-            public int getDimension() {
-                return 3;
-            }
-
-            @Override
-            public double[] computeDerivatives(double u, double[] y) {
-                return new double[] {accel.applyAsDouble(u, y[0]) / C, Math.cosh(y[0]), C * Math.sinh(y[0])};
-            }
-        };
+        OrdinaryDifferentialEquation ode = Ode.of(3, (u, y) -> new double[] {accel.applyAsDouble(u, y[0]) / C,
+            Math.cosh(y[0]), C * Math.sinh(y[0])});
         DormandPrince853Integrator in = new DormandPrince853Integrator(1e-12, length / 10, 1e-30, 1e-14);
         ODEStateAndDerivative out = in.integrate(ode, new ODEState(0, new double[] {eta0, 0, 0}), length);
         return out.getPrimaryState();

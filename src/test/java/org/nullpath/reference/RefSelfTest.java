@@ -19,6 +19,7 @@ import org.hipparchus.ode.ODEStateAndDerivative;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.junit.jupiter.api.Test;
+import org.nullpath.testkit.Ode;
 
 /**
  * Self-test of the high-precision reference: published check values, an outside arbitrary-precision library
@@ -538,17 +539,7 @@ class RefSelfTest {
         double dur = 2.5 * YR;
         RefCraft craft = RefCraft.start(ORIGIN, X, 1e5, 10, v0).burnForClock(a, dur);
         double eta0 = 0.5 * Math.log((1 + v0 / C) / (1 - v0 / C));
-        OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
-            @Override
-            public int getDimension() {
-                return 3;
-            }
-
-            @Override
-            public double[] computeDerivatives(double tau, double[] y) {
-                return new double[] {a / C, Math.cosh(y[0]), C * Math.sinh(y[0])};
-            }
-        };
+        OrdinaryDifferentialEquation ode = Ode.of(3, (tau, y) -> new double[] {a / C, Math.cosh(y[0]), C * Math.sinh(y[0])});
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(1e-6, 1e6, 1e-14, 1e-14);
         ODEStateAndDerivative end = integrator.integrate(ode, new ODEState(10, new double[] {eta0, 1e5, 0}), 10 + dur);
         BigDecimal[] legEnd = craft.legEnd(0);

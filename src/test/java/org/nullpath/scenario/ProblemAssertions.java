@@ -8,6 +8,8 @@ import static org.junit.jupiter.api.Assertions.assertTrue;
 import java.util.List;
 import java.util.stream.Collectors;
 
+import org.junit.jupiter.api.function.Executable;
+
 /** Helpers for tests that a bad scenario gives exactly the expected problems. */
 final class ProblemAssertions {
     static final String FILE = "scenario.yaml";
@@ -27,6 +29,21 @@ final class ProblemAssertions {
         List<Problem> all = problemsOf(yaml);
         assertEquals(1, all.size(), () -> "expected one problem, got:\n" + rendered(all));
         return all.get(0);
+    }
+
+    /**
+     * The one problem of a scenario that {@code load} must refuse, checked to lie at {@code line}, {@code column}
+     * and {@code key} (in whatever file it names).
+     */
+    static Problem onlyProblemAt(Executable load, int line, int column, String key) {
+        ScenarioException e = assertThrows(ScenarioException.class, load);
+        List<Problem> all = e.problems();
+        assertEquals(1, all.size(), () -> rendered(all));
+        Problem p = all.get(0);
+        assertEquals(line, p.line(), p.render());
+        assertEquals(column, p.column(), p.render());
+        assertEquals(key, p.key(), p.render());
+        return p;
     }
 
     static String rendered(List<Problem> problems) {

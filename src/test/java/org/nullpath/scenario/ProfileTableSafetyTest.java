@@ -2,7 +2,6 @@ package org.nullpath.scenario;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertFalse;
-import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.io.IOException;
@@ -48,14 +47,8 @@ class ProfileTableSafetyTest {
 
     private Problem problem(String file, boolean anywhere) throws IOException {
         Path s = scenario(file);
-        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load(s, anywhere));
-        List<Problem> all = e.problems();
-        assertEquals(1, all.size(), () -> ProblemAssertions.rendered(all));
-        Problem p = all.get(0);
-        assertEquals(8, p.line(), p.render());
-        assertEquals(25, p.column(), p.render());
-        assertEquals("craft.lark.legs[0].profile.file", p.key(), p.render());
-        return p;
+        return ProblemAssertions.onlyProblemAt(() -> ScenarioLoader.load(s, anywhere), 8, 25,
+                "craft.lark.legs[0].profile.file");
     }
 
     private Problem table(String text) throws IOException {

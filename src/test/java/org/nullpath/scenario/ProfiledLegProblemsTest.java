@@ -4,7 +4,6 @@ import org.nullpath.mission.Mission;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.List;
 
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -12,7 +11,6 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
-import static org.junit.jupiter.api.Assertions.assertThrows;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 import static org.nullpath.scenario.ProblemAssertions.assertProblem;
 import static org.nullpath.scenario.ProblemAssertions.onlyProblemOf;
@@ -57,14 +55,8 @@ class ProfiledLegProblemsTest {
         if (table != null) {
             Files.writeString(tmp.resolve("ramp.csv"), table);
         }
-        ScenarioException e = assertThrows(ScenarioException.class, () -> ScenarioLoader.load(scenario));
-        List<Problem> all = e.problems();
-        assertEquals(1, all.size(), () -> ProblemAssertions.rendered(all));
-        Problem p = all.get(0);
-        assertEquals(8, p.line(), p.render());
-        assertEquals(25, p.column(), p.render());
-        assertEquals("craft.lark.legs[0].profile.file", p.key(), p.render());
-        return p;
+        return ProblemAssertions.onlyProblemAt(() -> ScenarioLoader.load(scenario), 8, 25,
+                "craft.lark.legs[0].profile.file");
     }
 
     @Test

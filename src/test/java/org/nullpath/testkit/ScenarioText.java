@@ -101,6 +101,22 @@ public final class ScenarioText {
         return this;
     }
 
+    /**
+     * Budget terms for {@link #link(String, String, String, String)}: an invented X-band radio link (8.4 GHz
+     * carrier, a 2 m dish sending {@code power}, a 34 m dish at 30 K receiving 1 kbit/s, Eb/N0 2.5 dB required),
+     * for tests that need a budget on a link rather than particular figures. Its keys
+     * ({@code transmitter.power}, {@code receiver.noise-temperature}, ...) are what a sweep may vary.
+     */
+    public static String radioTerms(String power) {
+        return """
+                carrier: 8.4 GHz
+                transmitter: {power: %s, antenna: {diameter: 2 m, efficiency: 0.6}}
+                receiver: {antenna: {diameter: 34 m, efficiency: 0.6}, noise-temperature: 30 K}
+                data-rate: 1 kbit/s
+                required-eb-n0: 2.5 dB
+                """.formatted(power);
+    }
+
     /** One message plan, a flow mapping such as {@code {link: up, first: 0 d, last: 1 yr, every: 30 d}}. */
     public ScenarioText message(String plan) {
         messages.add("  - " + plan);

@@ -11,6 +11,7 @@ import org.hipparchus.ode.ODEState;
 import org.hipparchus.ode.OrdinaryDifferentialEquation;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
 import org.junit.jupiter.api.Test;
+import org.nullpath.testkit.Ode;
 
 /**
  * The compact dense output reproduces Hipparchus' own: both handlers watch one Dormand–Prince 8(5,3)
@@ -24,19 +25,8 @@ import org.junit.jupiter.api.Test;
 class StepStoreTest {
     @Test
     void theCompactDenseOutputIsTheIntegratorsOwnInterpolant() {
-        OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
-            @Override
-            public int getDimension() {
-                return 5;
-            }
-
-            @Override
-            public double[] computeDerivatives(double u, double[] y) {
-                double eta = y[0];
-                return new double[] {1e-7 * Math.sin(1e-5 * u) + 3e-8, Math.cosh(eta), Math.sinh(eta), Math.exp(-eta),
-                                     Math.exp(eta)};
-            }
-        };
+        OrdinaryDifferentialEquation ode = Ode.of(5, (u, y) -> new double[] {1e-7 * Math.sin(1e-5 * u) + 3e-8,
+            Math.cosh(y[0]), Math.sinh(y[0]), Math.exp(-y[0]), Math.exp(y[0])});
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(0, 1e6, 1e-20, 1e-13);
         DenseOutputModel reference = new DenseOutputModel();
         StepStore store = new StepStore(100_000);
@@ -75,17 +65,7 @@ class StepStoreTest {
 
     @Test
     void oneStepBeyondTheBudgetStopsTheIntegration() {
-        OrdinaryDifferentialEquation ode = new OrdinaryDifferentialEquation() {
-            @Override
-            public int getDimension() {
-                return 5;
-            }
-
-            @Override
-            public double[] computeDerivatives(double u, double[] y) {
-                return new double[] {Math.cos(u), 1, 0, 1, 1};
-            }
-        };
+        OrdinaryDifferentialEquation ode = Ode.of(5, (u, y) -> new double[] {Math.cos(u), 1, 0, 1, 1});
         DormandPrince853Integrator integrator = new DormandPrince853Integrator(0, 0.01, 1e-20, 1e-13);
         StepStore store = new StepStore(50);
         integrator.addStepHandler(store);
