@@ -9,9 +9,10 @@ import org.nullpath.link.LinkTerms;
 import org.nullpath.schedule.SampledSeries;
 
 /**
- * The charts of one link, from its sampled series: light time, Doppler factor, received frequency,
- * margin and highest data rate, each against mission time at sending and against the receiver's clock
- * at arrival, and the clock image (receiver clock against sender clock).
+ * The charts of one link, from its sampled series: light time, Doppler factor, the point-ahead angle (where
+ * the link has directions), received frequency, margin, highest data rate and the antennas' angles off
+ * boresight, each against mission time at sending and against the receiver's clock at arrival, and the
+ * clock image (receiver clock against sender clock).
  */
 final class LinkCharts {
     private LinkCharts() {
@@ -159,6 +160,7 @@ final class LinkCharts {
                                 Charts.Dash.SOLID), Charts.Key.line("equal readings", Palette.MUTED,
                                 Charts.Dash.DASHED)), horizonKey), Charts.WIDTH, 340));
 
+        pointAhead(out, ls, samples, x1, x2, horizonMark, horizonKey, x1Label, x2Label);
         if (ls.terms().isEmpty()) {
             out.add(clockImage);
             return out;
@@ -212,8 +214,48 @@ final class LinkCharts {
                         Charts.Key.line("planned rate (" + Scales.number(ru.of(terms.dataRateBps())) + " "
                                 + ru.symbol() + ")", Palette.VERMILLION, Charts.Dash.DASHED)), horizonKey),
                 x1Label, x2Label));
+
+        // antennas off boresight, and the pointing loss they cost
+        double[] txOff = budgetColumn(samples, b -> Math.toDegrees(b.pointing().txOffBoresightRadians()));
+        double[] rxOff = budgetColumn(samples, b -> Math.toDegrees(b.pointing().rxOffBoresightRadians()));
+        double[] loss = budgetColumn(samples, b -> b.pointing().lossDb());
+        if (Math.max(max(txOff), max(rxOff)) > 0) { // drawn unless both antennas track exactly
+            out.add(plot(link, "boresight", "Antennas off boresight",
+                    "The angle between where each antenna must point (the aim at the transmitter, the look at the"
+                            + " receiver, aberration included) and its boresight; for a tracking antenna its pointing"
+                            + " error. The largest pointing loss of both antennas together among these samples is "
+                            + Scales.number(max(loss)) + " dB; it is included in the margin.",
+                    new Charts.YAxis("angle off boresight (\u00b0)", false, false),
+                    List.of(series("transmitter", Palette.VERMILLION, Charts.Dash.DASHED, x1, x2, txOff),
+                            series("receiver", Palette.BLUE, Charts.Dash.SOLID, x1, x2, rxOff)),
+                    horizonMark, null, List.of(),
+                    with(List.of(Charts.Key.line(ls.from() + "'s transmitter", Palette.VERMILLION, Charts.Dash.DASHED),
+                            Charts.Key.line(ls.to() + "'s receiver", Palette.BLUE, Charts.Dash.SOLID)), horizonKey),
+                    x1Label, x2Label));
+        }
         out.add(clockImage);
         return out;
+    }
+
+    /** The point-ahead angle, where the link has directions: how far ahead of the seen receiver to aim. */
+    private static void pointAhead(List<Plot> out, SampledSeries.LinkSeries ls, List<SampledSeries.Sample> samples,
+                                   double[] x1, double[] x2, List<Charts.Mark> horizonMark,
+                                   List<Charts.Key> horizonKey, String x1Label, String x2Label) {
+        double[] ahead = new double[samples.size()];
+        for (int i = 0; i < ahead.length; i++) {
+            ahead[i] = samples.get(i).directions().map(d -> d.pointAheadRadians() * 1e6).orElse(Double.NaN);
+        }
+        if (Axes.extent(ahead).isEmpty()) {
+            return;
+        }
+        out.add(plot(ls.link(), "point-ahead", "Point-ahead angle",
+                "In " + ls.from() + "'s frame at sending: the angle between where the signal must leave to meet "
+                        + ls.to() + " and where " + ls.to() + " is seen at that moment (its light on the send"
+                        + " event's past cone). A narrow beam must lead the seen receiver by this angle.",
+                new Charts.YAxis("point-ahead (\u00b5rad)", false, false),
+                List.of(series("point-ahead", Palette.BLUE, Charts.Dash.SOLID, x1, x2, ahead)), horizonMark, null,
+                List.of(), with(List.of(Charts.Key.line("point-ahead angle", Palette.BLUE, Charts.Dash.SOLID)),
+                        horizonKey), x1Label, x2Label));
     }
 
     /** Two lines (one per panel) from one y column. */

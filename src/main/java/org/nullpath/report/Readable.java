@@ -116,7 +116,7 @@ public final class Readable {
         }
         LegSpan last = legs.get(legs.size() - 1);
         if (last.openEnded()) {
-            return "its last leg, an open-ended burn, starts at " + time(last.start().clock()) + " on its clock ("
+            return "its last leg, an open-ended " + last.spec().kind().key() + ", starts at " + time(last.start().clock()) + " on its clock ("
                     + time(last.start().timeSeconds()) + " mission time) and never ends";
         }
         LineState end = last.end();

@@ -7,6 +7,7 @@ import java.util.Optional;
 
 import org.nullpath.lightcone.SignalPath;
 import org.nullpath.link.Budget;
+import org.nullpath.link.Directions;
 import org.nullpath.link.Doppler;
 import org.nullpath.link.LinkTerms;
 import org.nullpath.mission.Exchange;
@@ -45,9 +46,11 @@ public final class SampledSeries {
      * @param doppler      f_rx / f_tx
      * @param frequencyOffset doppler - 1, computed without cancellation
      * @param budget       frequency plan and link budget, when the link has terms
+     * @param directions   aim, look and point-ahead, when the link has terms or asks for directions
      */
     public record Sample(double sendClock, double sendTime, double receiveTime, double receiveClock,
-                         double lightTime, double doppler, double frequencyOffset, Optional<Budget> budget) {
+                         double lightTime, double doppler, double frequencyOffset, Optional<Budget> budget,
+                         Optional<Directions> directions) {
     }
 
     /**
@@ -139,7 +142,7 @@ public final class SampledSeries {
                 Doppler.Factor d = ev.arrival().get().doppler();
                 Optional<Budget> b = ev.arrival().get().budget();
                 samples.add(new Sample(clock, p.send().timeSeconds(), p.receive().timeSeconds(), p.receive().clock(),
-                        p.lightTimeSeconds(), d.doppler(), d.offset(), b));
+                        p.lightTimeSeconds(), d.doppler(), d.offset(), b, ev.arrival().get().directions()));
             } catch (ArithmeticException e) {
                 // a state beyond what doubles can hold (the worldline says so): leave the point out, count it
                 skipped++;

@@ -78,6 +78,26 @@ class OperatorAnswersTest {
     }
 
     @Test
+    void anOpenEndedLastLegIsNamedForWhatItIs() throws IOException {
+        // an open-ended coast after a burn is not a burn (it was once shown as "an open-ended burn")
+        Path file = tmp.resolve("wren.yaml");
+        Files.writeString(file, ScenarioText.titled("Wren coasts on").station("mast", "{}")
+                .craft("wren", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: 1 yr}",
+                        "coast: {duration: forever}")
+                .link("down", "wren", "mast").message("{link: down, at: [0 s]}").yaml());
+        PlanRun.Outcome o = PlanRun.run("plan", file.toString(), "--out", tmp.resolve("w").toString(), "--no-report");
+        assertEquals(0, o.exitCode(), o.err());
+        // hyperbolic motion (Rindler 2006): 1 yr at g0 takes (c / g0) sinh(g0 yr / c) = 1.187312 yr mission time
+        assertTrue(o.out().contains("its last leg, an open-ended coast, starts at 1.000 yr on its clock (1.187 yr"
+                + " mission time) and never ends"), o.out());
+        Files.writeString(file, ScenarioText.titled("Wren burns on").station("mast", "{}")
+                .craft("wren", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: forever}")
+                .link("down", "wren", "mast").message("{link: down, at: [0 s]}").yaml());
+        o = PlanRun.run("plan", file.toString(), "--out", tmp.resolve("w").toString(), "--no-report");
+        assertTrue(o.out().contains("its last leg, an open-ended burn, starts at 0 s on its clock"), o.out());
+    }
+
+    @Test
     void profiledLegsGiveTheirAccelerationRangeInTheSummary() throws IOException {
         Files.writeString(tmp.resolve("steps.csv"), "clock_s,acceleration_m_s2\n0,0\n50,12\n100,-3\n");
         Path file = tmp.resolve("kite.yaml");

@@ -70,6 +70,21 @@ class HtmlReportTest {
         return html.substring(start, end);
     }
 
+    @Test
+    void pointingChartsShowThePointAheadAndAntennasThatDoNotTrack() throws IOException, ScenarioException {
+        String html = report("aberration-relay.yaml", "aberration");
+        // every link has directions: a point-ahead chart each
+        for (String link : List.of("relay-radio", "relay-laser", "home")) {
+            assertTrue(figure(html, "fig-" + link + "-point-ahead").contains("<svg id='svg-" + link + "-point-ahead'"));
+        }
+        // a receiver fixed off the heading, and a laser with a pointing error: their angles are drawn
+        assertTrue(figure(html, "fig-relay-radio-boresight").contains("pointing loss"));
+        assertTrue(figure(html, "fig-relay-laser-boresight").contains("<svg id='svg-relay-laser-boresight'"));
+        // an aft antenna with the station on the line behind is always on boresight, and the station tracks
+        // exactly: nothing to draw
+        assertFalse(html.contains("fig-home-boresight"));
+    }
+
     @ParameterizedTest(name = "{0}")
     @ValueSource(strings = {"probe-link-budget.yaml", "open-burn-horizon.yaml"})
     void theReportIsOneSelfContainedPageWithEveryExpectedPart(String name) throws IOException, ScenarioException {
@@ -93,6 +108,9 @@ class HtmlReportTest {
             List<String> names = new ArrayList<>(List.of("light-time", "doppler", "clock-image"));
             if (l.terms().isPresent()) {
                 names.addAll(List.of("frequency", "margin", "data-rate"));
+            }
+            if (l.pointing()) {
+                names.add("point-ahead"); // every link with terms has directions; these demos' antennas all track
             }
             for (String n : names) {
                 expected.add(l.name() + "-" + n);
