@@ -25,8 +25,10 @@ import org.openjdk.jmh.annotations.TearDown;
 import org.openjdk.jmh.infra.Blackhole;
 
 /**
- * Writing numbers: one cell ({@link Cells#num}, Schubfach) against Java 17's Double.toString on the same values,
- * and a chunk of 4096 message rows turned into CSV text (eleven columns, the link file's).
+ * Writing numbers: one cell as text ({@link Cells#num}: nullpath's Schubfach, report.ShortestDecimal) against
+ * jackson-core's copy of the same algorithm and Java 17's Double.toString on the same values, and a chunk of
+ * 4096 message rows turned into CSV bytes (eleven columns, the link file's; numbers written straight into the
+ * row's bytes, no String per cell).
  */
 @BenchmarkMode(Mode.AverageTime)
 @OutputTimeUnit(TimeUnit.NANOSECONDS)
@@ -75,13 +77,21 @@ public class FormatBench {
 
     @Benchmark
     @OperationsPerInvocation(N)
+    public void jacksonSchubfach(Blackhole bh) {
+        for (double v : values) {
+            bh.consume(com.fasterxml.jackson.core.io.schubfach.DoubleToDecimal.toString(v));
+        }
+    }
+
+    @Benchmark
+    @OperationsPerInvocation(N)
     public void javaDoubleToString(Blackhole bh) {
         for (double v : values) {
             bh.consume(Double.toString(v));
         }
     }
 
-    /** Per row: eleven cells of a link file, quoted by the CSV rule where needed. */
+    /** Per row: eleven cells of a link file, quoted by the CSV rule where needed, as UTF-8 bytes. */
     @Benchmark
     @OperationsPerInvocation(N)
     public byte[] encodeRows() {
