@@ -244,7 +244,7 @@ public final class LightCone {
      * replaced by bisection, or by doubling while no upper end is known. Starting from the craft's inertial
      * light time, a few steps meet {@value #RELATIVE_ACCURACY} relative in du.
      */
-    private static StraightLineCraft.LineWalk offLineRoot(java.util.function.DoubleFunction<StraightLineCraft.LineWalk> walk,
+    static StraightLineCraft.LineWalk offLineRoot(java.util.function.DoubleFunction<StraightLineCraft.LineWalk> walk,
                                                           double a0, double s, double rho, double guess) {
         double lo = 0;
         double hi = Double.POSITIVE_INFINITY;
@@ -269,9 +269,11 @@ public final class LightCone {
                 double step = g / (C / rho * (Math.exp(-eta) / a + Math.exp(eta) / b));
                 next = x - step;
                 // converged: this step is below the tolerance, or Newton's quadratic convergence, seen in the
-                // last two steps (error of next ~ step^3 / lastStep^2), puts next within a tenth of it
+                // last two steps (error of next ~ step^3 / lastStep^2), puts next within a tenth of it. That
+                // estimate holds only once the steps are in the quadratic regime: the last step must itself
+                // have been small (at most 1e-3 of du), not the first jump from a poor guess.
                 double size = Math.abs(step);
-                if (size <= RELATIVE_ACCURACY * x || size < Math.abs(lastStep)
+                if (size <= RELATIVE_ACCURACY * x || size < Math.abs(lastStep) && Math.abs(lastStep) <= 1e-3 * x
                         && size * size * size <= 0.1 * RELATIVE_ACCURACY * x * lastStep * lastStep) {
                     return walk.apply(Math.min(Math.max(next, lo), hi));
                 }
