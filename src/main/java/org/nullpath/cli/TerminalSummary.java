@@ -17,7 +17,7 @@ import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkTally;
-import org.nullpath.schedule.WindowRow;
+import org.nullpath.schedule.WindowFigures;
 
 /** The few lines {@code plan} prints when it is done. */
 final class TerminalSummary {
@@ -89,7 +89,7 @@ final class TerminalSummary {
                 worstLink = t.link().name();
             }
         }
-        for (WindowRow w : r.windows()) {
+        for (WindowFigures w : r.windows()) {
             out.printf(Locale.ROOT, "  window on %-10s sends from %s to %s (sender's clock), closed by %s%n", w.link(),
                     Readable.notBefore(w.opensClock()), Readable.notAfter(w.closesClock()), w.closedBy());
         }
