@@ -8,6 +8,7 @@ import java.util.List;
 import org.apache.commons.csv.CSVRecord;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import org.nullpath.report.Readable;
 import org.nullpath.testkit.PlanRun;
 import org.nullpath.testkit.ScenarioText;
 
@@ -76,6 +77,26 @@ class CrossingsFileTest {
         assertRelative(C / A * Math.log(7.15 / 7.0), w.get(0).get("receive_open_s"), 1e-9);
         assertRelative(1000 * (low - high), w.get(0).get("volume_bits"), 1e-9);
         assertFalse(w.get(0).get("adaptive_volume_bits").isEmpty());
+    }
+
+    @Test
+    void theTerminalNamesTheFirstCrossingOfEachLimitOnceInTheOrderOfCrossingsCsv() throws IOException {
+        Path file = tmp.resolve("said.yaml");
+        Files.writeString(file, scenario(true));
+        PlanRun.Outcome o = PlanRun.run("plan", file.toString(), "--out", tmp.resolve("said").toString());
+        assertEquals(0, o.exitCode(), o.err());
+        List<String> lines = o.out().lines().filter(l -> l.contains("crossing on")).map(String::strip).toList();
+        // tuning-low is crossed in both scans: only the first (19.68 d, D = 7.0/7.2) is named; the margin's
+        // crossing (checked against the closed-form budget in schedule.CrossingsAndVolumesTest) as in the file
+        double margin = PlanRun.csv(tmp.resolve("said").resolve("crossings.csv")).stream()
+                .filter(r -> r.get("limit").equals("margin")).mapToDouble(r -> Double.parseDouble(r.get("send_clock_s")))
+                .findFirst().orElseThrow();
+        assertEquals(List.of("first margin crossing on up: leaves at send " + Readable.time(margin) + " (sender's clock)",
+                "first tuning-low crossing on up: leaves at send " + Readable.time(C / A * (1 - 7.0 / 7.2))
+                        + " (sender's clock)",
+                "first tuning-high crossing on up: enters at send " + Readable.time(C / A * (1 - 7.15 / 7.2))
+                        + " (sender's clock)",
+                "first horizon crossing on up: leaves at send " + Readable.time(C / A) + " (sender's clock)"), lines);
     }
 
     @Test
