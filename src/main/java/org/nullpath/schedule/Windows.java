@@ -28,6 +28,12 @@ import org.nullpath.worldline.Worldline;
  * {@value #EDGE_RELATIVE_ACCURACY} in the send clock, and the horizon edge is exact. Approaching a
  * horizon the margin always collapses (D -> 0, the distance -> infinity); when it does so only within
  * {@value #HORIZON_SNAP} (relative) of the horizon, the window is reported as closed by the horizon.
+ *
+ * <p>{@link #survey} also gives each window's open time on both clocks and its volumes (the planned rate
+ * times the send-side time; the highest closing rate integrated by {@link Quadrature} to
+ * {@value #VOLUME_RELATIVE_ACCURACY} estimated, 1e-6 promised), and every limit's own crossings, from the same
+ * samples and the same solve: the tuning condition split into its low and high edges. All of it is per
+ * scanned range and per window, never per message.
  */
 public final class Windows {
     /** Evenly spaced samples used to bracket edges. */
