@@ -13,12 +13,12 @@ import org.nullpath.mission.Craft;
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Printable;
 import org.nullpath.mission.Mission;
+import org.nullpath.schedule.CrossingRow;
 import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkTally;
-import org.nullpath.schedule.CrossingRow;
 import org.nullpath.schedule.WindowFigures;
 
 /** The few lines {@code plan} prints when it is done. */

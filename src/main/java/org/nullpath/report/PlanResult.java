@@ -2,11 +2,11 @@ package org.nullpath.report;
 
 import java.util.List;
 
+import org.nullpath.schedule.CrossingRow;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkTally;
-import org.nullpath.schedule.CrossingRow;
 import org.nullpath.schedule.WindowFigures;
 
 /**

@@ -11,12 +11,12 @@ import org.nullpath.link.Budget.Reception.Coherent;
 import org.nullpath.link.Budget.Reception.PhotonCounting;
 import org.nullpath.link.Directions;
 import org.nullpath.link.LinkTerms;
+import org.nullpath.schedule.CrossingRow;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.ExchangeRow;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.MessageRow;
 import org.nullpath.schedule.MessageRow.Delivery;
-import org.nullpath.schedule.CrossingRow;
 import org.nullpath.schedule.WindowFigures;
 
 /**

@@ -45,25 +45,34 @@ class CrossingsAndVolumesTest {
     static final double RATE = 1000;
 
     private static String uplink(String receiverExtras, String window) {
+        return scenario("{}", "home", "probe", "40 dBi", receiverExtras, window);
+    }
+
+    /**
+     * Station {@code home} at {@code stationBody} and the craft {@code probe} burning from rest at the origin,
+     * one link {@code up} between them (1 GW, 70 dBi sending, 300 K receiving 1 kbit/s, 2.5 dB required), one scan.
+     */
+    private static String scenario(String stationBody, String from, String to, String rxGain, String receiverExtras,
+                                   String window) {
         return ScenarioText.titled("crossings check")
-                .station("home", "{}")
+                .station("home", stationBody)
                 .craft("probe", "heading: [1, 0, 0]", "burn: {acceleration: 0.5 g0, duration: forever}")
                 .then("""
                 links:
                   up:
-                    from: home
-                    to: probe
+                    from: %s
+                    to: %s
                     carrier: 7.2 GHz
                     transmitter: {power: 1 GW, antenna: {gain: 70 dBi}}
                     receiver:
-                      antenna: {gain: 40 dBi}
+                      antenna: {gain: %s}
                       noise-temperature: 300 K
                 %s
                     data-rate: 1 kbit/s
                     required-eb-n0: 2.5 dB
                 windows:
                   - %s
-                """.formatted(receiverExtras, window))
+                """.formatted(from, to, rxGain, receiverExtras, window))
                 .yaml();
     }
 
@@ -180,26 +189,9 @@ class CrossingsAndVolumesTest {
 
     @Test
     void anOffLineDownlinkWindowIsOpenOnTheReceiverClockForTheReferenceArrivalsInterval() throws ScenarioException {
-        String yaml = ScenarioText.titled("off-line crossings check")
-                .station("aside", "{position: [0.3 ly, 0.2 ly, 0 ly]}")
-                .craft("probe", "heading: [1, 0, 0]", "burn: {acceleration: 0.5 g0, duration: forever}")
-                .then("""
-                links:
-                  down:
-                    from: probe
-                    to: aside
-                    carrier: 7.2 GHz
-                    transmitter: {power: 1 GW, antenna: {gain: 70 dBi}}
-                    receiver:
-                      antenna: {gain: 70 dBi}
-                      noise-temperature: 300 K
-                      tuning-range: [6.5 GHz, 7.1 GHz]
-                    data-rate: 1 kbit/s
-                    required-eb-n0: 2.5 dB
-                windows:
-                  - {link: down, from: 1 d, to: 400 d}
-                """)
-                .yaml();
+        // the station off the flight line receives from the craft
+        String yaml = scenario("{position: [0.3 ly, 0.2 ly, 0 ly]}", "probe", "home", "70 dBi",
+                "      tuning-range: [6.5 GHz, 7.1 GHz]", "{link: up, from: 1 d, to: 400 d}");
         WindowSurvey s = survey(yaml);
         assertEquals(1, s.windows().size(), s.windows()::toString);
         WindowFigures w = s.windows().get(0);
