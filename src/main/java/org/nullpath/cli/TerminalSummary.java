@@ -1,5 +1,6 @@
 package org.nullpath.cli;
 
+import java.util.Comparator;
 import java.util.Locale;
 import java.io.PrintWriter;
 import java.nio.file.Path;
@@ -12,15 +13,19 @@ import org.nullpath.mission.Craft;
 import org.nullpath.mission.Link;
 import org.nullpath.mission.Printable;
 import org.nullpath.mission.Mission;
+import org.nullpath.schedule.CrossingRow;
 import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.BudgetTally;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkTally;
-import org.nullpath.schedule.WindowRow;
+import org.nullpath.schedule.WindowFigures;
 
 /** The few lines {@code plan} prints when it is done. */
 final class TerminalSummary {
+    /** The limits of crossings.csv, in the order their first crossings are named. */
+    private static final String[] LIMITS = {"margin", "tuning-low", "tuning-high", "doppler-rate", "horizon"};
+
     private TerminalSummary() {
     }
 
@@ -89,9 +94,18 @@ final class TerminalSummary {
                 worstLink = t.link().name();
             }
         }
-        for (WindowRow w : r.windows()) {
+        for (WindowFigures w : r.windows()) {
             out.printf(Locale.ROOT, "  window on %-10s sends from %s to %s (sender's clock), closed by %s%n", w.link(),
                     Readable.notBefore(w.opensClock()), Readable.notAfter(w.closesClock()), w.closedBy());
+        }
+        for (Link link : s.links().values()) {
+            for (String limit : LIMITS) {
+                r.crossings().stream()
+                        .filter(x -> x.link().equals(link.name()) && x.limit().equals(limit))
+                        .min(Comparator.comparingDouble(CrossingRow::sendClock))
+                        .ifPresent(x -> out.printf(Locale.ROOT, "  first %s crossing on %s: %s at send %s (sender's"
+                                + " clock)%n", x.limit(), x.link(), x.direction(), Readable.time(x.sendClock())));
+            }
         }
         if (worstLink == null) {
             out.printf(Locale.ROOT, "  worst margin: no link budget terms in this scenario%n");

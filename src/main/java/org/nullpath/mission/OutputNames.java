@@ -13,11 +13,12 @@ public final class OutputNames {
     public static final String CUTOFFS = "cutoffs.csv";
     public static final String HORIZONS = "horizons.csv";
     public static final String WINDOWS = "windows.csv";
+    public static final String CROSSINGS = "crossings.csv";
     public static final String REPORT = "report.html";
     public static final String SUMMARY = "summary.json";
 
     /** Every file name a plan may write that does not come from a scenario name. */
-    public static final List<String> FIXED = List.of(CUTOFFS, HORIZONS, WINDOWS, REPORT, SUMMARY);
+    public static final List<String> FIXED = List.of(CUTOFFS, HORIZONS, WINDOWS, CROSSINGS, REPORT, SUMMARY);
 
     /** What an exchange's file name starts with. */
     public static final String EXCHANGE_PREFIX = "exchanges-";

@@ -10,6 +10,7 @@ import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
 import org.nullpath.mission.OutputNames;
 import org.nullpath.mission.WindowScan;
+import org.nullpath.schedule.CrossingRow;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.Deadlines;
 import org.nullpath.schedule.ExchangeTally;
@@ -17,14 +18,15 @@ import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkSchedule;
 import org.nullpath.schedule.LinkTally;
 import org.nullpath.schedule.MessageRow;
-import org.nullpath.schedule.WindowRow;
-import org.nullpath.schedule.Workers;
+import org.nullpath.schedule.WindowFigures;
+import org.nullpath.schedule.WindowSurvey;
 import org.nullpath.schedule.Windows;
+import org.nullpath.schedule.Workers;
 
 /**
  * Runs a mission's schedules and writes every output file into an {@link OutputFolder}, walking
  * {@link #FILES}: one CSV per link (streamed row by row), cutoffs.csv, horizons.csv, one CSV per exchange
- * plan, windows.csv, report.html (unless asked not to) and summary.json, last, listing them all.
+ * plan, windows.csv and crossings.csv, report.html (unless asked not to) and summary.json, last, listing them all.
  */
 public final class PlanOutput {
     private PlanOutput() {
@@ -58,6 +60,8 @@ public final class PlanOutput {
                     + " exchange", PlanOutput::exchanges),
             new OutputFile(OutputNames.WINDOWS, "the send-clock intervals in which a link closes (when the"
                     + " scenario scans for windows)", PlanOutput::windows),
+            new OutputFile(OutputNames.CROSSINGS, "every limit's own crossings in each scanned window range (with"
+                    + " windows.csv)", PlanOutput::crossings),
             new OutputFile(OutputNames.REPORT, "a self-contained page for reading: spacetime diagram, charts,"
                     + " tables, the scenario as read (unless --no-report)", PlanOutput::report),
             new OutputFile(OutputNames.SUMMARY, "counts, extremes, horizons, cut-offs, windows and the list of"
@@ -74,7 +78,8 @@ public final class PlanOutput {
         private final List<ExchangeTally> exchanges = new ArrayList<>();
         private final List<CutoffRow> cutoffs = new ArrayList<>();
         private final List<HorizonRow> horizons = new ArrayList<>();
-        private final List<WindowRow> windows = new ArrayList<>();
+        private final List<WindowFigures> windows = new ArrayList<>();
+        private final List<CrossingRow> crossings = new ArrayList<>();
 
         Run(Mission mission, OutputFolder out, boolean report, PrintWriter warnings, Workers workers) {
             this.mission = mission;
@@ -85,7 +90,7 @@ public final class PlanOutput {
         }
 
         PlanResult result() {
-            return new PlanResult(links, exchanges, cutoffs, horizons, windows);
+            return new PlanResult(links, exchanges, cutoffs, horizons, windows, crossings);
         }
     }
 
@@ -141,10 +146,19 @@ public final class PlanOutput {
 
     private static void windows(Run run) throws IOException {
         for (WindowScan w : run.mission.windows()) {
-            run.windows.addAll(Windows.scan(w));
+            WindowSurvey survey = Windows.survey(w);
+            run.windows.addAll(survey.windows());
+            run.crossings.addAll(survey.crossings());
         }
         if (!run.mission.windows().isEmpty()) {
             Tables.WINDOWS.write(run.out.file(OutputNames.WINDOWS), run.windows);
+        }
+    }
+
+    /** The crossings found by the window scans (computed with them, in {@link #windows(Run)}). */
+    private static void crossings(Run run) throws IOException {
+        if (!run.mission.windows().isEmpty()) {
+            Tables.CROSSINGS.write(run.out.file(OutputNames.CROSSINGS), run.crossings);
         }
     }
 

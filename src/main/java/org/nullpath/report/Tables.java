@@ -11,12 +11,13 @@ import org.nullpath.link.Budget.Reception.Coherent;
 import org.nullpath.link.Budget.Reception.PhotonCounting;
 import org.nullpath.link.Directions;
 import org.nullpath.link.LinkTerms;
+import org.nullpath.schedule.CrossingRow;
 import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.ExchangeRow;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.MessageRow;
 import org.nullpath.schedule.MessageRow.Delivery;
-import org.nullpath.schedule.WindowRow;
+import org.nullpath.schedule.WindowFigures;
 
 /**
  * The columns of every CSV file a plan writes (docs/output-files.md lists the same columns; a test keeps
@@ -197,12 +198,34 @@ public final class Tables {
                     r -> r.complete() ? "complete" : "never")));
 
     /** The columns of windows.csv. */
-    public static final Table<WindowRow> WINDOWS = new Table<>(List.of(
-            Column.text("link", "the link", WindowRow::link),
-            Column.number("opens_send_clock_s", "s", "sender's clock where the window opens", WindowRow::opensClock),
-            Column.number("closes_send_clock_s", "s", "sender's clock where it closes", WindowRow::closesClock),
+    public static final Table<WindowFigures> WINDOWS = new Table<>(List.of(
+            Column.text("link", "the link", WindowFigures::link),
+            Column.number("opens_send_clock_s", "s", "sender's clock where the window opens", WindowFigures::opensClock),
+            Column.number("closes_send_clock_s", "s", "sender's clock where it closes", WindowFigures::closesClock),
             Column.text("closed_by", "what closes it: `margin`, `tuning`, `doppler-rate`, `horizon`, or `end` (of"
-                    + " the scanned range)", WindowRow::closedBy)));
+                    + " the scanned range)", WindowFigures::closedBy),
+            Column.number("send_open_s", "s", "how long it is open on the sender's clock: closes - opens",
+                    WindowFigures::sendOpenSeconds),
+            Column.number("receive_open_s", "s", "the arrivals of its first and last sends, their interval on the"
+                    + " receiver's clock (Doppler stretches it against send_open_s); empty when it closes at the"
+                    + " horizon (the last send never arrives)", WindowFigures::receiveOpenSeconds),
+            Column.number("volume_bits", "bit", "the planned data rate times send_open_s",
+                    WindowFigures::volumeBits),
+            Column.number("adaptive_volume_bits", "bit", "the integral of max_data_rate_bps over the window on the"
+                    + " sender's clock (adaptive quadrature, 1e-6 relative): what a rate following the highest"
+                    + " closing rate would carry", WindowFigures::adaptiveVolumeBits)));
+
+    /** The columns of crossings.csv. */
+    public static final Table<CrossingRow> CROSSINGS = new Table<>(List.of(
+            Column.text("link", "the link", CrossingRow::link),
+            Column.text("limit", "`margin`, `tuning-low`, `tuning-high`, `doppler-rate` or `horizon`",
+                    CrossingRow::limit),
+            Column.text("direction", "`enters` (the condition starts to hold as the send clock increases) or"
+                    + " `leaves`", CrossingRow::direction),
+            Column.number("send_clock_s", "s", "sender's clock at the crossing", CrossingRow::sendClock),
+            Column.number("send_time_s", "s", "mission time of that send", CrossingRow::sendTime),
+            Column.number("receive_clock_s", "s", "receiver's clock at its arrival; empty for the horizon (it never"
+                    + " arrives)", CrossingRow::receiveClock)));
 
     private static Column<MessageRow> delivered(String name, String unit, String meaning,
                                                 ToDoubleFunction<Delivery> value) {
