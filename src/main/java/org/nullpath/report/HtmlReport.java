@@ -21,7 +21,7 @@ import org.nullpath.schedule.ExchangeTally;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkTally;
 import org.nullpath.schedule.SampledSeries;
-import org.nullpath.schedule.WindowRow;
+import org.nullpath.schedule.CrossingRow;
 
 /**
  * report.html: one self-contained page (inline CSS and SVG, no scripts, nothing fetched) with the
@@ -172,7 +172,8 @@ public final class HtmlReport {
                         .append("</section>\n");
                 continue;
             }
-            for (LinkCharts.Plot p : LinkCharts.of(ls, t.maxLightTime())) {
+            List<CrossingRow> crossed = r.crossings().stream().filter(c -> c.link().equals(ls.link())).toList();
+            for (LinkCharts.Plot p : LinkCharts.of(ls, t.maxLightTime(), crossed)) {
                 h.append("<figure id=\"fig-").append(id).append('-').append(p.name()).append("\">\n<h4>")
                         .append(Html.escape(p.heading())).append("</h4>\n").append(p.figure().svg())
                         .append("\n<figcaption><p>").append(Html.escape(p.caption())).append("</p>\n");
@@ -276,6 +277,14 @@ public final class HtmlReport {
         return timeCell(seconds, Readable::notBefore);
     }
 
+    /** A data volume, SI-prefixed for reading, the exact bits on hover. */
+    private static String volume(double bits) {
+        if (Double.isNaN(bits)) {
+            return "<td class=\"none\">\u2014</td>";
+        }
+        return "<td title=\"" + Cells.num(bits) + " bit\">" + Html.escape(Readable.volume(bits)) + "</td>";
+    }
+
     private static String cell(String text) {
         return "<td>" + Html.escape(text) + "</td>";
     }
@@ -338,8 +347,11 @@ public final class HtmlReport {
                 new Shown<>("link", w -> cell(w.link())),
                 new Shown<>("opens (sender's clock)", w -> earliest(w.opensClock())),
                 new Shown<>("closes (sender's clock)", w -> latest(w.closesClock())),
-                new Shown<>("length", w -> time(w.closesClock() - w.opensClock())),
-                new Shown<>("closed by", w -> cell(w.closedBy()))));
+                new Shown<>("open (sender's clock)", w -> time(w.sendOpenSeconds())),
+                new Shown<>("open (receiver's clock)", w -> time(w.receiveOpenSeconds())),
+                new Shown<>("closed by", w -> cell(w.closedBy())),
+                new Shown<>("data at the planned rate", w -> volume(w.volumeBits())),
+                new Shown<>("data at the highest closing rate", w -> volume(w.adaptiveVolumeBits()))));
         table(h, "table-round-trips", "Round trips", "Query and reply exchanges; each round trip's time on the"
                 + " querier's clock is in its <code>exchanges-NAME.csv</code>.", "No query and reply exchanges are"
                 + " planned in this scenario.", r.exchanges(), List.of(

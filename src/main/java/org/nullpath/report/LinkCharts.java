@@ -6,6 +6,7 @@ import java.util.function.ToDoubleFunction;
 
 import org.nullpath.link.Budget;
 import org.nullpath.link.LinkTerms;
+import org.nullpath.schedule.CrossingRow;
 import org.nullpath.schedule.SampledSeries;
 
 /**
@@ -35,15 +36,17 @@ final class LinkCharts {
     }
 
     static List<Plot> of(SampledSeries.LinkSeries ls) {
-        return of(ls, Double.NaN);
+        return of(ls, Double.NaN, List.of());
     }
 
     /**
      * The charts of one link; {@code longestPlannedLightTime} (NaN when unknown) is marked on the light-time
      * chart when the samples run on towards the horizon past the planned messages, so that the chart and the
-     * link's facts (which count planned messages only) can be read together.
+     * link's facts (which count planned messages only) can be read together. The link's {@code crossings}
+     * (crossings.csv) are marked on the margin chart (margin) and the frequency chart (tuning-low, tuning-high)
+     * at their mission time of sending.
      */
-    static List<Plot> of(SampledSeries.LinkSeries ls, double longestPlannedLightTime) {
+    static List<Plot> of(SampledSeries.LinkSeries ls, double longestPlannedLightTime, List<CrossingRow> crossings) {
         List<Plot> out = new ArrayList<>();
         List<SampledSeries.Sample> samples = ls.samples();
         if (samples.isEmpty()) {
@@ -186,7 +189,8 @@ final class LinkCharts {
                 new Charts.YAxis("frequency (" + fu.symbol() + ")", false, false),
                 List.of(series("transmitted", Palette.VERMILLION, Charts.Dash.DASHED, x1, x2, scaled(tx, fu)),
                         series("received", Palette.BLUE, Charts.Dash.SOLID, x1, x2, scaled(rx, fu))),
-                horizonMark, band, List.of(), with(fKey, horizonKey), x1Label, x2Label));
+                withMarks(horizonMark, crossings, tSend, "tuning-low", "tuning-high"), band, List.of(),
+                withKey(with(fKey, horizonKey), crossings, "tuning-low", "tuning-high"), x1Label, x2Label));
 
         // margin
         double[] margin = budgetColumn(samples, Budget::marginDb);
@@ -195,11 +199,12 @@ final class LinkCharts {
                 (photons ? "Received photons per bit over the required number, in dB." : "Eb/N0 over the required"
                         + " Eb/N0, in dB.") + " The link closes where the margin is at or above 0 dB.",
                 new Charts.YAxis("margin (dB)", false, false),
-                List.of(series("margin", Palette.BLUE, Charts.Dash.SOLID, x1, x2, margin)), horizonMark, null,
+                List.of(series("margin", Palette.BLUE, Charts.Dash.SOLID, x1, x2, margin)),
+                withMarks(horizonMark, crossings, tSend, "margin"), null,
                 List.of(new Charts.Level(0, "0 dB", Palette.BLACK, Charts.Dash.DASHED)),
-                with(List.of(Charts.Key.line("margin", Palette.BLUE, Charts.Dash.SOLID),
+                withKey(with(List.of(Charts.Key.line("margin", Palette.BLUE, Charts.Dash.SOLID),
                         Charts.Key.line("0 dB: closes at and above", Palette.BLACK, Charts.Dash.DASHED)), horizonKey),
-                x1Label, x2Label));
+                        crossings, "margin"), x1Label, x2Label));
 
         // highest data rate that closes
         double[] rate = budgetColumn(samples, Budget::maxDataRateBps);
@@ -283,6 +288,26 @@ final class LinkCharts {
                 new Charts.Panel(x2Label, right, List.of())), band, levels, key);
         return new Plot(name, heading, caption + " Left: against mission time at sending; right: against the"
                 + " receiver's clock at arrival.", f);
+    }
+
+    /** {@code marks} and a mark at each crossing of one of {@code limits}, at its mission time of sending. */
+    private static List<Charts.Mark> withMarks(List<Charts.Mark> marks, List<CrossingRow> crossings, Scales.Unit t,
+                                               String... limits) {
+        List<Charts.Mark> out = new ArrayList<>(marks);
+        for (CrossingRow c : crossings) {
+            if (List.of(limits).contains(c.limit())) {
+                out.add(new Charts.Mark(t.of(c.sendTime()), c.limit() + " " + c.direction(), Palette.GREEN,
+                        Charts.Dash.DASHED));
+            }
+        }
+        return out;
+    }
+
+    /** {@code key} with the crossings' entry when one of {@code limits} is crossed. */
+    private static List<Charts.Key> withKey(List<Charts.Key> key, List<CrossingRow> crossings, String... limits) {
+        boolean any = crossings.stream().anyMatch(c -> List.of(limits).contains(c.limit()));
+        return any ? with(key, List.of(Charts.Key.line("crossing of " + String.join(" or ", limits)
+                + " (crossings.csv; sending, mission time)", Palette.GREEN, Charts.Dash.DASHED))) : key;
     }
 
     private static List<Charts.Key> with(List<Charts.Key> a, List<Charts.Key> b) {

@@ -135,6 +135,21 @@ public final class Readable {
         return String.format(Locale.ROOT, "%.7g", u.of(hz)) + " " + u.symbol();
     }
 
+    /** A data volume in the SI-prefixed unit that puts it below 1000, 4 significant digits: "12.35 Mbit". */
+    public static String volume(double bits) {
+        if (Double.isNaN(bits)) {
+            return "-";
+        }
+        String[] units = {"bit", "kbit", "Mbit", "Gbit", "Tbit", "Pbit", "Ebit"};
+        int i = 0;
+        double v = bits;
+        while (Math.abs(v) >= 1000 && i < units.length - 1) {
+            v /= 1000;
+            i++;
+        }
+        return String.format(Locale.ROOT, "%.4g", v) + " " + units[i];
+    }
+
     /** "lark", "lark and wren", "lark, wren and tern". */
     public static String names(List<String> names) {
         if (names.size() <= 1) {

@@ -26,7 +26,7 @@ class ChartsAgreeWithFactsTest {
         LinkTally t = LinkSchedule.run(m, up.route(), row -> { });
         double sampledLongest = up.samples().stream().mapToDouble(SampledSeries.Sample::lightTime).max().orElseThrow();
         assertTrue(sampledLongest > t.maxLightTime(), "the samples reach past the planned messages");
-        List<LinkCharts.Plot> plots = LinkCharts.of(up, t.maxLightTime());
+        List<LinkCharts.Plot> plots = LinkCharts.of(up, t.maxLightTime(), List.of());
         LinkCharts.Plot light = plots.get(0);
         assertEquals("light-time", light.name());
         assertTrue(light.caption().contains("past the last planned message"), light.caption());
