@@ -16,7 +16,6 @@ import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.nullpath.cli.Main;
-import org.nullpath.testkit.ScenarioText;
 
 /**
  * Spark is loaded for {@code sweep --spark} only, and then logs quietly. Each case runs nullpath's Main in a
@@ -32,12 +31,7 @@ class SparkOnlyWhenAskedTest {
 
     @BeforeEach
     void files() throws IOException {
-        Files.writeString(tmp.resolve("base.yaml"), ScenarioText.titled("Loading").station("yard", "{}")
-                .craft("skua", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: 60 d}",
-                        "coast: {duration: forever}")
-                .link("up", "yard", "skua")
-                .message("{link: up, first: 0 d, last: 100 d, every: 10 d}")
-                .yaml());
+        SkuaBase.write(tmp, "Loading");
         sweep = tmp.resolve("study.yaml");
         Files.writeString(sweep, """
                 scenario: base.yaml

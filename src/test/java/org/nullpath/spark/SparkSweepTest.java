@@ -11,7 +11,6 @@ import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import org.nullpath.testkit.PlanRun;
-import org.nullpath.testkit.ScenarioText;
 
 /**
  * {@code sweep --spark local[2]}: the same bytes as the in-process run with one thread, for a grid with random
@@ -24,12 +23,7 @@ class SparkSweepTest {
 
     @Test
     void localSparkWritesTheSameBytesAsOneThread() throws IOException {
-        Files.writeString(tmp.resolve("base.yaml"), ScenarioText.titled("Spark base").station("yard", "{}")
-                .craft("skua", "heading: [1, 0, 0]", "burn: {acceleration: 1 g0, duration: 60 d}",
-                        "coast: {duration: forever}")
-                .link("up", "yard", "skua")
-                .message("{link: up, first: 0 d, last: 100 d, every: 10 d}")
-                .yaml());
+        SkuaBase.write(tmp, "Spark base");
         Path sweep = tmp.resolve("study.yaml");
         Files.writeString(sweep, """
                 scenario: base.yaml
