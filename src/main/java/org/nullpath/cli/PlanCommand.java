@@ -7,7 +7,6 @@ import java.nio.file.Path;
 import java.util.Optional;
 import java.util.concurrent.Callable;
 
-import org.nullpath.report.HtmlReport;
 import org.nullpath.report.OutputFolder;
 import org.nullpath.report.PlanOutput;
 import org.nullpath.report.PlanResult;
@@ -44,9 +43,6 @@ final class PlanCommand implements Callable<Integer> {
         } catch (OutputFolder.Refused e) {
             err.println("nullpath: --out: " + e.getMessage());
             return Main.INPUT_ERROR;
-        }
-        if (!noReport) {
-            HtmlReport.warmUp(); // the chart library loads while the scenario is read and planned
         }
         Optional<Mission> loaded = input.load();
         if (loaded.isEmpty()) {

@@ -40,26 +40,6 @@ public final class HtmlReport {
     private HtmlReport() {
     }
 
-    /**
-     * Starts loading the chart library and the fonts on a background thread, so that this start-up work, about
-     * half a second of one core, overlaps with reading the scenario and computing the plan instead of following
-     * them. It draws one small chart and throws it away; nothing it does reaches a file, and a failure (a Java
-     * without usable fonts) is left for {@link #write} to meet and report.
-     */
-    public static void warmUp() {
-        Thread t = new Thread(() -> {
-            try {
-                Charts.single("warm-up", "warm-up", "x", "y", List.of(new Charts.Line("line", Palette.BLUE,
-                        Charts.Dash.SOLID, 2f, new double[] {0, 1}, new double[] {0, 1})), List.of(), List.of(), 200, 100);
-            } catch (Throwable e) {
-                // write() meets the same problem and says so
-            }
-        }, "nullpath-report-warm-up");
-        t.setDaemon(true);
-        t.setPriority(Thread.MIN_PRIORITY);
-        t.start();
-    }
-
     /** Writes the report of a finished plan to {@code file}. */
     public static void write(Path file, Mission s, PlanResult result) throws IOException {
         Files.writeString(file, render(s, result), StandardCharsets.UTF_8);
