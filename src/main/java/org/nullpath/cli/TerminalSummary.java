@@ -23,6 +23,14 @@ import org.nullpath.schedule.WindowFigures;
 
 /** The few lines {@code plan} prints when it is done. */
 final class TerminalSummary {
+    /**
+     * A crossing's send clock for reading, rounded in the safe direction like a cut-off: a limit that is left
+     * (the last send that still meets it) toward earlier, one that is entered toward later.
+     */
+    private static String shown(CrossingRow x) {
+        return x.direction().equals("leaves") ? Readable.notAfter(x.sendClock()) : Readable.notBefore(x.sendClock());
+    }
+
     /** The limits of crossings.csv, in the order their first crossings are named. */
     private static final String[] LIMITS = {"margin", "tuning-low", "tuning-high", "doppler-rate", "horizon"};
 
@@ -104,7 +112,7 @@ final class TerminalSummary {
                         .filter(x -> x.link().equals(link.name()) && x.limit().equals(limit))
                         .min(Comparator.comparingDouble(CrossingRow::sendClock))
                         .ifPresent(x -> out.printf(Locale.ROOT, "  first %s crossing on %s: %s at send %s (sender's"
-                                + " clock)%n", x.limit(), x.link(), x.direction(), Readable.time(x.sendClock())));
+                                + " clock)%n", x.limit(), x.link(), x.direction(), shown(x)));
             }
         }
         if (worstLink == null) {

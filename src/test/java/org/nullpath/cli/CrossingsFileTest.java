@@ -91,12 +91,15 @@ class CrossingsFileTest {
         double margin = PlanRun.csv(tmp.resolve("said").resolve("crossings.csv")).stream()
                 .filter(r -> r.get("limit").equals("margin")).mapToDouble(r -> Double.parseDouble(r.get("send_clock_s")))
                 .findFirst().orElseThrow();
-        assertEquals(List.of("first margin crossing on up: leaves at send " + Readable.time(margin) + " (sender's clock)",
-                "first tuning-low crossing on up: leaves at send " + Readable.time(C / A * (1 - 7.0 / 7.2))
+        // shown rounded in the safe direction, as cut-offs are: a limit left toward earlier, one entered toward later
+        assertEquals(List.of("first margin crossing on up: leaves at send " + Readable.notAfter(margin)
                         + " (sender's clock)",
-                "first tuning-high crossing on up: enters at send " + Readable.time(C / A * (1 - 7.15 / 7.2))
+                "first tuning-low crossing on up: leaves at send " + Readable.notAfter(C / A * (1 - 7.0 / 7.2))
                         + " (sender's clock)",
-                "first horizon crossing on up: leaves at send " + Readable.time(C / A) + " (sender's clock)"), lines);
+                "first tuning-high crossing on up: enters at send " + Readable.notBefore(C / A * (1 - 7.15 / 7.2))
+                        + " (sender's clock)",
+                "first horizon crossing on up: leaves at send " + Readable.notAfter(C / A) + " (sender's clock)"),
+                lines);
     }
 
     @Test
