@@ -95,16 +95,18 @@ public final class Windows {
         LinkTerms terms = link.terms().orElseThrow();
         // an offset formed from the two edges themselves; both carry the 1e-12 of the edge solve
         double sendOpen = r.closesClock() - r.opensClock();
-        SignalPath first = LinkSchedule.evaluate(link, r.opensClock()).path();
-        SignalPath last = LinkSchedule.evaluate(link, r.closesClock()).path();
+        LinkSchedule.Evaluated opens = LinkSchedule.evaluate(link, r.opensClock());
+        LinkSchedule.Evaluated closes = LinkSchedule.evaluate(link, r.closesClock());
+        SignalPath first = opens.path();
+        SignalPath last = closes.path();
         double receiveOpen = first.delivered() && last.delivered()
                 ? LinkSchedule.arrivalInterval(link.sender(), link.receiver(), first, last)
                 : Double.NaN;
         double volume = terms.dataRateBps() * sendOpen;
         // where an edge's message arrives with no finite highest rate (sender and receiver at one place, the
         // far-field rate growing as 1 / distance^2) the integral diverges: no value rather than noise
-        boolean bounded = (!first.delivered() || Double.isFinite(maxDataRate(link, r.opensClock())))
-                && (!last.delivered() || Double.isFinite(maxDataRate(link, r.closesClock())));
+        boolean bounded = (!first.delivered() || Double.isFinite(maxDataRate(opens)))
+                && (!last.delivered() || Double.isFinite(maxDataRate(closes)));
         double adaptive = bounded
                 ? Quadrature.integrate(clock -> maxDataRate(link, clock), r.opensClock(), r.closesClock(),
                         VOLUME_RELATIVE_ACCURACY)
@@ -113,7 +115,10 @@ public final class Windows {
     }
 
     private static double maxDataRate(Link link, double clock) {
-        LinkSchedule.Evaluated ev = LinkSchedule.evaluate(link, clock);
+        return maxDataRate(LinkSchedule.evaluate(link, clock));
+    }
+
+    private static double maxDataRate(LinkSchedule.Evaluated ev) {
         return ev.arrival().flatMap(LinkSchedule.Arrival::budget).map(Budget::maxDataRateBps).orElse(Double.NaN);
     }
 
