@@ -81,10 +81,10 @@ public record Column<R>(String name, String unit, String meaning, Function<R, Ob
      * return) is written behind an apostrophe, the usual guard; nullpath's own names never start so.
      */
     public String cell(R row) {
-        return cellOf(value.apply(row));
+        return cellOf(value.apply(row), name);
     }
 
-    private String cellOf(Object v) {
+    private static String cellOf(Object v, String name) {
         if (v instanceof Double d) {
             if (Double.isInfinite(d)) {
                 throw new IllegalStateException("an infinite value reached column " + name);
@@ -100,18 +100,15 @@ public record Column<R>(String name, String unit, String meaning, Function<R, Ob
         return v == null ? "" : v.toString();
     }
 
-    /** A value of any kind into a row's bytes, as {@link #cellOf} writes it and quoted by the RFC 4180 rule. */
+    /**
+     * A value of any kind into a row's bytes: a number unboxed (it never needs quotes), anything else as
+     * {@link #cellOf} writes it, quoted by the RFC 4180 rule.
+     */
     private static void any(RowBytes out, Object v, String name) {
         if (v instanceof Double d) {
             out.number(d, name);
-        } else if (v instanceof Long l) {
-            out.count(l);
-        } else if (v instanceof Boolean b) {
-            out.flag(b);
-        } else if (v instanceof String s) {
-            out.text(Cells.text(s));
-        } else if (v != null) {
-            out.text(v.toString());
+        } else {
+            out.text(cellOf(v, name));
         }
     }
 
