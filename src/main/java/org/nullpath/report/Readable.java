@@ -135,19 +135,13 @@ public final class Readable {
         return String.format(Locale.ROOT, "%.7g", u.of(hz)) + " " + u.symbol();
     }
 
-    /** A data volume in the SI-prefixed unit that puts it below 1000, 4 significant digits: "12.35 Mbit". */
+    /** A data volume in the SI-prefixed unit that puts it between 1 and 1000, 4 significant digits: "12.35 Mbit". */
     public static String volume(double bits) {
         if (Double.isNaN(bits)) {
             return "-";
         }
-        String[] units = {"bit", "kbit", "Mbit", "Gbit", "Tbit", "Pbit", "Ebit"};
-        int i = 0;
-        double v = bits;
-        while (Math.abs(v) >= 1000 && i < units.length - 1) {
-            v /= 1000;
-            i++;
-        }
-        return String.format(Locale.ROOT, "%.4g", v) + " " + units[i];
+        Scales.Unit u = Scales.volume(bits);
+        return String.format(Locale.ROOT, "%.4g", u.of(bits)) + " " + u.symbol();
     }
 
     /** "lark", "lark and wren", "lark, wren and tern". */

@@ -78,10 +78,22 @@ final class Scales {
         return pick(largestMetres, LENGTH);
     }
 
-    /** Frequency: the SI prefix that puts the value between 1 and 1000. */
+    private static final String[] HERTZ = {"Hz", "kHz", "MHz", "GHz", "THz", "PHz"};
+    private static final String[] BITS = {"bit", "kbit", "Mbit", "Gbit", "Tbit", "Pbit", "Ebit"};
+
+    /** Frequency: the SI prefix that puts the value between 1 and 1000 (up to PHz). */
     static Unit frequency(double typicalHz) {
-        double a = Math.abs(typicalHz);
-        String[] names = {"Hz", "kHz", "MHz", "GHz", "THz", "PHz"};
+        return prefixed(typicalHz, HERTZ);
+    }
+
+    /** A data volume: the SI prefix that puts the value between 1 and 1000 (up to Ebit). */
+    static Unit volume(double bits) {
+        return prefixed(bits, BITS);
+    }
+
+    /** The unit of {@code names} (powers of 1000, smallest first) that puts |value| between 1 and 1000. */
+    private static Unit prefixed(double value, String[] names) {
+        double a = Math.abs(value);
         int i = 0;
         while (i < names.length - 1 && a >= 1000 * Math.pow(1000, i)) {
             i++;
