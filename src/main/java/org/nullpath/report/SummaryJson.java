@@ -12,7 +12,6 @@ import java.util.TreeMap;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import org.nullpath.mission.Craft;
-import org.nullpath.mission.Link;
 import org.nullpath.mission.Mission;
 import org.nullpath.mission.Station;
 import org.nullpath.schedule.BudgetTally;
@@ -38,6 +37,44 @@ final class SummaryJson {
             Column.number("median_round_trip_clock_s", "s", "median of the complete round trips",
                     ExchangeTally::medianRoundTrip),
             Column.number("max_round_trip_clock_s", "s", "longest complete round trip", ExchangeTally::maxRoundTrip)));
+
+    /** Each link's entry: its counts and extremes (with link terms a {@code budget} entry follows). */
+    static final Table<LinkTally> LINKS = new Table<>(List.of(
+            Column.text("name", "the link's name", t -> t.link().name()),
+            Column.text("from", "the sender", t -> t.link().from().name()),
+            Column.text("to", "the receiver", t -> t.link().to().name()),
+            Column.count("messages", "messages planned", LinkTally::messages),
+            Column.count("delivered", "messages that arrive", LinkTally::delivered),
+            Column.count("never", "messages beyond the horizon", LinkTally::never),
+            Column.number("min_doppler", "", "lowest Doppler factor of the delivered messages", LinkTally::minDoppler),
+            Column.number("max_doppler", "", "highest Doppler factor", LinkTally::maxDoppler),
+            Column.number("min_light_time_s", "s", "shortest light time", LinkTally::minLightTime),
+            Column.number("max_light_time_s", "s", "longest light time", LinkTally::maxLightTime),
+            Column.count("ill_conditioned_light_times", "messages whose light time is known to worse than 1e-12"
+                    + " relative", LinkTally::illConditioned)));
+
+    /** A link's {@code budget} entry, with link terms: the budget's extremes and counts over the delivered messages. */
+    static final Table<BudgetTally.Figures> BUDGETS = new Table<>(List.of(
+            Column.number("worst_margin_db", "dB", "lowest link margin", BudgetTally.Figures::worstMarginDb),
+            Column.number("best_margin_db", "dB", "highest link margin", BudgetTally.Figures::bestMarginDb),
+            Column.count("messages_closing", "messages that close (margin, tuning range and Doppler rate)",
+                    BudgetTally.Figures::closing),
+            Column.number("min_rx_frequency_hz", "Hz", "lowest received frequency (with the highest: the tuning"
+                    + " range a receiver needs)", BudgetTally.Figures::minRxFrequencyHz),
+            Column.number("max_rx_frequency_hz", "Hz", "highest received frequency",
+                    BudgetTally.Figures::maxRxFrequencyHz),
+            Column.number("max_abs_doppler_rate_hz_per_s", "Hz/s", "largest size of the Doppler rate",
+                    BudgetTally.Figures::maxAbsDopplerRateHzPerS),
+            Column.number("max_data_rate_closing_all_bps", "bit/s", "the highest sender-frame data rate that closes"
+                    + " for every delivered message", BudgetTally.Figures::minMaxDataRateBps),
+            Column.number("max_data_rate_closing_any_bps", "bit/s", "the highest sender-frame data rate that closes"
+                    + " for some delivered message", BudgetTally.Figures::maxMaxDataRateBps),
+            Column.count("outside_tuning_range", "messages received outside the tuning range",
+                    BudgetTally.Figures::outOfTuning),
+            Column.count("over_doppler_rate", "messages whose Doppler rate is over the receiver's limit",
+                    BudgetTally.Figures::overDopplerRate),
+            Column.flag("extreme_shift", "whether some message's received frequency lies outside [carrier / 2,"
+                    + " 2 carrier]", BudgetTally.Figures::extremeShift)));
 
     /**
      * Writes summary.json; {@code written} are the other files of the plan with their SHA-256 digests, so that
@@ -89,35 +126,8 @@ final class SummaryJson {
         root.put("craft", craft);
         List<Object> links = new ArrayList<>();
         for (LinkTally t : r.links()) {
-            Link l = t.link();
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("name", l.name());
-            m.put("from", l.from().name());
-            m.put("to", l.to().name());
-            m.put("messages", t.messages());
-            m.put("delivered", t.delivered());
-            m.put("never", t.never());
-            m.put("min_doppler", nan(t.minDoppler()));
-            m.put("max_doppler", nan(t.maxDoppler()));
-            m.put("min_light_time_s", nan(t.minLightTime()));
-            m.put("max_light_time_s", nan(t.maxLightTime()));
-            m.put("ill_conditioned_light_times", t.illConditioned());
-            if (t.budget().isPresent()) {
-                BudgetTally.Figures b = t.budget().get();
-                Map<String, Object> bm = new LinkedHashMap<>();
-                bm.put("worst_margin_db", nan(b.worstMarginDb()));
-                bm.put("best_margin_db", nan(b.bestMarginDb()));
-                bm.put("messages_closing", b.closing());
-                bm.put("min_rx_frequency_hz", nan(b.minRxFrequencyHz()));
-                bm.put("max_rx_frequency_hz", nan(b.maxRxFrequencyHz()));
-                bm.put("max_abs_doppler_rate_hz_per_s", nan(b.maxAbsDopplerRateHzPerS()));
-                bm.put("max_data_rate_closing_all_bps", nan(b.minMaxDataRateBps()));
-                bm.put("max_data_rate_closing_any_bps", nan(b.maxMaxDataRateBps()));
-                bm.put("outside_tuning_range", b.outOfTuning());
-                bm.put("over_doppler_rate", b.overDopplerRate());
-                bm.put("extreme_shift", b.extremeShift());
-                m.put("budget", bm);
-            }
+            Map<String, Object> m = LINKS.json(t);
+            t.budget().ifPresent(b -> m.put("budget", BUDGETS.json(b)));
             links.add(m);
         }
         root.put("links", links);

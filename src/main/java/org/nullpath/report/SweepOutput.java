@@ -48,6 +48,16 @@ public final class SweepOutput {
         return new Table<>(c);
     }
 
+    /** Each figure's entry in sweep-summary.json. */
+    static final Table<Spread> SPREADS = new Table<>(List.of(
+            Column.count("points", "valid points with a value", Spread::points),
+            Column.number("min", "", "least value", Spread::min),
+            Column.number("max", "", "greatest value", Spread::max),
+            Column.number("mean", "", "mean (compensated summation)", Spread::mean),
+            Column.number("p5", "", "5th percentile", Spread::p5),
+            Column.number("p50", "", "median", Spread::p50),
+            Column.number("p95", "", "95th percentile", Spread::p95)));
+
     /**
      * The distribution of one figure over the valid points that have it: min, max, mean and the 5th, 50th and
      * 95th percentiles by linear interpolation between order statistics (Hyndman &amp; Fan's definition 7, the
@@ -97,22 +107,9 @@ public final class SweepOutput {
                 + " with a value");
         Map<String, Object> figures = new LinkedHashMap<>();
         for (int i = 0; i < names.size(); i++) {
-            Spread s = spreads.get(i);
-            Map<String, Object> m = new LinkedHashMap<>();
-            m.put("points", s.points());
-            m.put("min", json(s.min()));
-            m.put("max", json(s.max()));
-            m.put("mean", json(s.mean()));
-            m.put("p5", json(s.p5()));
-            m.put("p50", json(s.p50()));
-            m.put("p95", json(s.p95()));
-            figures.put(names.get(i), m);
+            figures.put(names.get(i), SPREADS.json(spreads.get(i)));
         }
         root.put("figures", figures);
         new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), root);
-    }
-
-    private static Object json(double x) {
-        return Double.isFinite(x) ? x : null;
     }
 }

@@ -35,13 +35,18 @@ public record Table<R>(List<Column<R>> columns) {
     public List<Map<String, Object>> json(Iterable<R> rows) {
         List<Map<String, Object>> out = new ArrayList<>();
         for (R r : rows) {
-            Map<String, Object> m = new LinkedHashMap<>();
-            for (Column<R> c : columns) {
-                m.put(c.name(), c.json(r));
-            }
-            out.add(m);
+            out.add(json(r));
         }
         return out;
+    }
+
+    /** One row as a JSON object: column name to value, in column order. */
+    public Map<String, Object> json(R row) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        for (Column<R> c : columns) {
+            m.put(c.name(), c.json(row));
+        }
+        return m;
     }
 
     /** Opens {@code file} and writes the header; rows follow with {@link Writer#write}. */

@@ -42,11 +42,22 @@ class OutputDocsTest {
         out.put("## `horizons.csv`", columns(Tables.horizons(Optional.of(Instant.EPOCH)).columns()));
         out.put("## `exchanges-<name>.csv`", columns(Tables.EXCHANGES.columns()));
         out.put("## `windows.csv`", columns(Tables.WINDOWS.columns()));
+        out.put("### Each link's entry in `summary.json`", keys(SummaryJson.LINKS.columns()));
+        out.put("### A link's `budget` entry", keys(SummaryJson.BUDGETS.columns()));
         return out;
     }
 
     private static String columns(List<? extends Column<?>> columns) {
-        StringBuilder b = new StringBuilder("| column | unit | meaning |\n|---|---|---|\n");
+        return table("column", columns);
+    }
+
+    /** A JSON object's keys, in the same layout. */
+    private static String keys(List<? extends Column<?>> columns) {
+        return table("key", columns);
+    }
+
+    private static String table(String first, List<? extends Column<?>> columns) {
+        StringBuilder b = new StringBuilder("| " + first + " | unit | meaning |\n|---|---|---|\n");
         for (Column<?> c : columns) {
             b.append("| `").append(c.name()).append("` | ").append(c.unit()).append(" | ").append(c.meaning())
                     .append(" |\n");
