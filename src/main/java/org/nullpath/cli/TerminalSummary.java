@@ -103,8 +103,8 @@ final class TerminalSummary {
             }
         }
         for (WindowFigures w : r.windows()) {
-            out.printf(Locale.ROOT, "  window on %-10s sends from %s to %s (sender's clock), closed by %s%n", w.link(),
-                    Readable.notBefore(w.opensClock()), Readable.notAfter(w.closesClock()), w.closedBy());
+            out.printf(Locale.ROOT, "  window on %-10s sends from %s to %s (sender's clock), closed by %s%n", w.window().link(),
+                    Readable.notBefore(w.window().opensClock()), Readable.notAfter(w.window().closesClock()), w.window().closedBy());
         }
         for (Link link : s.links().values()) {
             for (String limit : LIMITS) {

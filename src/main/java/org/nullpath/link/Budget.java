@@ -115,38 +115,6 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
         return kind.isInstance(reception) ? Optional.of(kind.cast(reception)) : Optional.empty();
     }
 
-    public double txFrequencyHz() {
-        return frequency.txFrequencyHz();
-    }
-
-    public double rxFrequencyHz() {
-        return frequency.rxFrequencyHz();
-    }
-
-    public double dopplerRateHzPerS() {
-        return frequency.dopplerRateHzPerS();
-    }
-
-    public boolean inTuningRange() {
-        return frequency.inTuningRange();
-    }
-
-    public boolean withinDopplerRate() {
-        return frequency.withinDopplerRate();
-    }
-
-    public double rxPowerDbw() {
-        return reception.rxPowerDbw();
-    }
-
-    public double marginDb() {
-        return reception.marginDb();
-    }
-
-    public double maxDataRateBps() {
-        return reception.maxDataRateBps();
-    }
-
     /**
      * The first figure of this budget that is infinite, by its name: a frequency, rate or power beyond what a
      * double holds (about 1.8e308), which happens only at Doppler factors or accelerations far outside any
@@ -154,10 +122,11 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
      * absent (NaN).
      */
     public Optional<String> beyondDoubleRange() {
-        if (noneInfinite(rxFrequencyHz(), dopplerRateHzPerS(), rxDataRateBps, 0, 0)) {
+        if (noneInfinite(frequency.rxFrequencyHz(), frequency.dopplerRateHzPerS(), rxDataRateBps, 0, 0)) {
             return reception.beyondDoubleRange();
         }
-        Optional<String> shared = firstInfinite("received frequency", rxFrequencyHz(), "Doppler rate", dopplerRateHzPerS(),
+        Optional<String> shared = firstInfinite("received frequency", frequency.rxFrequencyHz(), "Doppler rate",
+                frequency.dopplerRateHzPerS(),
                 "received data rate", rxDataRateBps);
         return shared.isPresent() ? shared : reception.beyondDoubleRange();
     }
@@ -186,6 +155,7 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
      * receiver being at one place), in the tuning range, within the rate limit.
      */
     public boolean closes() {
-        return (marginDb() >= 0 || Double.isNaN(marginDb())) && inTuningRange() && withinDopplerRate();
+        double margin = reception.marginDb();
+        return (margin >= 0 || Double.isNaN(margin)) && frequency.inTuningRange() && frequency.withinDopplerRate();
     }
 }

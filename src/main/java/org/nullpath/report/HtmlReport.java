@@ -324,12 +324,12 @@ public final class HtmlReport {
                 + " at or above 0 dB, inside the tuning range and within the Doppler-rate limit.", "No link window was"
                 + " found (or none was asked for): a window needs a <code>windows</code> entry on a link with link"
                 + " terms.", r.windows(), List.of(
-                new Shown<>("link", w -> cell(w.link())),
-                new Shown<>("opens (sender's clock)", w -> earliest(w.opensClock())),
-                new Shown<>("closes (sender's clock)", w -> latest(w.closesClock())),
+                new Shown<>("link", w -> cell(w.window().link())),
+                new Shown<>("opens (sender's clock)", w -> earliest(w.window().opensClock())),
+                new Shown<>("closes (sender's clock)", w -> latest(w.window().closesClock())),
                 new Shown<>("open (sender's clock)", w -> time(w.sendOpenSeconds())),
                 new Shown<>("open (receiver's clock)", w -> time(w.receiveOpenSeconds())),
-                new Shown<>("closed by", w -> cell(w.closedBy())),
+                new Shown<>("closed by", w -> cell(w.window().closedBy())),
                 new Shown<>("data at the planned rate", w -> volume(w.volumeBits())),
                 new Shown<>("data at the highest closing rate", w -> volume(w.adaptiveVolumeBits()))));
         table(h, "table-round-trips", "Round trips", "Query and reply exchanges; each round trip's time on the"

@@ -170,8 +170,8 @@ final class LinkCharts {
         }
         LinkTerms terms = ls.terms().get();
         // received (and transmitted) frequency with the tuning range
-        double[] rx = budgetColumn(samples, Budget::rxFrequencyHz);
-        double[] tx = budgetColumn(samples, Budget::txFrequencyHz);
+        double[] rx = budgetColumn(samples, b -> b.frequency().rxFrequencyHz());
+        double[] tx = budgetColumn(samples, b -> b.frequency().txFrequencyHz());
         Scales.Unit fu = Scales.frequency(terms.carrierHz());
         double[] band = terms.hasTuningRange() ? new double[] {fu.of(terms.tuningMinHz()), fu.of(terms.tuningMaxHz())}
                 : null;
@@ -193,7 +193,7 @@ final class LinkCharts {
                 withKey(with(fKey, horizonKey), crossings, "tuning-low", "tuning-high"), x1Label, x2Label));
 
         // margin
-        double[] margin = budgetColumn(samples, Budget::marginDb);
+        double[] margin = budgetColumn(samples, b -> b.reception().marginDb());
         boolean photons = terms.detection() == LinkTerms.Detection.PHOTON_COUNTING;
         out.add(plot(link, "margin", "Link margin",
                 (photons ? "Received photons per bit over the required number, in dB." : "Eb/N0 over the required"
@@ -207,7 +207,7 @@ final class LinkCharts {
                         crossings, "margin"), x1Label, x2Label));
 
         // highest data rate that closes
-        double[] rate = budgetColumn(samples, Budget::maxDataRateBps);
+        double[] rate = budgetColumn(samples, b -> b.reception().maxDataRateBps());
         Scales.Unit ru = Scales.dataRate(terms.dataRateBps());
         out.add(plot(link, "data-rate", "Highest data rate that closes",
                 "The highest sender-frame data rate that would close with zero margin, against the planned rate.",

@@ -51,21 +51,21 @@ public final class Tables {
             Delivery::lightTimeCondition);
 
     private static final Column<Budget> TX_FREQUENCY = Column.number("tx_frequency_hz", "Hz", "transmitted frequency"
-            + " (the carrier, or carrier / D when pre-compensating)", Budget::txFrequencyHz);
+            + " (the carrier, or carrier / D when pre-compensating)", b -> b.frequency().txFrequencyHz());
     private static final Column<Budget> RX_FREQUENCY = Column.number("rx_frequency_hz", "Hz", "received frequency",
-            Budget::rxFrequencyHz);
+            b -> b.frequency().rxFrequencyHz());
     private static final Column<Budget> DOPPLER_RATE = Column.number("doppler_rate_hz_per_s", "Hz/s",
-            "d(rx_frequency) / d(receiver clock)", Budget::dopplerRateHzPerS);
+            "d(rx_frequency) / d(receiver clock)", b -> b.frequency().dopplerRateHzPerS());
     private static final Column<Budget> IN_TUNING_RANGE = Column.flag("in_tuning_range", "whether the received"
-            + " frequency lies in the tuning range", Budget::inTuningRange);
+            + " frequency lies in the tuning range", b -> b.frequency().inTuningRange());
     private static final Column<Budget> RX_POWER = Column.number("rx_power_dbw", "dBW", "received power",
-            Budget::rxPowerDbw);
+            b -> b.reception().rxPowerDbw());
     private static final Column<Budget> RX_DATA_RATE = Column.number("rx_data_rate_bps", "bit/s", "data rate as"
             + " received, D x data-rate", Budget::rxDataRateBps);
     private static final Column<Budget> MAX_DATA_RATE = Column.number("max_data_rate_bps", "bit/s", "highest"
-            + " sender-frame data rate that closes with zero margin", Budget::maxDataRateBps);
+            + " sender-frame data rate that closes with zero margin", b -> b.reception().maxDataRateBps());
     private static final Column<Budget> WITHIN_DOPPLER_RATE = Column.flag("within_doppler_rate", "whether the Doppler"
-            + " rate's size is within max-doppler-rate (true when none is given)", Budget::withinDopplerRate);
+            + " rate's size is within max-doppler-rate (true when none is given)", b -> b.frequency().withinDopplerRate());
 
     /** The budget columns of a coherent (radio) link. */
     public static final List<Column<Budget>> COHERENT = budget(
@@ -84,7 +84,7 @@ public final class Tables {
      */
     private static List<Column<Budget>> budget(Column<Budget> density, Column<Budget> perBit, String marginMeaning) {
         return List.of(TX_FREQUENCY, RX_FREQUENCY, DOPPLER_RATE, IN_TUNING_RANGE, RX_POWER, density, RX_DATA_RATE,
-                perBit, Column.number("margin_db", "dB", marginMeaning, Budget::marginDb), MAX_DATA_RATE,
+                perBit, Column.number("margin_db", "dB", marginMeaning, b -> b.reception().marginDb()), MAX_DATA_RATE,
                 WITHIN_DOPPLER_RATE);
     }
 
@@ -199,11 +199,11 @@ public final class Tables {
 
     /** The columns of windows.csv. */
     public static final Table<WindowFigures> WINDOWS = new Table<>(List.of(
-            Column.text("link", "the link", WindowFigures::link),
-            Column.number("opens_send_clock_s", "s", "sender's clock where the window opens", WindowFigures::opensClock),
-            Column.number("closes_send_clock_s", "s", "sender's clock where it closes", WindowFigures::closesClock),
+            Column.text("link", "the link", w -> w.window().link()),
+            Column.number("opens_send_clock_s", "s", "sender's clock where the window opens", w -> w.window().opensClock()),
+            Column.number("closes_send_clock_s", "s", "sender's clock where it closes", w -> w.window().closesClock()),
             Column.text("closed_by", "what closes it: `margin`, `tuning`, `doppler-rate`, `horizon`, or `end` (of"
-                    + " the scanned range)", WindowFigures::closedBy),
+                    + " the scanned range)", w -> w.window().closedBy()),
             Column.number("send_open_s", "s", "how long it is open on the sender's clock: closes - opens",
                     WindowFigures::sendOpenSeconds),
             Column.number("receive_open_s", "s", "the arrivals of its first and last sends, their interval on the"

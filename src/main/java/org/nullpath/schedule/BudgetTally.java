@@ -27,16 +27,16 @@ public final class BudgetTally {
     }
 
     void add(Budget b) {
-        worstMargin = min(worstMargin, b.marginDb());
-        bestMargin = max(bestMargin, b.marginDb());
-        minRxHz = min(minRxHz, b.rxFrequencyHz());
-        maxRxHz = max(maxRxHz, b.rxFrequencyHz());
-        maxAbsRate = max(maxAbsRate, Math.abs(b.dopplerRateHzPerS()));
-        minMaxRate = min(minMaxRate, b.maxDataRateBps());
-        maxMaxRate = max(maxMaxRate, b.maxDataRateBps());
+        worstMargin = min(worstMargin, b.reception().marginDb());
+        bestMargin = max(bestMargin, b.reception().marginDb());
+        minRxHz = min(minRxHz, b.frequency().rxFrequencyHz());
+        maxRxHz = max(maxRxHz, b.frequency().rxFrequencyHz());
+        maxAbsRate = max(maxAbsRate, Math.abs(b.frequency().dopplerRateHzPerS()));
+        minMaxRate = min(minMaxRate, b.reception().maxDataRateBps());
+        maxMaxRate = max(maxMaxRate, b.reception().maxDataRateBps());
         closing += b.closes() ? 1 : 0;
-        outOfTuning += b.inTuningRange() ? 0 : 1;
-        overRate += b.withinDopplerRate() ? 0 : 1;
+        outOfTuning += b.frequency().inTuningRange() ? 0 : 1;
+        overRate += b.frequency().withinDopplerRate() ? 0 : 1;
     }
 
     /** Takes in the figures of {@code later}, the tally of the messages that follow these. */

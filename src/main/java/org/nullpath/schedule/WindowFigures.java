@@ -13,19 +13,4 @@ package org.nullpath.schedule;
  */
 public record WindowFigures(WindowRow window, double sendOpenSeconds, double receiveOpenSeconds, double volumeBits,
                             double adaptiveVolumeBits) {
-    public String link() {
-        return window.link();
-    }
-
-    public double opensClock() {
-        return window.opensClock();
-    }
-
-    public double closesClock() {
-        return window.closesClock();
-    }
-
-    public String closedBy() {
-        return window.closedBy();
-    }
 }

@@ -119,7 +119,7 @@ public final class Windows {
     }
 
     private static double maxDataRate(LinkSchedule.Evaluated ev) {
-        return ev.arrival().flatMap(LinkSchedule.Arrival::budget).map(Budget::maxDataRateBps).orElse(Double.NaN);
+        return ev.arrival().flatMap(LinkSchedule.Arrival::budget).map(b -> b.reception().maxDataRateBps()).orElse(Double.NaN);
     }
 
     private static List<WindowRow> scanRange(WindowScan w, List<CrossingRow> crossings) {
@@ -279,10 +279,10 @@ public final class Windows {
                 return v;
             }
             Budget b = ev.arrival().get().budget().orElseThrow();
-            v[1] = Double.isNaN(b.marginDb()) ? 1.0 : b.marginDb(); // at one place the link trivially closes
-            v[2] = terms.hasTuningRange() ? b.rxFrequencyHz() - terms.tuningMinHz() : 1.0;
-            v[3] = terms.hasTuningRange() ? terms.tuningMaxHz() - b.rxFrequencyHz() : 1.0;
-            v[4] = terms.hasDopplerRateLimit() ? terms.maxDopplerRateHzPerS() - Math.abs(b.dopplerRateHzPerS()) : 1.0;
+            v[1] = Double.isNaN(b.reception().marginDb()) ? 1.0 : b.reception().marginDb(); // at one place the link trivially closes
+            v[2] = terms.hasTuningRange() ? b.frequency().rxFrequencyHz() - terms.tuningMinHz() : 1.0;
+            v[3] = terms.hasTuningRange() ? terms.tuningMaxHz() - b.frequency().rxFrequencyHz() : 1.0;
+            v[4] = terms.hasDopplerRateLimit() ? terms.maxDopplerRateHzPerS() - Math.abs(b.frequency().dopplerRateHzPerS()) : 1.0;
             return v;
         }
 

@@ -47,15 +47,15 @@ class BudgetWithDopplerTest {
     void theFrequenciesAndRatesFollowTheDopplerFactor(boolean precompensate) {
         Budget b = budget(terms(precompensate, Double.NaN, Double.NaN, Double.NaN));
         double tx = precompensate ? CARRIER / 0.8 : CARRIER;
-        assertEquals(tx, b.txFrequencyHz(), 1e-15 * tx, "transmitted frequency");
-        assertEquals(precompensate ? CARRIER : 0.8 * CARRIER, b.rxFrequencyHz(), 1e-15 * CARRIER, "received frequency");
-        assertEquals(precompensate ? 0.0 : CARRIER * FACTOR_RATE, b.dopplerRateHzPerS(), 1e-15 * CARRIER * FACTOR_RATE,
+        assertEquals(tx, b.frequency().txFrequencyHz(), 1e-15 * tx, "transmitted frequency");
+        assertEquals(precompensate ? CARRIER : 0.8 * CARRIER, b.frequency().rxFrequencyHz(), 1e-15 * CARRIER, "received frequency");
+        assertEquals(precompensate ? 0.0 : CARRIER * FACTOR_RATE, b.frequency().dopplerRateHzPerS(), 1e-15 * CARRIER * FACTOR_RATE,
                 "drift of the received frequency");
         assertEquals(0.8 * RATE, b.rxDataRateBps(), 1e-15 * RATE, "received data rate");
         double cn0 = b.reception(Budget.Reception.Coherent.class).orElseThrow().cn0DbHz();
         double maxRate = Math.pow(10, (cn0 - 3) / 10) / 0.8;
-        assertEquals(maxRate, b.maxDataRateBps(), 1e-12 * maxRate, "highest sender-frame rate that closes");
-        assertEquals(cn0 - 10 * Math.log10(0.8 * RATE) - 3, b.marginDb(), 1e-9, "margin at the received data rate");
+        assertEquals(maxRate, b.reception().maxDataRateBps(), 1e-12 * maxRate, "highest sender-frame rate that closes");
+        assertEquals(cn0 - 10 * Math.log10(0.8 * RATE) - 3, b.reception().marginDb(), 1e-9, "margin at the received data rate");
     }
 
     @ParameterizedTest(name = "rate limit {0} Hz/s")
@@ -63,7 +63,7 @@ class BudgetWithDopplerTest {
     void aDriftAboveTheReceiversRateLimitFailsIt(double limit, boolean within) {
         // the drift is 8.4e9 x 2e-9 = 16.8 Hz/s; the limit is a closed bound (docs/link-budget.md: "within")
         Budget b = budget(terms(false, Double.NaN, Double.NaN, limit));
-        assertEquals(within, b.withinDopplerRate());
+        assertEquals(within, b.frequency().withinDopplerRate());
         assertEquals(within, b.closes(), "the rest of the budget closes");
     }
 
@@ -76,8 +76,8 @@ class BudgetWithDopplerTest {
     })
     void theTuningRangeIsJudgedAtTheReceivedFrequency(double min, double max, boolean precompensate, boolean in) {
         Budget b = budget(terms(precompensate, min, max, Double.NaN));
-        assertEquals(in, b.inTuningRange());
+        assertEquals(in, b.frequency().inTuningRange());
         assertEquals(in, b.closes(), "the rest of the budget closes");
-        assertTrue(b.withinDopplerRate(), "no rate limit");
+        assertTrue(b.frequency().withinDopplerRate(), "no rate limit");
     }
 }

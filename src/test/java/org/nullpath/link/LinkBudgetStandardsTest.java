@@ -103,23 +103,23 @@ class LinkBudgetStandardsTest {
         // isotropic antennas, 1 W, no losses: received power is minus the free-space loss
         Budget bare = evaluate(coherent(f, 1.0, new Antenna.FixedGain(0), 0, new Antenna.FixedGain(0), 0, 300,
                 1000, 3), p);
-        assertEquals(friisDbw(1.0, 1.0, 1.0, f, distance(p), 0), bare.rxPowerDbw(), EXACT_DB, "Friis (1946), 0 dBi");
-        assertEquals(itu525Db(f, d), -bare.rxPowerDbw(), ROUNDED_DB, "ITU-R P.525 free-space loss");
+        assertEquals(friisDbw(1.0, 1.0, 1.0, f, distance(p), 0), bare.reception().rxPowerDbw(), EXACT_DB, "Friis (1946), 0 dBi");
+        assertEquals(itu525Db(f, d), -bare.reception().rxPowerDbw(), ROUNDED_DB, "ITU-R P.525 free-space loss");
 
         // a full budget: 20 kW, 74 dBi transmit, 68 dBi receive, 1 dB + 2 dB losses
         Budget full = evaluate(coherent(f, 20e3, new Antenna.FixedGain(74), 1, new Antenna.FixedGain(68), 2, 300,
                 1000, 3), p);
         double friis = friisDbw(20e3, Math.pow(10, 7.4), Math.pow(10, 6.8), f, distance(p), 3);
-        assertEquals(friis, full.rxPowerDbw(), EXACT_DB, "Friis (1946) with gains and losses");
+        assertEquals(friis, full.reception().rxPowerDbw(), EXACT_DB, "Friis (1946) with gains and losses");
         // the same in the link-budget sum of ITU-R P.525's loss: P_tx + G_tx + G_rx - L_fs - losses
-        assertEquals(db(20e3) + 74 + 68 - itu525Db(f, d) - 3, full.rxPowerDbw(), ROUNDED_DB,
+        assertEquals(db(20e3) + 74 + 68 - itu525Db(f, d) - 3, full.reception().rxPowerDbw(), ROUNDED_DB,
                 "budget sum with the ITU-R P.525 loss");
 
         // at rest there is no frequency change and the received rate is the sent rate
-        assertEquals(f, full.txFrequencyHz(), 0.0);
-        assertEquals(f, full.rxFrequencyHz(), 0.0);
+        assertEquals(f, full.frequency().txFrequencyHz(), 0.0);
+        assertEquals(f, full.frequency().rxFrequencyHz(), 0.0);
         assertEquals(1000.0, full.rxDataRateBps(), 0.0);
-        assertEquals(0.0, full.dopplerRateHzPerS(), 0.0);
+        assertEquals(0.0, full.frequency().dopplerRateHzPerS(), 0.0);
     }
 
     // ---------------------------------------------------------------- Boltzmann constant
@@ -132,7 +132,7 @@ class LinkBudgetStandardsTest {
         assertEquals(K_B, org.nullpath.units.Constants.BOLTZMANN, 0.0, "k_B, SI 2019");
         Budget b = evaluate(coherent(8.4e9, 20e3, new Antenna.FixedGain(74), 1, new Antenna.FixedGain(68), 1, 1.0,
                 1000, 3), atRest(AU));
-        double n0Db = b.rxPowerDbw() - cn0(b);
+        double n0Db = b.reception().rxPowerDbw() - cn0(b);
         assertEquals(-228.599_17, n0Db, 1e-5, "N0 = k_B x 1 K in dBW/Hz");
         assertEquals(-228.6, n0Db, ROUNDED_DB, "the common-practice -228.6 dBW/K/Hz");
     }
@@ -144,11 +144,11 @@ class LinkBudgetStandardsTest {
         Budget b = evaluate(coherent(8.4e9, 20e3, new Antenna.FixedGain(74), 1, new Antenna.FixedGain(68), 1,
                 kelvin, 1000, 3), p);
         // N0 = k_B T (Nyquist noise density), C/N0 = P_rx / N0
-        assertEquals(b.rxPowerDbw() + 228.6 - db(kelvin), cn0(b), ROUNDED_DB,
+        assertEquals(b.reception().rxPowerDbw() + 228.6 - db(kelvin), cn0(b), ROUNDED_DB,
                 "with -228.6 dBW/K/Hz (common practice)");
-        assertEquals(b.rxPowerDbw() - db(K_B) - db(kelvin), cn0(b), EXACT_DB, "with k_B from SI 2019 (exact)");
+        assertEquals(b.reception().rxPowerDbw() - db(K_B) - db(kelvin), cn0(b), EXACT_DB, "with k_B from SI 2019 (exact)");
         // and the received power itself still is Friis
-        assertEquals(friisDbw(20e3, Math.pow(10, 7.4), Math.pow(10, 6.8), 8.4e9, distance(p), 2), b.rxPowerDbw(),
+        assertEquals(friisDbw(20e3, Math.pow(10, 7.4), Math.pow(10, 6.8), 8.4e9, distance(p), 2), b.reception().rxPowerDbw(),
                 EXACT_DB);
         assertTrue(b.reception(Budget.Reception.PhotonCounting.class).isEmpty(), "coherent: no photon figures");
     }
@@ -167,10 +167,10 @@ class LinkBudgetStandardsTest {
         double capacity = s / (K_B * kelvin * Math.log(2));
         Budget exact = evaluate(coherent(fHz, 1e6, new Antenna.FixedGain(80), 0.5, new Antenna.FixedGain(85), 1.0,
                 kelvin, 1000, db(Math.log(2))), p);
-        assertEquals(capacity, exact.maxDataRateBps(), 1e-12 * capacity, "S / (N0 ln 2)");
+        assertEquals(capacity, exact.reception().maxDataRateBps(), 1e-12 * capacity, "S / (N0 ln 2)");
         Budget rounded = evaluate(coherent(fHz, 1e6, new Antenna.FixedGain(80), 0.5, new Antenna.FixedGain(85), 1.0,
                 kelvin, 1000, -1.59), p);
-        assertEquals(db(capacity), db(rounded.maxDataRateBps()), 0.005, "with the rounded -1.59 dB");
+        assertEquals(db(capacity), db(rounded.reception().maxDataRateBps()), 0.005, "with the rounded -1.59 dB");
     }
 
     @Test
@@ -182,13 +182,13 @@ class LinkBudgetStandardsTest {
         SignalPath p = atRest(AU);
         LinkTerms probe = coherent(8.4e9, 20e3, new Antenna.FixedGain(74), 1, new Antenna.FixedGain(68), 1, 300, 1000,
                 9.6);
-        double rate = evaluate(probe, p).maxDataRateBps();
+        double rate = evaluate(probe, p).reception().maxDataRateBps();
         Budget atRate = evaluate(coherent(8.4e9, 20e3, new Antenna.FixedGain(74), 1, new Antenna.FixedGain(68), 1, 300,
                 rate, 9.6), p);
         double pb = Erf.erfc(Math.sqrt(Math.pow(10, ebn0(atRate) / 10))) / 2;
         assertTrue(pb <= 1e-5 && pb > 0.95e-5, "P_b at the highest closing rate = " + pb);
         assertEquals(9.6, ebn0(atRate), 1e-9, "Eb/N0 at the highest closing rate is the requirement");
-        assertEquals(0.0, atRate.marginDb(), EXACT_DB, "zero margin there");
+        assertEquals(0.0, atRate.reception().marginDb(), EXACT_DB, "zero margin there");
         Budget faster = evaluate(coherent(8.4e9, 20e3, new Antenna.FixedGain(74), 1, new Antenna.FixedGain(68), 1, 300,
                 rate * Math.pow(10, 0.01), 9.6), p);
         double pbFaster = Erf.erfc(Math.sqrt(Math.pow(10, ebn0(faster) / 10))) / 2;
@@ -214,14 +214,14 @@ class LinkBudgetStandardsTest {
                 kelvin, rate, requiredDb), p);
         assertEquals(db(cn0), cn0(b), EXACT_DB, "C/N0");
         assertEquals(requiredDb, ebn0(b), EXACT_DB, "Eb/N0 = (C/N0) / R");
-        assertEquals(0.0, b.marginDb(), EXACT_DB, "margin = Eb/N0 - required");
-        assertEquals(rate, b.maxDataRateBps(), 1e-12 * rate, "max rate = (C/N0) / (Eb/N0)_req");
+        assertEquals(0.0, b.reception().marginDb(), EXACT_DB, "margin = Eb/N0 - required");
+        assertEquals(rate, b.reception().maxDataRateBps(), 1e-12 * rate, "max rate = (C/N0) / (Eb/N0)_req");
 
         // twice the rate costs 10 log10 2 = 3.0103 dB of margin; the highest rate that closes does not change
         Budget twice = evaluate(coherent(fHz, 1e6, new Antenna.FixedGain(80), 0.5, new Antenna.FixedGain(85), 1.0,
                 kelvin, 2 * rate, requiredDb), p);
-        assertEquals(-db(2), twice.marginDb(), EXACT_DB);
-        assertEquals(rate, twice.maxDataRateBps(), 1e-12 * rate);
+        assertEquals(-db(2), twice.reception().marginDb(), EXACT_DB);
+        assertEquals(rate, twice.reception().maxDataRateBps(), 1e-12 * rate);
         assertTrue(b.closes() && !twice.closes(), "closes() follows the margin's sign");
     }
 
@@ -250,7 +250,7 @@ class LinkBudgetStandardsTest {
         // the aperture as the receive antenna of a link at rest: Friis with that gain
         SignalPath p = atRest(AU);
         Budget b = evaluate(coherent(f, 100, new Antenna.FixedGain(60), 0, a, 0, 300, 1000, 3), p);
-        assertEquals(friisDbw(100, 1e6, byDiameter, f, distance(p), 0), b.rxPowerDbw(), EXACT_DB);
+        assertEquals(friisDbw(100, 1e6, byDiameter, f, distance(p), 0), b.reception().rxPowerDbw(), EXACT_DB);
     }
 
     // ---------------------------------------------------------------- photon counting at rest
@@ -270,12 +270,12 @@ class LinkBudgetStandardsTest {
         double gTx = 0.8 * Math.pow(Math.PI * 0.5 * f / C, 2);
         double gRx = 0.7 * Math.pow(Math.PI * 4 * f / C, 2);
         double pRxDbw = friisDbw(10, gTx, gRx, f, distance(p), 3);
-        assertEquals(pRxDbw, b.rxPowerDbw(), EXACT_DB, "Friis (1946)");
+        assertEquals(pRxDbw, b.reception().rxPowerDbw(), EXACT_DB, "Friis (1946)");
         double photons = Math.pow(10, pRxDbw / 10) / (H * f);
         assertEquals(photons, photonRate(b), 1e-12 * photons, "photon rate P_rx / (h f)");
         assertEquals(photons / rate, photonsPerBit(b), 1e-12 * photons / rate, "photons per bit");
-        assertEquals(db(photons / rate / required), b.marginDb(), EXACT_DB, "margin in dB of photons per bit");
-        assertEquals(photons / required, b.maxDataRateBps(), 1e-12 * photons / required, "max rate");
+        assertEquals(db(photons / rate / required), b.reception().marginDb(), EXACT_DB, "margin in dB of photons per bit");
+        assertEquals(photons / required, b.reception().maxDataRateBps(), 1e-12 * photons / required, "max rate");
         assertTrue(b.reception(Budget.Reception.Coherent.class).isEmpty(), "photon counting: no C/N0, Eb/N0");
     }
 
@@ -293,11 +293,11 @@ class LinkBudgetStandardsTest {
         // closed intervals (docs/link-budget.md says "inside" and "within"; edges included is nullpath's reading,
         // recorded here so that it does not change unnoticed)
         SignalPath p = atRest(AU);
-        assertTrue(evaluate(withLimits(8.4e9, 9e9, 0.0, 3), p).inTuningRange(), "at the low edge");
-        assertTrue(evaluate(withLimits(8e9, 8.4e9, 0.0, 3), p).inTuningRange(), "at the high edge");
-        assertTrue(evaluate(withLimits(8e9, 8.4e9, 0.0, 3), p).withinDopplerRate(), "at the rate limit");
-        assertTrue(!evaluate(withLimits(8.5e9, 9e9, 0.0, 3), p).inTuningRange(), "below the range");
-        assertTrue(!evaluate(withLimits(7e9, 8.3e9, 0.0, 3), p).inTuningRange(), "above the range");
+        assertTrue(evaluate(withLimits(8.4e9, 9e9, 0.0, 3), p).frequency().inTuningRange(), "at the low edge");
+        assertTrue(evaluate(withLimits(8e9, 8.4e9, 0.0, 3), p).frequency().inTuningRange(), "at the high edge");
+        assertTrue(evaluate(withLimits(8e9, 8.4e9, 0.0, 3), p).frequency().withinDopplerRate(), "at the rate limit");
+        assertTrue(!evaluate(withLimits(8.5e9, 9e9, 0.0, 3), p).frequency().inTuningRange(), "below the range");
+        assertTrue(!evaluate(withLimits(7e9, 8.3e9, 0.0, 3), p).frequency().inTuningRange(), "above the range");
     }
 
     @Test
@@ -306,7 +306,7 @@ class LinkBudgetStandardsTest {
         SignalPath p = atRest(AU);
         double ebn0 = ebn0(evaluate(withLimits(Double.NaN, Double.NaN, Double.NaN, 3), p));
         Budget exact = evaluate(withLimits(Double.NaN, Double.NaN, Double.NaN, ebn0), p);
-        assertEquals(0.0, exact.marginDb(), 0.0);
+        assertEquals(0.0, exact.reception().marginDb(), 0.0);
         assertTrue(exact.closes(), "zero margin closes");
         assertTrue(!evaluate(withLimits(Double.NaN, Double.NaN, Double.NaN, Math.nextUp(ebn0)), p).closes(),
                 "a hair short does not");
@@ -320,11 +320,11 @@ class LinkBudgetStandardsTest {
         SignalPath p = LightCone.future(here.atClock(50.0), InertialWorldline.atRest(new Vec3(1e6, 2e6, 3e6)));
         assertEquals(0.0, p.lightTimeSeconds(), 0.0);
         Budget b = LinkBudget.evaluate(withLimits(8e9, 9e9, 1.0, 3), p, Doppler.of(p), 0.0);
-        assertEquals(8.4e9, b.txFrequencyHz(), 0.0);
-        assertEquals(8.4e9, b.rxFrequencyHz(), 0.0);
+        assertEquals(8.4e9, b.frequency().txFrequencyHz(), 0.0);
+        assertEquals(8.4e9, b.frequency().rxFrequencyHz(), 0.0);
         assertEquals(1000.0, b.rxDataRateBps(), 0.0);
-        assertTrue(Double.isNaN(b.rxPowerDbw()) && Double.isNaN(cn0(b)) && Double.isNaN(ebn0(b))
-                && Double.isNaN(b.marginDb()) && Double.isNaN(b.maxDataRateBps()), b.toString());
+        assertTrue(Double.isNaN(b.reception().rxPowerDbw()) && Double.isNaN(cn0(b)) && Double.isNaN(ebn0(b))
+                && Double.isNaN(b.reception().marginDb()) && Double.isNaN(b.reception().maxDataRateBps()), b.toString());
         assertTrue(b.closes(), "no far-field margin: it closes on frequency and rate alone");
     }
 

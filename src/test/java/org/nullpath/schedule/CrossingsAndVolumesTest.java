@@ -158,7 +158,7 @@ class CrossingsAndVolumesTest {
         WindowSurvey s = survey(uplink("      tuning-range: [7.0 GHz, 7.15 GHz]", "{link: up, from: 1 h, to: 60 d}"));
         assertEquals(1, s.windows().size());
         WindowFigures w = s.windows().get(0);
-        assertEquals("tuning", w.closedBy());
+        assertEquals("tuning", w.window().closedBy());
         // send side: (c/a)(0.15 / 7.2); receive side: -(c/a) ln(D) at each end, so (c/a) ln(7.15 / 7.0):
         // the receding craft's clock sees the window stretched by about 1/D
         assertRelative(C / A * (0.15 / 7.2), w.sendOpenSeconds(), 1e-9);
@@ -172,8 +172,8 @@ class CrossingsAndVolumesTest {
         assertRelative(integral, w.adaptiveVolumeBits(), 1e-6);
         // the crossings in the range are the window's edges, found by the same solve
         assertEquals(List.of("tuning-high", "tuning-low"), s.crossings().stream().map(CrossingRow::limit).toList());
-        assertEquals(w.opensClock(), s.crossings().get(0).sendClock());
-        assertEquals(w.closesClock(), s.crossings().get(1).sendClock());
+        assertEquals(w.window().opensClock(), s.crossings().get(0).sendClock());
+        assertEquals(w.window().closesClock(), s.crossings().get(1).sendClock());
     }
 
     @Test
@@ -182,7 +182,7 @@ class CrossingsAndVolumesTest {
         // integral diverges (F(u) above grows as 1 / (3 w^3) as w -> 0)
         WindowFigures w = survey(uplink("      tuning-range: [7.0 GHz, 7.3 GHz]", "{link: up, from: 0 d, to: 60 d}"))
                 .windows().get(0);
-        assertEquals(0.0, w.opensClock());
+        assertEquals(0.0, w.window().opensClock());
         assertTrue(Double.isNaN(w.adaptiveVolumeBits()));
         assertRelative(RATE * w.sendOpenSeconds(), w.volumeBits(), 1e-15);
     }
@@ -199,12 +199,12 @@ class CrossingsAndVolumesTest {
         // at each arrival; their difference, formed at 50 digits
         RefStation aside = RefStation.of(new double[] {0.3 * LY, 0.2 * LY, 0}, null, 0);
         RefCraft probe = RefCraft.start(null, new double[] {1, 0, 0}, 0, 0, 0).burnForever(A);
-        RefSignal first = RefSolver.send(probe, w.opensClock(), aside);
-        RefSignal last = RefSolver.send(probe, w.closesClock(), aside);
+        RefSignal first = RefSolver.send(probe, w.window().opensClock(), aside);
+        RefSignal last = RefSolver.send(probe, w.window().closesClock(), aside);
         double receiveOpen = last.arrival().clock().subtract(first.arrival().clock(), MathContext.DECIMAL128)
                 .doubleValue();
         assertRelative(receiveOpen, w.receiveOpenSeconds(), 1e-9);
-        assertEquals(new BigDecimal(w.closesClock()).subtract(new BigDecimal(w.opensClock())).doubleValue(),
+        assertEquals(new BigDecimal(w.window().closesClock()).subtract(new BigDecimal(w.window().opensClock())).doubleValue(),
                 w.sendOpenSeconds());
         // the reference's Doppler factors at the edges are the tuning range's ends over the carrier
         assertRelative(7.1 / 7.2, first.dopplerDouble(), 1e-9);

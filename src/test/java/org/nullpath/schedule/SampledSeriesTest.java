@@ -183,7 +183,7 @@ class SampledSeriesTest {
         assertEquals(4, up.samples().size());
         for (SampledSeries.Sample x : up.samples()) {
             // received frequency = carrier x D (the definition of the Doppler factor)
-            assertEquals(8.4e9 * x.doppler(), x.budget().orElseThrow().rxFrequencyHz(), 1e-6);
+            assertEquals(8.4e9 * x.doppler(), x.budget().orElseThrow().frequency().rxFrequencyHz(), 1e-6);
         }
     }
 }

@@ -246,7 +246,7 @@ class ScheduleAgainstReferenceTest {
         Run up = run(m, "up");
         List<Budget> budgets = up.rows().stream().flatMap(r -> r.delivery().stream())
                 .map(d -> d.budget().orElseThrow()).toList();
-        double[] rates = budgets.stream().mapToDouble(b -> Math.abs(b.dopplerRateHzPerS())).toArray();
+        double[] rates = budgets.stream().mapToDouble(b -> Math.abs(b.frequency().dopplerRateHzPerS())).toArray();
         List<RefSignal> refs = Arrays.stream(upClocks()).mapToObj(t -> RefSolver.send(HOME, t, PROBE))
                 .filter(s -> !s.never()).toList();
         assertEquals(refs.size(), budgets.size());
@@ -254,20 +254,20 @@ class ScheduleAgainstReferenceTest {
             // received frequency = carrier x D (the definition of the Doppler factor), to D's own tolerance:
             // 1e-12, or kappa x 2^-53 with kappa = 1 + 1/D where that is larger (assertRows)
             double tol = Math.max(TIME_TOL, (1 + 1 / refs.get(i).dopplerDouble()) * EPS);
-            close("received frequency " + i, budgets.get(i).rxFrequencyHz(),
+            close("received frequency " + i, budgets.get(i).frequency().rxFrequencyHz(),
                     refs.get(i).doppler().multiply(new BigDecimal("8.4e9")), tol);
             // dD/d(tau) = -D a / c on the craft's clock (WindowsTest's closed form): the rate is -f D a / c
-            close("Doppler rate " + i, budgets.get(i).dopplerRateHzPerS(),
+            close("Doppler rate " + i, budgets.get(i).frequency().dopplerRateHzPerS(),
                     -8.4e9 * refs.get(i).dopplerDouble() * A / C, 1e-6);
         }
         BudgetTally.Figures f = up.tally().budget().orElseThrow();
-        assertEquals(budgets.stream().mapToDouble(Budget::marginDb).min().orElseThrow(), f.worstMarginDb());
-        assertEquals(budgets.stream().mapToDouble(Budget::marginDb).max().orElseThrow(), f.bestMarginDb());
-        assertEquals(budgets.stream().mapToDouble(Budget::rxFrequencyHz).min().orElseThrow(), f.minRxFrequencyHz());
-        assertEquals(budgets.stream().mapToDouble(Budget::rxFrequencyHz).max().orElseThrow(), f.maxRxFrequencyHz());
+        assertEquals(budgets.stream().mapToDouble(b -> b.reception().marginDb()).min().orElseThrow(), f.worstMarginDb());
+        assertEquals(budgets.stream().mapToDouble(b -> b.reception().marginDb()).max().orElseThrow(), f.bestMarginDb());
+        assertEquals(budgets.stream().mapToDouble(b -> b.frequency().rxFrequencyHz()).min().orElseThrow(), f.minRxFrequencyHz());
+        assertEquals(budgets.stream().mapToDouble(b -> b.frequency().rxFrequencyHz()).max().orElseThrow(), f.maxRxFrequencyHz());
         assertEquals(Arrays.stream(rates).max().orElseThrow(), f.maxAbsDopplerRateHzPerS());
-        assertEquals(budgets.stream().mapToDouble(Budget::maxDataRateBps).min().orElseThrow(), f.minMaxDataRateBps());
-        assertEquals(budgets.stream().mapToDouble(Budget::maxDataRateBps).max().orElseThrow(), f.maxMaxDataRateBps());
+        assertEquals(budgets.stream().mapToDouble(b -> b.reception().maxDataRateBps()).min().orElseThrow(), f.minMaxDataRateBps());
+        assertEquals(budgets.stream().mapToDouble(b -> b.reception().maxDataRateBps()).max().orElseThrow(), f.maxMaxDataRateBps());
         assertEquals(budgets.stream().filter(Budget::closes).count(), f.closing());
         // tuning range [4, 9] GHz: D < 4 / 8.4; rate limit 150 Hz/s: 8.4e9 D a / c > 150, i.e. D > 0.546
         long outOfTuning = refs.stream().filter(s -> s.dopplerDouble() < 4 / 8.4).count();
