@@ -1,47 +1,46 @@
 package org.nullpath.worldline;
 
 import java.util.List;
+import java.util.Locale;
 
 /**
  * The kinds of leg: each kind's key in the scenario file (also its kind in summaries), its label on the
- * spacetime diagram and the end-condition keys the scenario format offers for it. The names are given here
- * once; the reader's leg table is keyed by them.
+ * spacetime diagram (its own name) and the end-condition keys the scenario format offers for it. The names
+ * are given here once; the reader's leg table is keyed by them.
  */
 public enum LegKind {
     /** Constant proper acceleration. */
-    BURN("burn", "burn", Ends.CONSTANT),
+    BURN("burn", Ends.CONSTANT),
     /** Unpowered flight (it keeps its speed, so it takes no until-speed). */
-    COAST("coast", "coast", Ends.COAST),
+    COAST("coast", Ends.COAST),
     /** Ackeret's rocket at constant proper acceleration. */
-    ROCKET("rocket", "rocket", Ends.LIMITED),
+    ROCKET("rocket", Ends.LIMITED),
     /** A rocket at constant thrust: a {@code rocket} in the file, told apart on the diagram. */
-    THRUST_ROCKET("rocket", "thrustrocket", Ends.LIMITED),
+    THRUST_ROCKET("rocket", Ends.LIMITED),
     /** A beam-pushed sail. */
-    SAIL("sail", "sail", Ends.LIMITED),
+    SAIL("sail", Ends.LIMITED),
     /** A tabled acceleration profile. */
-    PROFILE("profile", "profile", Ends.LIMITED);
+    PROFILE("profile", Ends.LIMITED);
 
     /** The end keys of every leg that ends by its own physics unless told to end earlier (rocket, sail, profile). */
     public static final List<String> LIMITED_END_KEYS = Ends.LIMITED;
 
     private final String key;
-    private final String label;
     private final List<String> endKeys;
 
-    LegKind(String key, String label, List<String> endKeys) {
+    LegKind(String key, List<String> endKeys) {
         this.key = key;
-        this.label = label;
         this.endKeys = endKeys;
+    }
+
+    /** The label on the spacetime diagram: the kind's own name in lower case ("burn", "thrustrocket"). */
+    public String label() {
+        return name().toLowerCase(Locale.ROOT).replace("_", "");
     }
 
     /** The key in the scenario file. */
     public String key() {
         return key;
-    }
-
-    /** The label on the spacetime diagram. */
-    public String label() {
-        return label;
     }
 
     /** The end-condition keys the scenario format offers for this kind. */
