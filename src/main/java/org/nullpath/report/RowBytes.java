@@ -14,6 +14,9 @@ final class RowBytes {
 
     private byte[] b;
     private int n;
+    /** The last text cell written and its bytes: a column of a few words (a status) repeats them row after row. */
+    private String lastText;
+    private byte[] lastTextBytes;
 
     RowBytes(int capacity) {
         b = new byte[Math.max(64, capacity)];
@@ -63,7 +66,7 @@ final class RowBytes {
 
     /** A whole number's digits. */
     void count(long v) {
-        room(20);
+        room(25);
         if (v == Long.MIN_VALUE) {
             byte[] s = Long.toString(v).getBytes(StandardCharsets.US_ASCII);
             System.arraycopy(s, 0, b, n, s.length);
@@ -74,15 +77,7 @@ final class RowBytes {
             b[n++] = '-';
             v = -v;
         }
-        int digits = 1;
-        for (long p = 10; digits < 19 && v >= p; p *= 10) {
-            digits++;
-        }
-        for (int i = n + digits - 1; i >= n; i--) {
-            b[i] = (byte) ('0' + v % 10);
-            v /= 10;
-        }
-        n += digits;
+        n = ShortestDecimal.whole(v, b, n);
     }
 
     void flag(boolean v) {
@@ -100,28 +95,15 @@ final class RowBytes {
         if (cell.isEmpty()) {
             return;
         }
-        StringBuilder quoted = new StringBuilder(cell.length() + 2);
-        CsvText.append(quoted, cell, true); // true: no comma before it (the table writes commas)
-        String s = quoted.toString();
-        if (ascii(s)) {
-            room(s.length());
-            for (int i = 0; i < s.length(); i++) {
-                b[n++] = (byte) s.charAt(i);
-            }
-            return;
+        if (cell != lastText) { // the same String object: its bytes are known
+            StringBuilder quoted = new StringBuilder(cell.length() + 2);
+            CsvText.append(quoted, cell, true); // true: no comma before it (the table writes commas)
+            lastTextBytes = quoted.toString().getBytes(StandardCharsets.UTF_8);
+            lastText = cell;
         }
-        byte[] u = s.getBytes(StandardCharsets.UTF_8);
+        byte[] u = lastTextBytes;
         room(u.length);
         System.arraycopy(u, 0, b, n, u.length);
         n += u.length;
-    }
-
-    private static boolean ascii(String s) {
-        for (int i = 0; i < s.length(); i++) {
-            if (s.charAt(i) >= 0x80) {
-                return false;
-            }
-        }
-        return true;
     }
 }

@@ -1,6 +1,9 @@
 package org.nullpath.report;
 
+import java.lang.invoke.MethodHandles;
+import java.lang.invoke.VarHandle;
 import java.math.BigInteger;
+import java.nio.ByteOrder;
 
 /**
  * The shortest decimal that parses back to a double, written as ASCII bytes straight into a caller's array:
@@ -28,7 +31,11 @@ final class ShortestDecimal {
     private static final int K_MAX = 292;
     private static final int H = 17; // digits of the decimal significand kept
     private static final long MASK_63 = (1L << 63) - 1;
-    private static final int MASK_28 = (1 << 28) - 1;
+
+    /** Eight bytes at once into a byte array, the first byte lowest. */
+    private static final VarHandle LONG_LE = MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
+    /** '0' in every byte. */
+    private static final long ZEROES = 0x3030_3030_3030_3030L;
 
     private static final long[] POW10 = new long[H + 1];
     /** g1(k) and g0(k) for k = K_MIN..K_MAX, at 2 (k - K_MIN) and 2 (k - K_MIN) + 1. */
@@ -161,20 +168,13 @@ final class ShortestDecimal {
         int i = at;
         if (0 < e && e <= 7) { // plain: ddd.ddd
             b[i++] = (byte) ('0' + h);
-            int y = y(m);
-            int j = 1;
-            for (; j < e; ++j) {
-                int t = 10 * y;
-                b[i++] = (byte) ('0' + (t >>> 28));
-                y = t & MASK_28;
-            }
-            b[i++] = '.';
-            for (; j <= 8; ++j) {
-                int t = 10 * y;
-                b[i++] = (byte) ('0' + (t >>> 28));
-                y = t & MASK_28;
-            }
-            return lowDigits(l, b, i);
+            // the eight digits of m with the point after the first e - 1 of them: nine bytes
+            long d = digits(m);
+            int k = 8 * (e - 1);
+            long before = (1L << k) - 1;
+            LONG_LE.set(b, i, d & before | (long) '.' << k | (d & ~before) << 8);
+            b[i + 8] = (byte) (d >>> 56);
+            return lowDigits(l, b, i + 9);
         }
         if (-3 < e && e <= 0) { // plain: 0.00ddd
             b[i++] = '0';
@@ -194,8 +194,10 @@ final class ShortestDecimal {
     }
 
     private static int lowDigits(int l, byte[] b, int i) {
-        if (l != 0) {
-            i = eightDigits(l, b, i);
+        if (l != 0) { // eight digits, less their trailing zeroes (the last digits are the highest bytes)
+            long d = digits(l);
+            LONG_LE.set(b, i, d);
+            return i + 8 - (Long.numberOfLeadingZeros(d - ZEROES) >>> 3);
         }
         // no trailing zeroes, but one digit after the point
         while (b[i - 1] == '0') {
@@ -208,18 +210,54 @@ final class ShortestDecimal {
     }
 
     private static int eightDigits(int m, byte[] b, int i) {
-        int y = y(m);
-        for (int j = 0; j < 8; ++j) {
-            int t = 10 * y;
-            b[i++] = (byte) ('0' + (t >>> 28));
-            y = t & MASK_28;
-        }
-        return i;
+        LONG_LE.set(b, i, digits(m));
+        return i + 8;
     }
 
-    /** m 10^-8 2^28, rounded up, for digit extraction by multiplication (0 <= m < 10^8). */
-    private static int y(int m) {
-        return (int) (Math.multiplyHigh((long) (m + 1) << 28, 193_428_131_138_340_668L) >>> 20) - 1;
+    /**
+     * The digits of a whole number {@code v >= 0} from {@code at}, without leading zeroes; returns the index
+     * after the last. {@code b} must have 24 bytes free from {@code at}.
+     */
+    static int whole(long v, byte[] b, int at) {
+        if (v >= 10_000_000_000_000_000L) {
+            int top = (int) (v / 10_000_000_000_000_000L); // at most 922
+            int i = whole(top, b, at);
+            long rest = v - 10_000_000_000_000_000L * top;
+            long hi = rest / 100_000_000;
+            LONG_LE.set(b, i, digits((int) hi));
+            LONG_LE.set(b, i + 8, digits((int) (rest - 100_000_000 * hi)));
+            return i + 16;
+        }
+        if (v >= 100_000_000) {
+            long hi = v / 100_000_000;
+            int i = whole(hi, b, at);
+            LONG_LE.set(b, i, digits((int) (v - 100_000_000 * hi)));
+            return i + 8;
+        }
+        if (v == 0) {
+            b[at] = '0';
+            return at + 1;
+        }
+        long d = digits((int) v);
+        int leading = Long.numberOfTrailingZeros(d - ZEROES) >>> 3; // the first digits are the lowest bytes
+        LONG_LE.set(b, at, d >>> 8 * leading);
+        return at + 8 - leading;
+    }
+
+    /**
+     * The eight decimal digits of {@code m} (0 <= m < 10^8, leading zeroes kept) as ASCII bytes in one long,
+     * the first digit in the lowest byte: split into two halves of four digits, each half into two pairs, each
+     * pair into two digits, every lane at once (the divisions by 100 and 10 as multiplications, exact for
+     * these ranges: 10486 / 2^20 for x <= 9999, 103 / 2^10 for x <= 99).
+     */
+    static long digits(int m) {
+        long hi = m / 10_000;
+        long v = hi | (m - 10_000 * hi) << 32; // [first four | last four], 32-bit lanes
+        long q = (v * 10_486 >>> 20) & 0x0000_007F_0000_007FL;
+        v = q | (v - 100 * q) << 16; // 16-bit lanes of two digits
+        long t = (v * 103 >>> 10) & 0x000F_000F_000F_000FL;
+        v = t | (v - 10 * t) << 8; // one digit a byte
+        return v + ZEROES;
     }
 
     private static int exponent(int e, byte[] b, int i) {

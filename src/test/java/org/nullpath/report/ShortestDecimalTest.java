@@ -84,4 +84,43 @@ class ShortestDecimalTest {
         assertEquals("0.002", mine(2e-3));
         assertEquals("1.0E23", mine(1e23));
     }
+
+    /** Every eight-digit group the writer can be asked for, against the digits by division (exhaustive). */
+    @Test
+    void everyGroupOfEightDigits() {
+        for (int m = 0; m < 100_000_000; m++) {
+            long d = ShortestDecimal.digits(m);
+            int x = m;
+            for (int k = 7; k >= 0; k--) {
+                int digit = (int) (d >>> (8 * k)) & 0xFF;
+                if (digit != '0' + x % 10) {
+                    assertEquals('0' + x % 10, digit, "digit " + k + " of " + m);
+                }
+                x /= 10;
+            }
+        }
+    }
+
+    /** Whole numbers against Long.toString: every value up to 10^6, each power of ten and its neighbours, random. */
+    @Test
+    void wholeNumbersAsLongToStringWritesThem() {
+        byte[] b = new byte[40];
+        java.util.function.LongConsumer check = v -> {
+            int n = ShortestDecimal.whole(v, b, 5);
+            assertEquals(Long.toString(v), new String(b, 5, n - 5, StandardCharsets.ISO_8859_1));
+        };
+        for (long v = 0; v <= 1_000_000; v++) {
+            check.accept(v);
+        }
+        for (long p = 1; p > 0 && p <= Long.MAX_VALUE / 10 * 10; p *= 10) {
+            check.accept(p - 1);
+            check.accept(p);
+            check.accept(p + 1);
+        }
+        check.accept(Long.MAX_VALUE);
+        SplittableRandom r = new SplittableRandom(11);
+        for (int i = 0; i < 1_000_000; i++) {
+            check.accept(r.nextLong(Long.MAX_VALUE) >>> r.nextInt(63));
+        }
+    }
 }
