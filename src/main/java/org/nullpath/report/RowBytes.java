@@ -22,6 +22,11 @@ final class RowBytes {
         b = new byte[Math.max(64, capacity)];
     }
 
+    /** Empties the buffer (its room is kept). */
+    void clear() {
+        n = 0;
+    }
+
     int length() {
         return n;
     }

@@ -11,6 +11,8 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Queue;
+import java.util.concurrent.ConcurrentLinkedQueue;
 
 
 /**
@@ -88,8 +90,13 @@ public record Table<R>(List<Column<R>> columns) {
 
     /** {@link #encode} into a buffer of its own, which the caller writes without a copy. */
     RowBytes bytes(List<R> rows) {
+        return bytes(rows, new RowBytes(rows.size() * 16 * columns.size()));
+    }
+
+    /** {@link #encode} into {@code b} (emptied first), which is returned. */
+    RowBytes bytes(List<R> rows, RowBytes b) {
         int k = columns.size();
-        RowBytes b = new RowBytes(rows.size() * 16 * k);
+        b.clear();
         for (R r : rows) {
             int start = b.length();
             columns.get(0).bytes().write(b, r);
@@ -123,6 +130,8 @@ public record Table<R>(List<Column<R>> columns) {
     public static final class Writer<R> implements AutoCloseable {
         private final Table<R> table;
         private final OutputStream out;
+        /** Row buffers written out, to be filled again. */
+        private final Queue<RowBytes> free = new ConcurrentLinkedQueue<>();
 
         private Writer(Table<R> table, OutputStream file) throws IOException {
             this.table = table;
@@ -140,9 +149,14 @@ public record Table<R>(List<Column<R>> columns) {
             return table.encode(rows);
         }
 
-        /** {@link #encode} without the copy into an array of its own; safe to call from several threads at once. */
+        /**
+         * {@link #encode} without the copy into an array of its own; safe to call from several threads at once.
+         * The buffer is one that {@link #append} has written before when there is one: a few buffers serve
+         * the whole file, and stay in the processor's caches instead of new memory for every chunk.
+         */
         RowBytes encodeInPlace(List<R> rows) {
-            return table.bytes(rows);
+            RowBytes b = free.poll();
+            return b == null ? table.bytes(rows) : table.bytes(rows, b);
         }
 
         /** Appends rows made by {@link #encodeInPlace}; an I/O failure surfaces as {@link UncheckedIOException}. */
@@ -152,6 +166,7 @@ public record Table<R>(List<Column<R>> columns) {
             } catch (IOException e) {
                 throw new UncheckedIOException(e);
             }
+            free.offer(rows);
         }
 
         /** Appends text made by {@link #encode}; an I/O failure surfaces as {@link UncheckedIOException}. */
