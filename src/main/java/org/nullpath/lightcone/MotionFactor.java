@@ -41,20 +41,29 @@ public record MotionFactor(double value, double minusOne) {
         }
         double absMu = Math.abs(mu);
         double oneMinusAbsMu = sin2 / (1 + absMu);
-        double ash = Math.abs(Math.sinh(eta));
         double sh = Math.sinh(eta);
-        // cosh eta - 1 without cancellation; past |eta| = 300 sinh^2 would overflow (at about 355), so the
-        // equal 2 sinh^2(eta / 2) is used there (finite up to the rapidity limit of 700)
-        double half = Math.sinh(eta / 2);
-        double gm1 = Math.abs(eta) < 300 ? sh * sh / (Math.cosh(eta) + 1) : 2 * half * half;
+        double ash = Math.abs(sh);
         if (eta * mu >= 0) {
             double a = Math.abs(eta);
             // value - 1: within 60 degrees of the line of motion from expm1(-|eta|); nearer the perpendicular the
             // two terms of that form (about -|eta| and +|eta|) cancel for a slow body, and (cosh eta - 1) -
             // |sinh eta| |mu| does not (it cancels only where the offset itself passes through zero)
-            double minusOne = absMu < 0.5 ? gm1 - ash * absMu : Math.expm1(-a) + ash * oneMinusAbsMu;
+            double minusOne = absMu < 0.5 ? gammaMinusOne(eta, sh) - ash * absMu
+                    : Math.expm1(-a) + ash * oneMinusAbsMu;
             return new MotionFactor(Math.exp(-a) + ash * oneMinusAbsMu, minusOne);
         }
-        return new MotionFactor(Math.cosh(eta) + ash * absMu, gm1 + ash * absMu);
+        return new MotionFactor(Math.cosh(eta) + ash * absMu, gammaMinusOne(eta, sh) + ash * absMu);
+    }
+
+    /**
+     * cosh eta - 1 without cancellation, given sinh eta; past |eta| = 300 sinh^2 would overflow (at about 355),
+     * so the equal 2 sinh^2(eta / 2) is used there (finite up to the rapidity limit of 700).
+     */
+    private static double gammaMinusOne(double eta, double sh) {
+        if (Math.abs(eta) < 300) {
+            return sh * sh / (Math.cosh(eta) + 1);
+        }
+        double half = Math.sinh(eta / 2);
+        return 2 * half * half;
     }
 }

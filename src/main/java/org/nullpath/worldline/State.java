@@ -21,11 +21,11 @@ public record State(double clock, double timeSeconds, Vec3 position, Vec3 direct
 
     /** Speed as a fraction of c, signed along {@code direction}. */
     public double beta() {
-        return Math.tanh(rapidity);
+        return rapidity == 0 ? rapidity : Math.tanh(rapidity); // at rest (a station): tanh(+-0) = +-0, no call
     }
 
     public double gamma() {
-        return Math.cosh(rapidity);
+        return rapidity == 0 ? 1.0 : Math.cosh(rapidity); // cosh(0) = 1 exactly
     }
 
     /** Velocity in m/s. */
