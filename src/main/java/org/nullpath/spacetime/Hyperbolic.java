@@ -22,7 +22,7 @@ public final class Hyperbolic {
     /** Mission-time offset after proper time {@code du} from rapidity {@code eta} at acceleration {@code a}. */
     public static double timeOffset(double eta, double a, double du) {
         if (a == 0 || du == 0) {
-            return Math.cosh(eta) * du;
+            return coshOf(eta) * du;
         }
         double h = a * du / (2 * C);
         return du * sinhcLike(h) * Math.cosh(eta + h);
@@ -31,10 +31,23 @@ public final class Hyperbolic {
     /** Distance offset along the line after proper time {@code du}. */
     public static double distanceOffset(double eta, double a, double du) {
         if (a == 0 || du == 0) {
-            return C * Math.sinh(eta) * du;
+            return C * sinhOf(eta) * du;
         }
         double h = a * du / (2 * C);
         return C * du * sinhcLike(h) * Math.sinh(eta + h);
+    }
+
+    /**
+     * sinh and cosh of a rapidity, without a call at rest (a leg that starts from rest has rapidity 0 at its
+     * start, where every query of that leg begins): sinh(+-0) = +-0 and cosh(0) = 1 exactly, as the library
+     * functions give them.
+     */
+    private static double sinhOf(double eta) {
+        return eta == 0 ? eta : Math.sinh(eta);
+    }
+
+    private static double coshOf(double eta) {
+        return eta == 0 ? 1.0 : Math.cosh(eta);
     }
 
     /** sinh(h)/h, exact near zero. */
@@ -53,10 +66,10 @@ public final class Hyperbolic {
      */
     public static double properTimeForTime(double eta, double a, double dt) {
         if (a == 0 || dt == 0) {
-            return dt / Math.cosh(eta);
+            return dt / coshOf(eta);
         }
         double x = a * dt / C;
-        double b = Math.sinh(eta);
+        double b = sinhOf(eta);
         double dEta = deltaAsinh(b + x, b, x);
         return C * dEta / a;
     }
