@@ -9,6 +9,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.concurrent.ConcurrentHashMap;
 
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.annotations.XYTextAnnotation;
@@ -77,9 +78,14 @@ final class SpacetimeChart {
         return (int) Math.round(overhead + d.widthOverHeight() * a.getHeight());
     }
 
+    /** Data areas found so far, by width: each costs a drawing of the empty frame. */
+    private static final Map<Integer, Rectangle2D> AREAS = new ConcurrentHashMap<>();
+
     /** The data area of a drawing {@code width} px wide (the axis space is fixed, so it needs no data). */
     static Rectangle2D dataArea(int width) {
-        return Charts.dataArea(Charts.chart(frame("x", "t", 0, 1, 0, 1)), width, HEIGHT);
+        Rectangle2D a = AREAS.computeIfAbsent(width,
+                w -> Charts.dataArea(Charts.chart(frame("x", "t", 0, 1, 0, 1)), w, HEIGHT));
+        return new Rectangle2D.Double(a.getX(), a.getY(), a.getWidth(), a.getHeight()); // callers get their own
     }
 
     private static XYPlot frame(String xLabel, String yLabel, double x0, double x1, double y0, double y1) {
