@@ -374,7 +374,8 @@ final class Charts {
         return trim(Double.compare(v, 0.0) < 0 ? "-" + digits : digits);
     }
 
-    private static String trim(String s) {
+    /** Trailing zeroes and a bare point removed, "-0" as "0". */
+    static String trim(String s) {
         if (s.indexOf('.') >= 0) {
             int end = s.length();
             while (s.charAt(end - 1) == '0') {

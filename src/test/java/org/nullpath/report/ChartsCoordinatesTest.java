@@ -15,19 +15,9 @@ import org.junit.jupiter.api.Test;
  * non-finite ones.
  */
 class ChartsCoordinatesTest {
+    /** The Formatter's text, trimmed as the charts trim it. */
     private static String formatter(double v, int places) {
-        String s = String.format(Locale.ROOT, "%." + places + "f", v);
-        if (s.indexOf('.') >= 0) {
-            int end = s.length();
-            while (s.charAt(end - 1) == '0') {
-                end--;
-            }
-            if (s.charAt(end - 1) == '.') {
-                end--;
-            }
-            s = s.substring(0, end);
-        }
-        return s.equals("-0") ? "0" : s;
+        return Charts.trim(String.format(Locale.ROOT, "%." + places + "f", v));
     }
 
     private static void same(double v) {
