@@ -20,6 +20,7 @@ import org.nullpath.schedule.CutoffRow;
 import org.nullpath.schedule.HorizonRow;
 import org.nullpath.schedule.LinkTally;
 import org.nullpath.schedule.WindowFigures;
+import org.nullpath.schedule.WindowRow;
 
 /** The few lines {@code plan} prints when it is done. */
 final class TerminalSummary {
@@ -103,8 +104,9 @@ final class TerminalSummary {
             }
         }
         for (WindowFigures w : r.windows()) {
-            out.printf(Locale.ROOT, "  window on %-10s sends from %s to %s (sender's clock), closed by %s%n", w.window().link(),
-                    Readable.notBefore(w.window().opensClock()), Readable.notAfter(w.window().closesClock()), w.window().closedBy());
+            WindowRow edges = w.window();
+            out.printf(Locale.ROOT, "  window on %-10s sends from %s to %s (sender's clock), closed by %s%n", edges.link(),
+                    Readable.notBefore(edges.opensClock()), Readable.notAfter(edges.closesClock()), edges.closedBy());
         }
         for (Link link : s.links().values()) {
             for (String limit : LIMITS) {

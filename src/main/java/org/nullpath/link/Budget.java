@@ -125,9 +125,8 @@ public record Budget(FrequencyPlan frequency, double rxDataRateBps, Reception re
         if (noneInfinite(frequency.rxFrequencyHz(), frequency.dopplerRateHzPerS(), rxDataRateBps, 0, 0)) {
             return reception.beyondDoubleRange();
         }
-        Optional<String> shared = firstInfinite("received frequency", frequency.rxFrequencyHz(), "Doppler rate",
-                frequency.dopplerRateHzPerS(),
-                "received data rate", rxDataRateBps);
+        Optional<String> shared = firstInfinite("received frequency", frequency.rxFrequencyHz(),
+                "Doppler rate", frequency.dopplerRateHzPerS(), "received data rate", rxDataRateBps);
         return shared.isPresent() ? shared : reception.beyondDoubleRange();
     }
 

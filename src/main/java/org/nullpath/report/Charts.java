@@ -363,7 +363,7 @@ final class Charts {
      * {@code v} with {@code places} decimals as {@code String.format("%.Nf")} writes it (the decimal digits of
      * {@code Double.toString} rounded half up; a minus sign for every negative value, -0.0 included), then
      * trimmed. A chart has thousands of coordinates, and the formatter's parsing of its pattern on every call
-     * was most of the cost of drawing them ({@code ChartsTest} holds the two to the same text).
+     * was most of the cost of drawing them ({@code ChartsCoordinatesTest} holds the two to the same text).
      */
     static String fixed(double v, int places) {
         if (!Double.isFinite(v)) {

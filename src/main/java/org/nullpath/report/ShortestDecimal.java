@@ -33,7 +33,8 @@ final class ShortestDecimal {
     private static final long MASK_63 = (1L << 63) - 1;
 
     /** Eight bytes at once into a byte array, the first byte lowest. */
-    private static final VarHandle LONG_LE = MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
+    private static final VarHandle LONG_LE =
+            MethodHandles.byteArrayViewVarHandle(long[].class, ByteOrder.LITTLE_ENDIAN);
     /** '0' in every byte. */
     private static final long ZEROES = 0x3030_3030_3030_3030L;
 

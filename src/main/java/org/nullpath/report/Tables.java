@@ -65,7 +65,8 @@ public final class Tables {
     private static final Column<Budget> MAX_DATA_RATE = Column.number("max_data_rate_bps", "bit/s", "highest"
             + " sender-frame data rate that closes with zero margin", b -> b.reception().maxDataRateBps());
     private static final Column<Budget> WITHIN_DOPPLER_RATE = Column.flag("within_doppler_rate", "whether the Doppler"
-            + " rate's size is within max-doppler-rate (true when none is given)", b -> b.frequency().withinDopplerRate());
+            + " rate's size is within max-doppler-rate (true when none is given)",
+            b -> b.frequency().withinDopplerRate());
 
     /** The budget columns of a coherent (radio) link. */
     public static final List<Column<Budget>> COHERENT = budget(
@@ -200,8 +201,10 @@ public final class Tables {
     /** The columns of windows.csv. */
     public static final Table<WindowFigures> WINDOWS = new Table<>(List.of(
             Column.text("link", "the link", w -> w.window().link()),
-            Column.number("opens_send_clock_s", "s", "sender's clock where the window opens", w -> w.window().opensClock()),
-            Column.number("closes_send_clock_s", "s", "sender's clock where it closes", w -> w.window().closesClock()),
+            Column.number("opens_send_clock_s", "s", "sender's clock where the window opens",
+                    w -> w.window().opensClock()),
+            Column.number("closes_send_clock_s", "s", "sender's clock where it closes",
+                    w -> w.window().closesClock()),
             Column.text("closed_by", "what closes it: `margin`, `tuning`, `doppler-rate`, `horizon`, or `end` (of"
                     + " the scanned range)", w -> w.window().closedBy()),
             Column.number("send_open_s", "s", "how long it is open on the sender's clock: closes - opens",

@@ -119,7 +119,8 @@ public final class Windows {
     }
 
     private static double maxDataRate(LinkSchedule.Evaluated ev) {
-        return ev.arrival().flatMap(LinkSchedule.Arrival::budget).map(b -> b.reception().maxDataRateBps()).orElse(Double.NaN);
+        return ev.arrival().flatMap(LinkSchedule.Arrival::budget).map(b -> b.reception().maxDataRateBps())
+                .orElse(Double.NaN);
     }
 
     private static List<WindowRow> scanRange(WindowScan w, List<CrossingRow> crossings) {
@@ -279,10 +280,12 @@ public final class Windows {
                 return v;
             }
             Budget b = ev.arrival().get().budget().orElseThrow();
-            v[1] = Double.isNaN(b.reception().marginDb()) ? 1.0 : b.reception().marginDb(); // at one place the link trivially closes
-            v[2] = terms.hasTuningRange() ? b.frequency().rxFrequencyHz() - terms.tuningMinHz() : 1.0;
-            v[3] = terms.hasTuningRange() ? terms.tuningMaxHz() - b.frequency().rxFrequencyHz() : 1.0;
-            v[4] = terms.hasDopplerRateLimit() ? terms.maxDopplerRateHzPerS() - Math.abs(b.frequency().dopplerRateHzPerS()) : 1.0;
+            double margin = b.reception().marginDb();
+            Budget.FrequencyPlan f = b.frequency();
+            v[1] = Double.isNaN(margin) ? 1.0 : margin; // at one place the link trivially closes
+            v[2] = terms.hasTuningRange() ? f.rxFrequencyHz() - terms.tuningMinHz() : 1.0;
+            v[3] = terms.hasTuningRange() ? terms.tuningMaxHz() - f.rxFrequencyHz() : 1.0;
+            v[4] = terms.hasDopplerRateLimit() ? terms.maxDopplerRateHzPerS() - Math.abs(f.dopplerRateHzPerS()) : 1.0;
             return v;
         }
 
