@@ -270,6 +270,12 @@ class LightConeLawsTest {
         double kappa = Conditioning.ofLightTime(pa);
         assertEquals(distance / C, pa.lightTimeSeconds(), Math.max(1e-12, 8 * kappa * Conditioning.EPSILON)
                 * distance / C, "the arrival built in (condition number " + kappa + ")");
-        assertEquals(pb.lightTimeSeconds(), pa.lightTimeSeconds(), 1e-12 * pb.lightTimeSeconds());
+        // the two solves against each other: each is within a few times kappa x 1.1e-16 of the light time of these
+        // very doubles (LightCone; docs/physics.md), which is 1e-12 where the light time is well conditioned. A
+        // craft receding at gamma ~ 100 makes kappa ~ 2e4 (seed -7139318673150763067: the solves differ by
+        // 2.7e-12, and the plan itself counts such a light time as ill-conditioned), so the bar is the same
+        // as the built-in arrival's above
+        assertEquals(pb.lightTimeSeconds(), pa.lightTimeSeconds(), Math.max(1e-12, 8 * kappa * Conditioning.EPSILON)
+                * pb.lightTimeSeconds(), "the two solves (condition number " + kappa + ")");
     }
 }
