@@ -57,7 +57,7 @@ class ProfiledLegsMatchReferenceTest {
     static final double[] X = {1, 0, 0};
     /** Closed-form legs: the product's tolerance for times, clocks, light times, intervals, Doppler factors. */
     static final double CLOSED_TOL = 1e-12;
-    /** Integrated legs (thrust, sail, profile): the tolerance. */
+    /** Integrated legs (thrust, sail, profile): the tolerance the product promises for them (docs/testing.md, docs/legs.md). */
     static final double INTEGRATED_TOL = 1e-10;
     /** Frequency offsets, every leg kind. */
     static final double OFFSET_TOL = 1e-9;
