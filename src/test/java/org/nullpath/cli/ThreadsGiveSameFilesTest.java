@@ -16,7 +16,7 @@ import org.nullpath.testkit.ScenarioText;
 
 /**
  * A plan's files are the same, byte for byte, whatever the number of threads: messages are computed in chunks
- * of 4096 on several threads and written in send order, and the tallies are merged in order. The mission
+ * of 1024 on several threads and written in send order, and the tallies are merged in order. The mission
  * (invented) crosses chunk boundaries with arrivals and non-arrivals mixed: an uplink to a craft on an
  * open-ended burn passes the craft's horizon (c / g0 after launch, about 354 d, Rindler) in the middle of its
  * 10 001 messages, and the downlink carries a link budget.
