@@ -246,10 +246,7 @@ final class LinkCharts {
     private static void pointAhead(List<Plot> out, SampledSeries.LinkSeries ls, List<SampledSeries.Sample> samples,
                                    double[] x1, double[] x2, List<Charts.Mark> horizonMark,
                                    List<Charts.Key> horizonKey, String x1Label, String x2Label) {
-        double[] ahead = new double[samples.size()];
-        for (int i = 0; i < ahead.length; i++) {
-            ahead[i] = samples.get(i).directions().map(d -> d.pointAheadRadians() * 1e6).orElse(Double.NaN);
-        }
+        double[] ahead = column(samples, s -> s.directions().map(d -> d.pointAheadRadians() * 1e6).orElse(Double.NaN));
         if (Axes.extent(ahead).isEmpty()) {
             return;
         }
@@ -325,11 +322,7 @@ final class LinkCharts {
     }
 
     private static double[] budgetColumn(List<SampledSeries.Sample> samples, ToDoubleFunction<Budget> f) {
-        double[] out = new double[samples.size()];
-        for (int i = 0; i < out.length; i++) {
-            out[i] = samples.get(i).budget().map(f::applyAsDouble).orElse(Double.NaN);
-        }
-        return out;
+        return column(samples, s -> s.budget().map(f::applyAsDouble).orElse(Double.NaN));
     }
 
     private static double[] scaled(double[] v, Scales.Unit u) {
