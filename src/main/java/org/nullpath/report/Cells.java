@@ -20,11 +20,25 @@ public final class Cells {
         if (Double.isInfinite(v)) {
             throw new IllegalStateException("an infinite value reached an output file");
         }
-        if (whole(v)) {
-            return Long.toString((long) v);
-        }
         byte[] b = new byte[ShortestDecimal.MAX_BYTES];
-        return new String(b, 0, ShortestDecimal.write(v, b, 0), StandardCharsets.ISO_8859_1);
+        return new String(b, 0, num(v, b, 0), StandardCharsets.ISO_8859_1);
+    }
+
+    /**
+     * The text of {@link #num(double)} for a finite {@code v}, as ASCII bytes into {@code b} from {@code at}
+     * ({@link ShortestDecimal#MAX_BYTES} free); returns the index after the last byte. The one place both the
+     * text cells and the byte rows ({@link RowBytes}) take a number's form from.
+     */
+    static int num(double v, byte[] b, int at) {
+        if (!whole(v)) {
+            return ShortestDecimal.write(v, b, at);
+        }
+        long x = (long) v;
+        if (x < 0) {
+            b[at++] = '-';
+            x = -x;
+        }
+        return ShortestDecimal.whole(x, b, at);
     }
 
     /** Whether {@code v} is written as an integer: a whole number below 1e15 in magnitude, not -0. */

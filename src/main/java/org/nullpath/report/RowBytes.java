@@ -61,12 +61,8 @@ final class RowBytes {
         if (Double.isInfinite(v)) {
             throw new IllegalStateException("an infinite value reached column " + column);
         }
-        if (Cells.whole(v)) {
-            count((long) v);
-            return;
-        }
         room(ShortestDecimal.MAX_BYTES);
-        n = ShortestDecimal.write(v, b, n);
+        n = Cells.num(v, b, n);
     }
 
     /** A whole number's digits. */

@@ -217,7 +217,8 @@ final class ShortestDecimal {
 
     /**
      * The digits of a whole number {@code v >= 0} from {@code at}, without leading zeroes; returns the index
-     * after the last. {@code b} must have 24 bytes free from {@code at}.
+     * after the last. {@code b} must have 24 bytes free from {@code at} (16 for {@code v < 10^16}: every group
+     * is stored as eight bytes, whatever its digits).
      */
     static int whole(long v, byte[] b, int at) {
         if (v >= 10_000_000_000_000_000L) {
