@@ -38,16 +38,20 @@ public final class Hyperbolic {
     }
 
     /**
-     * sinh and cosh of a rapidity, without a call at rest (a leg that starts from rest has rapidity 0 at its
-     * start, where every query of that leg begins): sinh(+-0) = +-0 and cosh(0) = 1 exactly, as the library
-     * functions give them.
+     * sinh, cosh and tanh of a rapidity, without a call at rest (a station; a leg that starts from rest has
+     * rapidity 0 at its start, where every query of that leg begins): sinh(+-0) = tanh(+-0) = +-0 and
+     * cosh(0) = 1 exactly, as the library functions give them.
      */
-    private static double sinhOf(double eta) {
+    public static double sinhOf(double eta) {
         return eta == 0 ? eta : Math.sinh(eta);
     }
 
-    private static double coshOf(double eta) {
+    public static double coshOf(double eta) {
         return eta == 0 ? 1.0 : Math.cosh(eta);
+    }
+
+    public static double tanhOf(double eta) {
+        return eta == 0 ? eta : Math.tanh(eta);
     }
 
     /** sinh(h)/h, exact near zero. */

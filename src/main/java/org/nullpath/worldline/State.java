@@ -1,6 +1,7 @@
 package org.nullpath.worldline;
 
 import org.nullpath.spacetime.Event;
+import org.nullpath.spacetime.Hyperbolic;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
 
@@ -21,11 +22,11 @@ public record State(double clock, double timeSeconds, Vec3 position, Vec3 direct
 
     /** Speed as a fraction of c, signed along {@code direction}. */
     public double beta() {
-        return rapidity == 0 ? rapidity : Math.tanh(rapidity); // at rest (a station): tanh(+-0) = +-0, no call
+        return Hyperbolic.tanhOf(rapidity);
     }
 
     public double gamma() {
-        return rapidity == 0 ? 1.0 : Math.cosh(rapidity); // cosh(0) = 1 exactly
+        return Hyperbolic.coshOf(rapidity);
     }
 
     /** Velocity in m/s. */
