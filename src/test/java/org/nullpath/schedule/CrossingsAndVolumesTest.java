@@ -13,7 +13,6 @@ import org.nullpath.reference.RefSolver;
 import org.nullpath.reference.RefStation;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
-import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
@@ -54,26 +53,7 @@ class CrossingsAndVolumesTest {
      */
     private static String scenario(String stationBody, String from, String to, String rxGain, String receiverExtras,
                                    String window) {
-        return ScenarioText.titled("crossings check")
-                .station("home", stationBody)
-                .craft("probe", "heading: [1, 0, 0]", "burn: {acceleration: 0.5 g0, duration: forever}")
-                .then("""
-                links:
-                  up:
-                    from: %s
-                    to: %s
-                    carrier: 7.2 GHz
-                    transmitter: {power: 1 GW, antenna: {gain: 70 dBi}}
-                    receiver:
-                      antenna: {gain: %s}
-                      noise-temperature: 300 K
-                %s
-                    data-rate: 1 kbit/s
-                    required-eb-n0: 2.5 dB
-                windows:
-                  - %s
-                """.formatted(from, to, rxGain, receiverExtras, window))
-                .yaml();
+        return WindowMission.yaml("crossings check", stationBody, from, to, "1 GW", rxGain, receiverExtras, window);
     }
 
     private static WindowSurvey survey(String yaml) throws ScenarioException {

@@ -7,7 +7,6 @@ import org.junit.jupiter.api.Test;
 import org.nullpath.mission.Mission;
 import org.nullpath.scenario.ScenarioException;
 import org.nullpath.scenario.ScenarioLoader;
-import org.nullpath.testkit.ScenarioText;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.nullpath.testkit.Si.C;
@@ -27,26 +26,8 @@ class WindowsTest {
     static final double F = 7.2e9;
 
     private static String scenario(String receiverExtras, String transmitterPower, String window) {
-        return ScenarioText.titled("windows check")
-                .station("home", "{}")
-                .craft("probe", "heading: [1, 0, 0]", "burn: {acceleration: 0.5 g0, duration: forever}")
-                .then("""
-                links:
-                  up:
-                    from: home
-                    to: probe
-                    carrier: 7.2 GHz
-                    transmitter: {power: %s, antenna: {gain: 70 dBi}}
-                    receiver:
-                      antenna: {gain: 40 dBi}
-                      noise-temperature: 300 K
-                %s
-                    data-rate: 1 kbit/s
-                    required-eb-n0: 2.5 dB
-                windows:
-                  - %s
-                """.formatted(transmitterPower, receiverExtras, window))
-                .yaml();
+        return WindowMission.yaml("windows check", "{}", "home", "probe", transmitterPower, "40 dBi", receiverExtras,
+                window);
     }
 
     private static List<WindowRow> windows(String yaml) throws ScenarioException {
