@@ -104,9 +104,9 @@ public final class Deadlines {
             return false;
         }
         // round trip on the querier's clock, as an offset from the query's send state
-        double turnaroundSpan = responder.advanceClock(q.receive(), e.turnaround()).dtSeconds();
+        double turnaroundSpan = responder.timeChange(q.receive(), e.turnaround());
         double span = q.lightTimeSeconds() + turnaroundSpan + r.lightTimeSeconds();
-        double roundTrip = querier.advance(qs, span).dClockSeconds();
+        double roundTrip = querier.clockChange(qs, span);
         sink.accept(new ExchangeRow(k + 1, sendClock, q.receive().clock(), replyClock, r.receive().clock(),
                 roundTrip, true));
         return true;

@@ -87,9 +87,9 @@ public final class LinkSchedule {
      * Differencing two large clock readings instead would lose ~1e-12 relative 30 years in.
      */
     static double arrivalInterval(Worldline sender, Worldline receiver, SignalPath first, SignalPath second) {
-        double sendStep = sender.advanceClock(first.send(), second.send().clock() - first.send().clock()).dtSeconds();
+        double sendStep = sender.timeChange(first.send(), second.send().clock() - first.send().clock());
         double arrivalStep = sendStep + (second.lightTimeSeconds() - first.lightTimeSeconds());
-        return receiver.advance(first.receive(), arrivalStep).dClockSeconds();
+        return receiver.clockChange(first.receive(), arrivalStep);
     }
 
     /**

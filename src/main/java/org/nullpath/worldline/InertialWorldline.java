@@ -84,6 +84,16 @@ public final class InertialWorldline implements Worldline {
     }
 
     @Override
+    public double clockChange(State from, double dtSeconds) {
+        return dtSeconds / gamma;
+    }
+
+    @Override
+    public double timeChange(State from, double dClockSeconds) {
+        return dClockSeconds * gamma;
+    }
+
+    @Override
     public double properAccelerationAt(double timeSeconds) {
         return 0;
     }

@@ -127,18 +127,30 @@ public final class StraightLineCraft implements Worldline {
 
     /** Line state at a mission time. */
     public LineState lineAtTime(double t) {
+        return lineAtTime(t, true);
+    }
+
+    /**
+     * @param along whether to compute the distance along the line; without it the state's along is NaN, for the
+     *              clock and time changes only, which never read it
+     */
+    private LineState lineAtTime(double t, boolean along) {
         int i = segmentOfTime(t);
         Segment g = segments.get(i);
         LineState r = g.ref();
         Piece p = g.piece();
         double du = p.properTimeFor(Measure.TIME, r, t - r.timeSeconds());
-        return checked(new LineState(r.clock() + du, t, r.along() + p.offset(Measure.DISTANCE, r, du), p.rapidityAfter(r, du), i,
-                r.local() + du));
+        double s = along ? r.along() + p.offset(Measure.DISTANCE, r, du) : Double.NaN;
+        return checked(new LineState(r.clock() + du, t, s, p.rapidityAfter(r, du), i, r.local() + du), along);
     }
 
     private static LineState checked(LineState s) {
+        return checked(s, true);
+    }
+
+    private static LineState checked(LineState s, boolean along) {
         if (!(Math.abs(s.rapidity()) <= MAX_RAPIDITY) || !Double.isFinite(s.timeSeconds())
-                || !Double.isFinite(s.along()) || !Double.isFinite(s.clock())) {
+                || along && !Double.isFinite(s.along()) || !Double.isFinite(s.clock())) {
             throw new ArithmeticException("craft state beyond what double precision can hold (rapidity "
                     + s.rapidity() + ")");
         }
@@ -171,11 +183,24 @@ public final class StraightLineCraft implements Worldline {
 
     @Override
     public Step advanceClock(State from, double dClockSeconds) {
-        LineWalk w = walkClock(lineAtTime(from.timeSeconds()), dClockSeconds);
+        // the null offsets of walkClock are for the off-line cone only: not summed here
+        LineWalk w = walk(lineAtTime(from.timeSeconds()), dClockSeconds, Measure.CLOCK, false, true, false);
         Vec3 d = heading.times(w.dAlong());
         State end = new State(from.clock() + dClockSeconds, from.timeSeconds() + w.dt(), from.position().plus(d),
                 heading, w.end().rapidity());
         return new Step(w.dt(), dClockSeconds, d, end);
+    }
+
+    /** {@link #advance}'s clock change, walked without the distances along the line (two sinh a piece fewer). */
+    @Override
+    public double clockChange(State from, double dtSeconds) {
+        return walk(lineAtTime(from.timeSeconds(), false), dtSeconds, Measure.TIME, true, false, false).dClock();
+    }
+
+    /** {@link #advanceClock}'s time change, walked without the distances along the line. */
+    @Override
+    public double timeChange(State from, double dClockSeconds) {
+        return walk(lineAtTime(from.timeSeconds(), false), dClockSeconds, Measure.CLOCK, false, false, false).dt();
     }
 
     @Override
@@ -223,12 +248,12 @@ public final class StraightLineCraft implements Worldline {
 
     /** Moves by mission time {@code dt} (any sign). */
     public LineWalk walkTime(LineState from, double dt) {
-        return walk(from, dt, Measure.TIME, true, false);
+        return walk(from, dt, Measure.TIME, true, true, false);
     }
 
     /** Moves by craft-clock time {@code dClock} (any sign). */
     public LineWalk walkClock(LineState from, double dClock) {
-        return walk(from, dClock, Measure.CLOCK, false, true);
+        return walk(from, dClock, Measure.CLOCK, false, true, true);
     }
 
     /**
@@ -236,16 +261,20 @@ public final class StraightLineCraft implements Worldline {
      * signal travelling along +heading meets the craft there. {@link LineWalk#never()} when it never does.
      */
     public LineWalk walkU(LineState from, double dU) {
-        return walk(from, dU, Measure.U, false, false);
+        return walk(from, dU, Measure.U, false, true, false);
     }
 
     /** Moves until {@code V = c t + along} has changed by {@code dV} (any sign); see {@link #walkU}. */
     public LineWalk walkV(LineState from, double dV) {
-        return walk(from, dV, Measure.V, false, false);
+        return walk(from, dV, Measure.V, false, true, false);
     }
 
-    /** @param nulls whether to sum the U and V offsets too (else they are NaN): only the off-line cone needs them */
-    private LineWalk walk(LineState from, double amount, Measure m, boolean exactTime, boolean nulls) {
+    /**
+     * @param along whether to sum the distance along the line (else it and the end state's along are NaN): all
+     *              but the clock and time changes need it
+     * @param nulls whether to sum the U and V offsets too (else they are NaN): only the off-line cone needs them
+     */
+    private LineWalk walk(LineState from, double amount, Measure m, boolean exactTime, boolean along, boolean nulls) {
         if (amount == 0) {
             return new LineWalk(0, 0, 0, 0, 0, from);
         }
@@ -269,7 +298,9 @@ public final class StraightLineCraft implements Worldline {
                 if (forward ? rem > cap : rem < cap) {
                     dt += p.offset(Measure.TIME, cur, du);
                     dClock += du;
-                    dAlong += p.offset(Measure.DISTANCE, cur, du);
+                    if (along) {
+                        dAlong += p.offset(Measure.DISTANCE, cur, du);
+                    }
                     if (nulls) {
                         dU += p.offset(Measure.U, cur, du);
                         dV += p.offset(Measure.V, cur, du);
@@ -287,9 +318,9 @@ public final class StraightLineCraft implements Worldline {
                         Double.NaN, null);
             }
             double ddt = exactTime ? rem : p.offset(Measure.TIME, cur, du);
-            double dds = p.offset(Measure.DISTANCE, cur, du);
+            double dds = along ? p.offset(Measure.DISTANCE, cur, du) : Double.NaN;
             LineState end = checked(new LineState(cur.clock() + du, cur.timeSeconds() + ddt, cur.along() + dds,
-                    p.rapidityAfter(cur, du), i, cur.local() + du));
+                    p.rapidityAfter(cur, du), i, cur.local() + du), along);
             return nulls
                     ? new LineWalk(dt + ddt, dClock + du, dAlong + dds, dU + p.offset(Measure.U, cur, du), dV + p.offset(Measure.V, cur, du), end)
                     : new LineWalk(dt + ddt, dClock + du, dAlong + dds, Double.NaN, Double.NaN, end);

@@ -25,6 +25,20 @@ public interface Worldline {
     Step advanceClock(State from, double dClockSeconds);
 
     /**
+     * The own-clock change over mission time {@code dtSeconds} from {@code from}: the same number as
+     * {@code advance(from, dtSeconds).dClockSeconds()}, bit for bit, for callers that need only it (an
+     * implementation may skip the position, which costs a craft on a burn most of the move).
+     */
+    default double clockChange(State from, double dtSeconds) {
+        return advance(from, dtSeconds).dClockSeconds();
+    }
+
+    /** The mission-time change over own-clock time {@code dClockSeconds}: {@code advanceClock(...).dtSeconds()}, bit for bit. */
+    default double timeChange(State from, double dClockSeconds) {
+        return advanceClock(from, dClockSeconds).dtSeconds();
+    }
+
+    /**
      * Proper acceleration at mission time {@code timeSeconds}, m/s^2, signed along the state's
      * {@link State#direction()}; at a leg boundary, the value of the leg that starts there.
      */

@@ -176,6 +176,34 @@ class CraftWalksTest {
         assertWalks(LARK, LARK_REF, new double[] {1, 0, 0}, fromYears * YR, toYears * YR, INTEGRATED_TOL);
     }
 
+    /**
+     * The clock-only and time-only moves (the schedule's arrival intervals) are the full moves' own numbers,
+     * bit for bit, across closed-form and profiled legs in both directions and for a moving station; the full
+     * moves are held to the 50-digit reference above, and one of these again here.
+     */
+    @ParameterizedTest(name = "from {0} yr by {1} yr")
+    @CsvSource({
+        "0.10, 0.2", "0.00, 0.9", "0.30, 0.6", "0.90, 0.5", "1.40, -1.38", "0.80, -0.3", "-0.5, 0.4", "0.2, 1e-9",
+        "0.2, -3e-8", "0.2, 0",
+    })
+    void clockAndTimeChangesAreTheFullMovesNumbers(double fromYears, double byYears) {
+        List<Worldline> lines = List.of(KITE, LARK, InertialWorldline.of(Vec3.of(1e12, 0, -1e12),
+                Vec3.of(0.36 * C, 0.48 * C, 0), 500), InertialWorldline.atRest(Vec3.of(3e11, 1e11, 0)));
+        for (Worldline w : lines) {
+            State s = w.atClock(fromYears * YR);
+            double by = byYears * YR;
+            assertEquals(w.advance(s, by).dClockSeconds(), w.clockChange(s, by), () -> w + " clock change");
+            assertEquals(w.advanceClock(s, by).dtSeconds(), w.timeChange(s, by), () -> w + " time change");
+        }
+        if (byYears != 0) {
+            // the step as the difference of the two clocks the reference is given (exact when they are close: Sterbenz)
+            double from = fromYears * YR;
+            double to = from + byYears * YR;
+            double dt = KITE.timeChange(KITE.atClock(from), to - from);
+            close("kite time change", dt, differences(KITE_REF, unitHeading(), from, to)[0], CLOSED_TOL);
+        }
+    }
+
     @Test
     void aSignalChasingAnOpenEndedBurnMeetsItOnlyBelowTheAsymptote() {
         double a = 2 * G0;
