@@ -18,6 +18,7 @@ import java.security.NoSuchAlgorithmException;
 import java.util.ArrayList;
 import java.util.Comparator;
 import java.util.HexFormat;
+import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
@@ -25,7 +26,6 @@ import java.util.stream.Stream;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 
 /**
  * The record, kept in the output folder while a plan's files are moved into it, of what the move is to
@@ -42,7 +42,10 @@ final class CommitJournal {
     /** What a staging folder's name inside the output folder starts with. */
     static final String STAGE_PREFIX = ".nullpath-stage-";
 
-    private static final ObjectMapper JSON = new ObjectMapper();
+    /** Reads a record left by an interrupted plan (rare: set up only then; records are written by {@link JsonText}). */
+    private static final class Reader {
+        static final ObjectMapper JSON = new ObjectMapper();
+    }
 
     /** Told of each step of a commit as it is done (tests stop a commit there, as a kill would). */
     @FunctionalInterface
@@ -71,15 +74,14 @@ final class CommitJournal {
 
     /** Writes the record for {@code plan} into {@code dir}; once this returns, the commit is decided. */
     static void write(Path dir, Plan plan, Steps steps) throws IOException {
-        ObjectNode root = JSON.createObjectNode();
+        Map<String, Object> root = new LinkedHashMap<>();
         root.put("stage", plan.stage());
-        plan.moves().forEach(root.putArray("move")::add);
-        ObjectNode removals = root.putObject("remove");
-        plan.removals().forEach(removals::put);
+        root.put("move", plan.moves());
+        root.put("remove", plan.removals());
         Path draft = dir.resolve(DRAFT);
         try (FileChannel ch = FileChannel.open(draft, StandardOpenOption.CREATE, StandardOpenOption.TRUNCATE_EXISTING,
                 StandardOpenOption.WRITE)) {
-            ByteBuffer b = ByteBuffer.wrap(JSON.writeValueAsBytes(root));
+            ByteBuffer b = ByteBuffer.wrap(JsonText.compact(root));
             while (b.hasRemaining()) {
                 ch.write(b);
             }
@@ -115,7 +117,7 @@ final class CommitJournal {
     private static Plan read(Path record) throws IOException {
         JsonNode root;
         try {
-            root = JSON.readTree(record.toFile());
+            root = Reader.JSON.readTree(record.toFile());
         } catch (IOException e) {
             throw new IOException(record + " (left by an interrupted plan) cannot be read: " + e.getMessage(), e);
         }

@@ -9,8 +9,6 @@ import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 import org.nullpath.mission.Craft;
 import org.nullpath.mission.Mission;
 import org.nullpath.mission.Station;
@@ -140,7 +138,7 @@ final class SummaryJson {
         files.sort(null);
         root.put(OutputFolder.FILES_KEY, files);
         root.put(OutputFolder.DIGESTS_KEY, new TreeMap<>(written));
-        new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), root);
+        JsonText.pretty(file, root);
     }
 
     /** A leg's kind: its key in the scenario file. */

@@ -8,8 +8,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-import com.fasterxml.jackson.databind.ObjectMapper;
-import com.fasterxml.jackson.databind.SerializationFeature;
 
 import org.nullpath.mission.Sweep;
 import org.nullpath.schedule.SweepRow;
@@ -110,6 +108,6 @@ public final class SweepOutput {
             figures.put(names.get(i), SPREADS.json(spreads.get(i)));
         }
         root.put("figures", figures);
-        new ObjectMapper().enable(SerializationFeature.INDENT_OUTPUT).writeValue(file.toFile(), root);
+        JsonText.pretty(file, root);
     }
 }

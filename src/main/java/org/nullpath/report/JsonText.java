@@ -1,0 +1,80 @@
+package org.nullpath.report;
+
+import java.io.ByteArrayOutputStream;
+import java.io.IOException;
+import java.io.OutputStream;
+import java.math.BigDecimal;
+import java.math.BigInteger;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Map;
+
+import com.fasterxml.jackson.core.JsonFactory;
+import com.fasterxml.jackson.core.JsonGenerator;
+
+/**
+ * JSON text of a tree of maps, lists and plain values (the shape of summary.json, sweep-summary.json and the
+ * commit journal), written by jackson-core's generator alone. The data-binding layer gives the same bytes for
+ * such a tree (its map and list serialisers call the same generator methods) but costs several hundredths of a
+ * second to set up at every start, most of it on the way to the first message (docs/performance.md).
+ */
+final class JsonText {
+    private static final JsonFactory FACTORY = new JsonFactory();
+
+    private JsonText() {
+    }
+
+    /** {@code tree} as compact JSON in UTF-8. */
+    static byte[] compact(Object tree) throws IOException {
+        ByteArrayOutputStream out = new ByteArrayOutputStream();
+        try (JsonGenerator g = FACTORY.createGenerator(out)) {
+            value(g, tree);
+        }
+        return out.toByteArray();
+    }
+
+    /** {@code tree} into {@code file} as indented JSON (two spaces a level, "key" : value), UTF-8. */
+    static void pretty(Path file, Object tree) throws IOException {
+        try (OutputStream out = Files.newOutputStream(file); JsonGenerator g = FACTORY.createGenerator(out)) {
+            g.useDefaultPrettyPrinter();
+            value(g, tree);
+        }
+    }
+
+    private static void value(JsonGenerator g, Object v) throws IOException {
+        if (v == null) {
+            g.writeNull();
+        } else if (v instanceof Map<?, ?> m) {
+            g.writeStartObject();
+            for (Map.Entry<?, ?> e : m.entrySet()) {
+                g.writeFieldName(String.valueOf(e.getKey()));
+                value(g, e.getValue());
+            }
+            g.writeEndObject();
+        } else if (v instanceof Iterable<?> list) {
+            g.writeStartArray();
+            for (Object item : list) {
+                value(g, item);
+            }
+            g.writeEndArray();
+        } else if (v instanceof String s) {
+            g.writeString(s);
+        } else if (v instanceof Boolean b) {
+            g.writeBoolean(b);
+        } else if (v instanceof Double d) {
+            g.writeNumber(d);
+        } else if (v instanceof Long n) {
+            g.writeNumber(n);
+        } else if (v instanceof Integer n) {
+            g.writeNumber(n);
+        } else if (v instanceof BigDecimal n) {
+            g.writeNumber(n);
+        } else if (v instanceof BigInteger n) {
+            g.writeNumber(n);
+        } else if (v instanceof Enum<?> e) {
+            g.writeString(e.name());
+        } else {
+            throw new IllegalArgumentException("no JSON form for a " + v.getClass().getName());
+        }
+    }
+}
