@@ -24,8 +24,7 @@ public final class Hyperbolic {
         if (a == 0 || du == 0) {
             return coshOf(eta) * du;
         }
-        double h = a * du / (2 * C);
-        return du * sinhcLike(h) * Math.cosh(eta + h);
+        return timeOffset(eta, a, du, sinhc(a, du));
     }
 
     /** Distance offset along the line after proper time {@code du}. */
@@ -33,8 +32,27 @@ public final class Hyperbolic {
         if (a == 0 || du == 0) {
             return C * sinhOf(eta) * du;
         }
+        return distanceOffset(eta, a, du, sinhc(a, du));
+    }
+
+    /**
+     * sinh(h) / h for h = a du / (2 c), the factor that the time and distance offsets of a burn share: a caller
+     * that needs both computes it once ({@link #timeOffset(double, double, double, double)}). For a != 0, du != 0.
+     */
+    public static double sinhc(double a, double du) {
+        return sinhcLike(a * du / (2 * C));
+    }
+
+    /** {@link #timeOffset(double, double, double)} of a burn (a != 0, du != 0) given its {@link #sinhc}: the same bits. */
+    public static double timeOffset(double eta, double a, double du, double sinhc) {
         double h = a * du / (2 * C);
-        return C * du * sinhcLike(h) * Math.sinh(eta + h);
+        return du * sinhc * Math.cosh(eta + h);
+    }
+
+    /** {@link #distanceOffset(double, double, double)} of a burn (a != 0, du != 0) given its {@link #sinhc}: the same bits. */
+    public static double distanceOffset(double eta, double a, double du, double sinhc) {
+        double h = a * du / (2 * C);
+        return C * du * sinhc * Math.sinh(eta + h);
     }
 
     /**

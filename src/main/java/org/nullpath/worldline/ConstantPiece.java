@@ -39,6 +39,16 @@ record ConstantPiece(double a) implements Piece {
     }
 
     @Override
+    public Offsets timeAndDistance(LineState cur, double du) {
+        if (a == 0 || du == 0) {
+            return Piece.super.timeAndDistance(cur, du);
+        }
+        double eta = cur.rapidity();
+        double s = Hyperbolic.sinhc(a, du);
+        return new Offsets(Hyperbolic.timeOffset(eta, a, du, s), Hyperbolic.distanceOffset(eta, a, du, s));
+    }
+
+    @Override
     public double properTimeFor(Measure m, LineState cur, double amount) {
         double eta = cur.rapidity();
         return switch (m) {

@@ -26,6 +26,18 @@ interface Piece {
     double offset(Measure m, LineState cur, double du);
 
     /**
+     * The mission-time and distance offsets over {@code du} together, each the same bits as {@link #offset} gives
+     * it alone (a burn computes the factor they share once).
+     */
+    default Offsets timeAndDistance(LineState cur, double du) {
+        return new Offsets(offset(Measure.TIME, cur, du), offset(Measure.DISTANCE, cur, du));
+    }
+
+    /** A move's mission-time and distance offsets (seconds, metres). */
+    record Offsets(double time, double distance) {
+    }
+
+    /**
      * The proper time {@code du} (any sign) from {@code cur} over which {@code m} changes by {@code amount},
      * NaN when it never does within the piece. Every measure but {@link Measure#DISTANCE} (which may turn
      * back) can be inverted.

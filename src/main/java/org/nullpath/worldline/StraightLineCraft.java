@@ -121,8 +121,9 @@ public final class StraightLineCraft implements Worldline {
         LineState r = g.ref();
         double du = clock - r.clock();
         Piece p = g.piece();
-        return checked(new LineState(clock, r.timeSeconds() + p.offset(Measure.TIME, r, du), r.along() + p.offset(Measure.DISTANCE, r, du),
-                p.rapidityAfter(r, du), i, r.local() + du));
+        Piece.Offsets o = p.timeAndDistance(r, du);
+        return checked(new LineState(clock, r.timeSeconds() + o.time(), r.along() + o.distance(), p.rapidityAfter(r, du), i,
+                r.local() + du));
     }
 
     /** Line state at a mission time. */
@@ -296,11 +297,14 @@ public final class StraightLineCraft implements Worldline {
                 double du = boundary.local() - cur.local();
                 double cap = p.offset(m, cur, du);
                 if (forward ? rem > cap : rem < cap) {
-                    dt += p.offset(Measure.TIME, cur, du);
-                    dClock += du;
                     if (along) {
-                        dAlong += p.offset(Measure.DISTANCE, cur, du);
+                        Piece.Offsets o = p.timeAndDistance(cur, du);
+                        dt += o.time();
+                        dAlong += o.distance();
+                    } else {
+                        dt += p.offset(Measure.TIME, cur, du);
                     }
+                    dClock += du;
                     if (nulls) {
                         dU += p.offset(Measure.U, cur, du);
                         dV += p.offset(Measure.V, cur, du);
@@ -317,8 +321,16 @@ public final class StraightLineCraft implements Worldline {
                 return new LineWalk(Double.POSITIVE_INFINITY, Double.POSITIVE_INFINITY, Double.NaN, Double.NaN,
                         Double.NaN, null);
             }
-            double ddt = exactTime ? rem : p.offset(Measure.TIME, cur, du);
-            double dds = along ? p.offset(Measure.DISTANCE, cur, du) : Double.NaN;
+            double ddt;
+            double dds;
+            if (!exactTime && along) {
+                Piece.Offsets o = p.timeAndDistance(cur, du);
+                ddt = o.time();
+                dds = o.distance();
+            } else {
+                ddt = exactTime ? rem : p.offset(Measure.TIME, cur, du);
+                dds = along ? p.offset(Measure.DISTANCE, cur, du) : Double.NaN;
+            }
             LineState end = checked(new LineState(cur.clock() + du, cur.timeSeconds() + ddt, cur.along() + dds,
                     p.rapidityAfter(cur, du), i, cur.local() + du), along);
             return nulls
