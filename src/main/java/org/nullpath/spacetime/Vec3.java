@@ -28,8 +28,18 @@ public record Vec3(double x, double y, double z) {
         return new Vec3(y * o.z - z * o.y, z * o.x - x * o.z, x * o.y - y * o.x);
     }
 
-    /** Euclidean length, without overflow for large components. */
+    /**
+     * Euclidean length, without overflow for large components: hypot(hypot(x, y), z). A zero component adds
+     * nothing and is skipped, which gives the same bits (hypot(a, +-0) is |a| exactly, for every a), so a vector
+     * along an axis (a flight line along x, a station at the origin) takes no hypot at all.
+     */
     public double norm() {
+        if (z == 0) {
+            return y == 0 ? Math.abs(x) : x == 0 ? Math.abs(y) : Math.hypot(x, y);
+        }
+        if (x == 0 && y == 0) {
+            return Math.abs(z);
+        }
         return Math.hypot(Math.hypot(x, y), z);
     }
 
