@@ -1,7 +1,5 @@
 package org.nullpath.report;
 
-import java.math.BigDecimal;
-import java.math.BigInteger;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -39,8 +37,7 @@ class JsonTextTest {
         root.put("not a number", Double.NaN);
         root.put("infinite", Double.POSITIVE_INFINITY);
         root.put("whole", 3.0);
-        root.put("exact", new BigDecimal("1.2345678901234567890123"));
-        root.put("big", new BigInteger("123456789012345678901234567890"));
+        root.put("int extremes", List.of(Integer.MIN_VALUE, Integer.MAX_VALUE, Long.MIN_VALUE, Long.MAX_VALUE));
         root.put("yes", true);
         root.put("no", false);
         root.put("none", null);
@@ -72,5 +69,6 @@ class JsonTextTest {
     @Test
     void aValueWithNoJsonFormIsRefused() {
         assertThrows(IllegalArgumentException.class, () -> JsonText.compact(Map.of("x", new Object())));
+        assertThrows(IllegalArgumentException.class, () -> JsonText.compact(Map.of("x", 1.5f)));
     }
 }
