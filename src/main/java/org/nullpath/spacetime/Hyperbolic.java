@@ -43,13 +43,13 @@ public final class Hyperbolic {
         return sinhcLike(a * du / (2 * C));
     }
 
-    /** {@link #timeOffset(double, double, double)} of a burn (a != 0, du != 0) given its {@link #sinhc}: the same bits. */
+    /** {@link #timeOffset(double, double, double)} of a burn (a != 0, du != 0) given its {@link #sinhc}: same bits. */
     public static double timeOffset(double eta, double a, double du, double sinhc) {
         double h = a * du / (2 * C);
         return du * sinhc * Math.cosh(eta + h);
     }
 
-    /** {@link #distanceOffset(double, double, double)} of a burn (a != 0, du != 0) given its {@link #sinhc}: the same bits. */
+    /** {@link #distanceOffset(double, double, double)} of a burn (a != 0, du != 0) given its {@link #sinhc}. */
     public static double distanceOffset(double eta, double a, double du, double sinhc) {
         double h = a * du / (2 * C);
         return C * du * sinhc * Math.sinh(eta + h);

@@ -122,8 +122,8 @@ public final class StraightLineCraft implements Worldline {
         double du = clock - r.clock();
         Piece p = g.piece();
         Piece.Offsets o = p.timeAndDistance(r, du);
-        return checked(new LineState(clock, r.timeSeconds() + o.time(), r.along() + o.distance(), p.rapidityAfter(r, du), i,
-                r.local() + du));
+        return checked(new LineState(clock, r.timeSeconds() + o.time(), r.along() + o.distance(),
+                p.rapidityAfter(r, du), i, r.local() + du));
     }
 
     /** Line state at a mission time. */
