@@ -33,7 +33,7 @@ public interface Worldline {
         return advance(from, dtSeconds).dClockSeconds();
     }
 
-    /** The mission-time change over own-clock time {@code dClockSeconds}: {@code advanceClock(...).dtSeconds()}, bitwise. */
+    /** Mission-time change over own-clock time {@code dClockSeconds}: {@code advanceClock(...).dtSeconds()}, bitwise. */
     default double timeChange(State from, double dClockSeconds) {
         return advanceClock(from, dClockSeconds).dtSeconds();
     }
