@@ -212,7 +212,8 @@ public final class LightCone {
         State there = craft.toState(at);
         // first guess: the light time to the craft were it to keep its present velocity, on its clock
         double guess = inertialLightTime(there.position().minus(send.position()), there.velocity()) / there.gamma();
-        StraightLineCraft.LineWalk w = offLineRoot(du -> craft.walkClock(at, du), a0, 1, perpendicular.norm(), guess);
+        StraightLineCraft.LineWalk w = offLineRoot(du -> craft.walkClockNulls(at, du), du -> craft.walkClock(at, du), a0, 1,
+                perpendicular.norm(), guess);
         double dz = 0.5 * (w.dV() - w.dU()) - a0;
         Vec3 path = craft.heading().times(dz).minus(perpendicular);
         return new SignalPath(send, craft.toState(w.end()), w.dt(), path, false);
@@ -227,7 +228,8 @@ public final class LightCone {
         State there = craft.toState(at);
         double guess = inertialLightTime(there.position().minus(receive.position()), there.velocity().times(-1))
                 / there.gamma();
-        StraightLineCraft.LineWalk w = offLineRoot(du -> craft.walkClock(at, -du), a0, -1, perpendicular.norm(), guess);
+        StraightLineCraft.LineWalk w = offLineRoot(du -> craft.walkClockNulls(at, -du), du -> craft.walkClock(at, -du), a0,
+                -1, perpendicular.norm(), guess);
         // photon displacement: receive minus emit = (b - along_emit) heading + perpendicular
         double dzEmit = a0 + 0.5 * (w.dV() - w.dU()); // along_emit - b
         Vec3 path = perpendicular.minus(craft.heading().times(dzEmit));
@@ -246,19 +248,30 @@ public final class LightCone {
      */
     static StraightLineCraft.LineWalk offLineRoot(java.util.function.DoubleFunction<StraightLineCraft.LineWalk> walk,
                                                           double a0, double s, double rho, double guess) {
+        return offLineRoot(walk, walk, a0, s, rho, guess);
+    }
+
+    /**
+     * {@link #offLineRoot(java.util.function.DoubleFunction, double, double, double, double)} with the Newton steps
+     * taken by {@code probe}, which need give only dU, dV and the end rapidity (as {@code walk} gives them, bit for
+     * bit); the walk returned is {@code walk}'s, whole.
+     */
+    static StraightLineCraft.LineWalk offLineRoot(java.util.function.DoubleFunction<StraightLineCraft.LineWalk> probe,
+                                                  java.util.function.DoubleFunction<StraightLineCraft.LineWalk> walk,
+                                                  double a0, double s, double rho, double guess) {
         double lo = 0;
         double hi = Double.POSITIVE_INFINITY;
         double x = guess > 0 && Double.isFinite(guess) ? guess : 1.0;
         double lastStep = Double.NaN;
         for (int i = 0; i < MAX_EVALUATIONS; i++) {
-            StraightLineCraft.LineWalk w = walk.apply(x);
+            StraightLineCraft.LineWalk w = probe.apply(x);
             double a = (a0 + s * w.dU()) / rho;
             double b = (-a0 + s * w.dV()) / rho;
             double next = Double.NaN;
             if (a > 0 && b > 0) {
                 double g = Math.log(a) + Math.log(b);
                 if (g == 0) {
-                    return w;
+                    return walk.apply(x);
                 }
                 if (g > 0) {
                     hi = x;

@@ -142,15 +142,16 @@ public final class StraightLineCraft implements Worldline {
         Piece p = g.piece();
         double du = p.properTimeFor(Measure.TIME, r, t - r.timeSeconds());
         double s = along ? r.along() + p.offset(Measure.DISTANCE, r, du) : Double.NaN;
-        return checked(new LineState(r.clock() + du, t, s, p.rapidityAfter(r, du), i, r.local() + du), along);
+        return checked(new LineState(r.clock() + du, t, s, p.rapidityAfter(r, du), i, r.local() + du), true, along);
     }
 
     private static LineState checked(LineState s) {
-        return checked(s, true);
+        return checked(s, true, true);
     }
 
-    private static LineState checked(LineState s, boolean along) {
-        if (!(Math.abs(s.rapidity()) <= MAX_RAPIDITY) || !Double.isFinite(s.timeSeconds())
+    /** @param time, along whether the state's mission time and along were computed (else they are NaN, unchecked) */
+    private static LineState checked(LineState s, boolean time, boolean along) {
+        if (!(Math.abs(s.rapidity()) <= MAX_RAPIDITY) || time && !Double.isFinite(s.timeSeconds())
                 || along && !Double.isFinite(s.along()) || !Double.isFinite(s.clock())) {
             throw new ArithmeticException("craft state beyond what double precision can hold (rapidity "
                     + s.rapidity() + ")");
@@ -185,7 +186,7 @@ public final class StraightLineCraft implements Worldline {
     @Override
     public Step advanceClock(State from, double dClockSeconds) {
         // the null offsets of walkClock are for the off-line cone only: not summed here
-        LineWalk w = walk(lineAtTime(from.timeSeconds()), dClockSeconds, Measure.CLOCK, false, true, false);
+        LineWalk w = walk(lineAtTime(from.timeSeconds()), dClockSeconds, Measure.CLOCK, false, Sums.TIME_AND_DISTANCE);
         Vec3 d = heading.times(w.dAlong());
         State end = new State(from.clock() + dClockSeconds, from.timeSeconds() + w.dt(), from.position().plus(d),
                 heading, w.end().rapidity());
@@ -195,13 +196,13 @@ public final class StraightLineCraft implements Worldline {
     /** {@link #advance}'s clock change, walked without the distances along the line (two sinh a piece fewer). */
     @Override
     public double clockChange(State from, double dtSeconds) {
-        return walk(lineAtTime(from.timeSeconds(), false), dtSeconds, Measure.TIME, true, false, false).dClock();
+        return walk(lineAtTime(from.timeSeconds(), false), dtSeconds, Measure.TIME, true, Sums.TIME).dClock();
     }
 
     /** {@link #advanceClock}'s time change, walked without the distances along the line. */
     @Override
     public double timeChange(State from, double dClockSeconds) {
-        return walk(lineAtTime(from.timeSeconds(), false), dClockSeconds, Measure.CLOCK, false, false, false).dt();
+        return walk(lineAtTime(from.timeSeconds(), false), dClockSeconds, Measure.CLOCK, false, Sums.TIME).dt();
     }
 
     @Override
@@ -249,12 +250,21 @@ public final class StraightLineCraft implements Worldline {
 
     /** Moves by mission time {@code dt} (any sign). */
     public LineWalk walkTime(LineState from, double dt) {
-        return walk(from, dt, Measure.TIME, true, true, false);
+        return walk(from, dt, Measure.TIME, true, Sums.TIME_AND_DISTANCE);
     }
 
     /** Moves by craft-clock time {@code dClock} (any sign). */
     public LineWalk walkClock(LineState from, double dClock) {
-        return walk(from, dClock, Measure.CLOCK, false, true, true);
+        return walk(from, dClock, Measure.CLOCK, false, Sums.ALL);
+    }
+
+    /**
+     * {@link #walkClock} summing only the null offsets: its dU, dV and end rapidity are walkClock's own bits, while
+     * dt, dAlong and the end state's mission time and along are NaN (the off-line cone's Newton steps read nothing
+     * else, and skip a burn's sinh and cosh for time and distance).
+     */
+    public LineWalk walkClockNulls(LineState from, double dClock) {
+        return walk(from, dClock, Measure.CLOCK, false, Sums.NULLS);
     }
 
     /**
@@ -262,20 +272,39 @@ public final class StraightLineCraft implements Worldline {
      * signal travelling along +heading meets the craft there. {@link LineWalk#never()} when it never does.
      */
     public LineWalk walkU(LineState from, double dU) {
-        return walk(from, dU, Measure.U, false, true, false);
+        return walk(from, dU, Measure.U, false, Sums.TIME_AND_DISTANCE);
     }
 
     /** Moves until {@code V = c t + along} has changed by {@code dV} (any sign); see {@link #walkU}. */
     public LineWalk walkV(LineState from, double dV) {
-        return walk(from, dV, Measure.V, false, true, false);
+        return walk(from, dV, Measure.V, false, Sums.TIME_AND_DISTANCE);
     }
 
-    /**
-     * @param along whether to sum the distance along the line (else it and the end state's along are NaN): all
-     *              but the clock and time changes need it
-     * @param nulls whether to sum the U and V offsets too (else they are NaN): only the off-line cone needs them
-     */
-    private LineWalk walk(LineState from, double amount, Measure m, boolean exactTime, boolean along, boolean nulls) {
+    /** What a walk sums besides the craft clock; a sum it skips is NaN, in the walk and in its end state. */
+    private enum Sums {
+        /** mission time: the clock and time changes */
+        TIME(true, false, false),
+        /** mission time and the distance along the line: every move that ends in a whole state */
+        TIME_AND_DISTANCE(true, true, false),
+        /** those and the null offsets U and V: the off-line cone's answer */
+        ALL(true, true, true),
+        /** the null offsets alone: the off-line cone's Newton steps */
+        NULLS(false, false, true);
+
+        final boolean time;
+        final boolean along;
+        final boolean nulls;
+
+        Sums(boolean time, boolean along, boolean nulls) {
+            this.time = time;
+            this.along = along;
+            this.nulls = nulls;
+        }
+    }
+
+    private LineWalk walk(LineState from, double amount, Measure m, boolean exactTime, Sums sums) {
+        boolean along = sums.along;
+        boolean nulls = sums.nulls;
         if (amount == 0) {
             return new LineWalk(0, 0, 0, 0, 0, from);
         }
@@ -301,7 +330,7 @@ public final class StraightLineCraft implements Worldline {
                         Piece.Offsets o = p.timeAndDistance(cur, du);
                         dt += o.time();
                         dAlong += o.distance();
-                    } else {
+                    } else if (sums.time) {
                         dt += p.offset(Measure.TIME, cur, du);
                     }
                     dClock += du;
@@ -328,11 +357,11 @@ public final class StraightLineCraft implements Worldline {
                 ddt = o.time();
                 dds = o.distance();
             } else {
-                ddt = exactTime ? rem : p.offset(Measure.TIME, cur, du);
+                ddt = exactTime ? rem : sums.time ? p.offset(Measure.TIME, cur, du) : Double.NaN;
                 dds = along ? p.offset(Measure.DISTANCE, cur, du) : Double.NaN;
             }
             LineState end = checked(new LineState(cur.clock() + du, cur.timeSeconds() + ddt, cur.along() + dds,
-                    p.rapidityAfter(cur, du), i, cur.local() + du), along);
+                    p.rapidityAfter(cur, du), i, cur.local() + du), sums.time, along);
             return nulls
                     ? new LineWalk(dt + ddt, dClock + du, dAlong + dds, dU + p.offset(Measure.U, cur, du), dV + p.offset(Measure.V, cur, du), end)
                     : new LineWalk(dt + ddt, dClock + du, dAlong + dds, Double.NaN, Double.NaN, end);

@@ -204,6 +204,27 @@ class CraftWalksTest {
         }
     }
 
+    /**
+     * The off-line cone's Newton steps walk by clock summing only the null offsets: dU, dV, the clock step and the
+     * end rapidity are walkClock's own bits (the answer is then walked whole), and what is skipped is NaN.
+     */
+    @ParameterizedTest(name = "from {0} yr by {1} yr")
+    @CsvSource({"0.10, 0.2", "0.00, 0.9", "0.90, 0.5", "1.40, -1.38", "-0.5, 0.4", "0.2, 1e-9", "0.2, -3e-8"})
+    void aNullsOnlyClockWalkGivesTheClockWalksNullOffsets(double fromYears, double byYears) {
+        for (StraightLineCraft craft : List.of(KITE, LARK)) {
+            LineState start = craft.lineAtClock(fromYears * YR);
+            StraightLineCraft.LineWalk whole = craft.walkClock(start, byYears * YR);
+            StraightLineCraft.LineWalk nulls = craft.walkClockNulls(start, byYears * YR);
+            assertEquals(whole.dU(), nulls.dU(), "dU");
+            assertEquals(whole.dV(), nulls.dV(), "dV");
+            assertEquals(whole.dClock(), nulls.dClock(), "clock step");
+            assertEquals(whole.end().rapidity(), nulls.end().rapidity(), "end rapidity");
+            assertEquals(whole.end().clock(), nulls.end().clock(), "end clock");
+            assertTrue(Double.isNaN(nulls.dt()) && Double.isNaN(nulls.dAlong()) && Double.isNaN(nulls.end().timeSeconds())
+                    && Double.isNaN(nulls.end().along()), "what is not summed is NaN");
+        }
+    }
+
     @Test
     void aSignalChasingAnOpenEndedBurnMeetsItOnlyBelowTheAsymptote() {
         double a = 2 * G0;
