@@ -30,8 +30,8 @@ import org.nullpath.worldline.Worldline;
  *   <li>a straight-line craft with the other event on its flight line: closed forms in the null
  *   coordinates {@code c t -+ s}, walked leg by leg ({@link StraightLineCraft#walkU});</li>
  *   <li>a straight-line craft with the other event off its flight line: A B = rho^2 in null-coordinate
- *   offsets, solved in the craft's proper time by a bracketed Hipparchus Brent solver (see
- *   {@code futureOffLine});</li>
+ *   offsets, solved in the craft's proper time by Newton's method on ln(A / rho) + ln(B / rho) inside a
+ *   bracket ({@code offLineRoot}, see {@code futureOffLine});</li>
  *   <li>any other {@link Worldline} implementation (none ships today): a bracketed Brent solver on F(T),
  *   to a relative accuracy of {@value #RELATIVE_ACCURACY} in T.</li>
  * </ul>
@@ -202,7 +202,7 @@ public final class LightCone {
      * the craft's pieces give without cancellation, so h(du) = A B - rho^2 is evaluated to a few ulps of
      * rho^2 even for a craft fleeing at high gamma (where c T - |dr| loses 2 gamma^2 of precision). h is
      * negative while A or B is not positive and increases strictly once both are, so its root in the
-     * craft's proper time du is unique; Brent finds it to {@value #RELATIVE_ACCURACY} relative.
+     * craft's proper time du is unique; {@link #offLineRoot} finds it to {@value #RELATIVE_ACCURACY} relative.
      */
     private static SignalPath futureOffLine(State send, StraightLineCraft craft) {
         double b = craft.alongOf(send.position());
