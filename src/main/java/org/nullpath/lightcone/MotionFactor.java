@@ -1,5 +1,6 @@
 package org.nullpath.lightcone;
 
+import org.nullpath.spacetime.Hyperbolic;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.worldline.State;
 
@@ -48,22 +49,10 @@ public record MotionFactor(double value, double minusOne) {
             // value - 1: within 60 degrees of the line of motion from expm1(-|eta|); nearer the perpendicular the
             // two terms of that form (about -|eta| and +|eta|) cancel for a slow body, and (cosh eta - 1) -
             // |sinh eta| |mu| does not (it cancels only where the offset itself passes through zero)
-            double minusOne = absMu < 0.5 ? gammaMinusOne(eta, sh) - ash * absMu
+            double minusOne = absMu < 0.5 ? Hyperbolic.gammaMinusOne(eta, sh) - ash * absMu
                     : Math.expm1(-a) + ash * oneMinusAbsMu;
             return new MotionFactor(Math.exp(-a) + ash * oneMinusAbsMu, minusOne);
         }
-        return new MotionFactor(Math.cosh(eta) + ash * absMu, gammaMinusOne(eta, sh) + ash * absMu);
-    }
-
-    /**
-     * cosh eta - 1 without cancellation, given sinh eta; past |eta| = 300 sinh^2 would overflow (at about 355),
-     * so the equal 2 sinh^2(eta / 2) is used there (finite up to the rapidity limit of 700).
-     */
-    private static double gammaMinusOne(double eta, double sh) {
-        if (Math.abs(eta) < 300) {
-            return sh * sh / (Math.cosh(eta) + 1);
-        }
-        double half = Math.sinh(eta / 2);
-        return 2 * half * half;
+        return new MotionFactor(Math.cosh(eta) + ash * absMu, Hyperbolic.gammaMinusOne(eta, sh) + ash * absMu);
     }
 }

@@ -211,9 +211,21 @@ public final class Hyperbolic {
         return atanh((beta1 - beta0) / (1 - beta1 * beta0));
     }
 
-    /** gamma - 1 = (gamma beta)^2 / (gamma + 1), exact for small rapidities. */
+    /** gamma - 1, exact for small rapidities: {@link #gammaMinusOne(double, double)} with its own sinh. */
     public static double gammaMinusOne(double eta) {
-        double sh = Math.sinh(eta);
-        return sh * sh / (Math.cosh(eta) + 1);
+        return gammaMinusOne(eta, Math.sinh(eta));
+    }
+
+    /**
+     * cosh eta - 1 = sinh^2 eta / (cosh eta + 1) without cancellation, given {@code sinhEta} = sinh eta (a caller
+     * that has it saves the call); past |eta| = 300 sinh^2 would overflow (at about 355), so the equal
+     * 2 sinh^2(eta / 2) is used there (finite up to the rapidity limit of 700).
+     */
+    public static double gammaMinusOne(double eta, double sinhEta) {
+        if (Math.abs(eta) < 300) {
+            return sinhEta * sinhEta / (Math.cosh(eta) + 1);
+        }
+        double half = Math.sinh(eta / 2);
+        return 2 * half * half;
     }
 }
