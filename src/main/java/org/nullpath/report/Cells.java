@@ -30,15 +30,7 @@ public final class Cells {
      * text cells and the byte rows ({@link RowBytes}) take a number's form from.
      */
     static int num(double v, byte[] b, int at) {
-        if (!whole(v)) {
-            return ShortestDecimal.write(v, b, at);
-        }
-        long x = (long) v;
-        if (x < 0) {
-            b[at++] = '-';
-            x = -x;
-        }
-        return ShortestDecimal.whole(x, b, at);
+        return whole(v) ? ShortestDecimal.signedWhole((long) v, b, at) : ShortestDecimal.write(v, b, at);
     }
 
     /** Whether {@code v} is written as an integer: a whole number below 1e15 in magnitude, not -0. */

@@ -68,17 +68,7 @@ final class RowBytes {
     /** A whole number's digits. */
     void count(long v) {
         room(25);
-        if (v == Long.MIN_VALUE) {
-            byte[] s = Long.toString(v).getBytes(StandardCharsets.US_ASCII);
-            System.arraycopy(s, 0, b, n, s.length);
-            n += s.length;
-            return;
-        }
-        if (v < 0) {
-            b[n++] = '-';
-            v = -v;
-        }
-        n = ShortestDecimal.whole(v, b, n);
+        n = ShortestDecimal.signedWhole(v, b, n);
     }
 
     void flag(boolean v) {

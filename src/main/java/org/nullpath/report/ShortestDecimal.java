@@ -4,6 +4,7 @@ import java.lang.invoke.MethodHandles;
 import java.lang.invoke.VarHandle;
 import java.math.BigInteger;
 import java.nio.ByteOrder;
+import java.nio.charset.StandardCharsets;
 
 /**
  * The shortest decimal that parses back to a double, written as ASCII bytes straight into a caller's array:
@@ -213,6 +214,23 @@ final class ShortestDecimal {
     private static int eightDigits(int m, byte[] b, int i) {
         LONG_LE.set(b, i, digits(m));
         return i + 8;
+    }
+
+    /**
+     * Any whole number's digits from {@code at}, a minus sign first when it is negative; returns the index after
+     * the last. {@code b} must have 25 bytes free from {@code at} (17 for |v| < 10^16).
+     */
+    static int signedWhole(long v, byte[] b, int at) {
+        if (v == Long.MIN_VALUE) { // -v does not exist
+            byte[] s = Long.toString(v).getBytes(StandardCharsets.US_ASCII);
+            System.arraycopy(s, 0, b, at, s.length);
+            return at + s.length;
+        }
+        if (v < 0) {
+            b[at++] = '-';
+            return whole(-v, b, at);
+        }
+        return whole(v, b, at);
     }
 
     /**

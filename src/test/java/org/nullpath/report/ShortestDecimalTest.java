@@ -123,4 +123,25 @@ class ShortestDecimalTest {
             check.accept(r.nextLong(Long.MAX_VALUE) >>> r.nextInt(63));
         }
     }
+
+    /** Signed whole numbers against Long.toString, the extremes included (-2^63 has no positive twin). */
+    @Test
+    void signedWholeNumbersAsLongToStringWritesThem() {
+        byte[] b = new byte[40];
+        java.util.function.LongConsumer check = v -> {
+            int n = ShortestDecimal.signedWhole(v, b, 3);
+            assertEquals(Long.toString(v), new String(b, 3, n - 3, StandardCharsets.ISO_8859_1));
+        };
+        for (long v = -100_000; v <= 100_000; v++) {
+            check.accept(v);
+        }
+        for (long v : new long[] {Long.MIN_VALUE, Long.MIN_VALUE + 1, Long.MAX_VALUE, -999_999_999_999_999L,
+            -10_000_000_000_000_000L, -(1L << 53)}) {
+            check.accept(v);
+        }
+        SplittableRandom r = new SplittableRandom(12);
+        for (int i = 0; i < 1_000_000; i++) {
+            check.accept(r.nextLong() >> r.nextInt(63));
+        }
+    }
 }
