@@ -25,7 +25,6 @@ import java.util.TreeMap;
 import java.util.stream.Stream;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 
 /**
  * The record, kept in the output folder while a plan's files are moved into it, of what the move is to
@@ -41,11 +40,6 @@ final class CommitJournal {
     static final String DRAFT = NAME + ".new";
     /** What a staging folder's name inside the output folder starts with. */
     static final String STAGE_PREFIX = ".nullpath-stage-";
-
-    /** Reads a record left by an interrupted plan (rare: set up only then; records are written by {@link JsonText}). */
-    private static final class Reader {
-        static final ObjectMapper JSON = new ObjectMapper();
-    }
 
     /** Told of each step of a commit as it is done (tests stop a commit there, as a kill would). */
     @FunctionalInterface
@@ -117,7 +111,7 @@ final class CommitJournal {
     private static Plan read(Path record) throws IOException {
         JsonNode root;
         try {
-            root = Reader.JSON.readTree(record.toFile());
+            root = JsonText.read(record);
         } catch (IOException e) {
             throw new IOException(record + " (left by an interrupted plan) cannot be read: " + e.getMessage(), e);
         }

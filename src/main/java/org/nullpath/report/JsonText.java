@@ -9,18 +9,31 @@ import java.util.Map;
 
 import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonGenerator;
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
 
 /**
  * JSON text of a tree of maps, lists, strings, booleans, doubles, whole numbers (Long, Integer), enum
  * constants and nulls (the shape of summary.json, sweep-summary.json and the commit journal), written by
- * jackson-core's generator alone. The data-binding layer gives the same bytes for
- * such a tree (its map and list serialisers call the same generator methods) but costs several hundredths of a
- * second to set up at every start, most of it on the way to the first message (docs/performance.md).
+ * jackson-core's generator alone and read back ({@link #read}) by the data-binding layer. That layer would
+ * write the same bytes for such a tree (its map and list serialisers call the same generator methods) but
+ * costs several hundredths of a second to set up, so it is set up only when a file is read, which a plan into
+ * a new folder never does (docs/performance.md).
  */
 final class JsonText {
     private static final JsonFactory FACTORY = new JsonFactory();
 
+    /** Reads a file written earlier (set up only when one is read: an earlier plan's summary, a left journal). */
+    private static final class Reader {
+        static final ObjectMapper JSON = new ObjectMapper();
+    }
+
     private JsonText() {
+    }
+
+    /** The JSON tree in {@code file}. */
+    static JsonNode read(Path file) throws IOException {
+        return Reader.JSON.readTree(file.toFile());
     }
 
     /** {@code tree} as compact JSON in UTF-8. */

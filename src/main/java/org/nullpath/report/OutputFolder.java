@@ -17,7 +17,6 @@ import java.util.TreeMap;
 import java.util.concurrent.ConcurrentHashMap;
 
 import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.ObjectMapper;
 import org.nullpath.mission.OutputNames;
 
 /**
@@ -193,7 +192,7 @@ public final class OutputFolder implements AutoCloseable {
             return digests;
         }
         try {
-            JsonNode written = new ObjectMapper().readTree(summary.toFile()).get(DIGESTS_KEY);
+            JsonNode written = JsonText.read(summary).get(DIGESTS_KEY);
             if (written != null && written.isObject()) {
                 written.fields().forEachRemaining(e -> {
                     String n = e.getKey();
