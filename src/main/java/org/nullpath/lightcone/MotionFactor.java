@@ -1,5 +1,6 @@
 package org.nullpath.lightcone;
 
+import org.nullpath.spacetime.Elementary;
 import org.nullpath.spacetime.Hyperbolic;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.worldline.State;
@@ -42,7 +43,7 @@ public record MotionFactor(double value, double minusOne) {
         }
         double absMu = Math.abs(mu);
         double oneMinusAbsMu = sin2 / (1 + absMu);
-        double sh = Math.sinh(eta);
+        double sh = Elementary.sinh(eta);
         double ash = Math.abs(sh);
         if (eta * mu >= 0) {
             double a = Math.abs(eta);
@@ -50,9 +51,9 @@ public record MotionFactor(double value, double minusOne) {
             // two terms of that form (about -|eta| and +|eta|) cancel for a slow body, and (cosh eta - 1) -
             // |sinh eta| |mu| does not (it cancels only where the offset itself passes through zero)
             double minusOne = absMu < 0.5 ? Hyperbolic.gammaMinusOne(eta, sh) - ash * absMu
-                    : Math.expm1(-a) + ash * oneMinusAbsMu;
+                    : Elementary.expm1(-a) + ash * oneMinusAbsMu;
             return new MotionFactor(Math.exp(-a) + ash * oneMinusAbsMu, minusOne);
         }
-        return new MotionFactor(Math.cosh(eta) + ash * absMu, Hyperbolic.gammaMinusOne(eta, sh) + ash * absMu);
+        return new MotionFactor(Elementary.cosh(eta) + ash * absMu, Hyperbolic.gammaMinusOne(eta, sh) + ash * absMu);
     }
 }

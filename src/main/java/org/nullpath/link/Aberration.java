@@ -1,6 +1,7 @@
 package org.nullpath.link;
 
 import org.nullpath.lightcone.MotionFactor;
+import org.nullpath.spacetime.Elementary;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.worldline.State;
 
@@ -51,9 +52,9 @@ public final class Aberration {
         double a = Math.abs(eta);
         double along;
         if (eta * mu >= 0) {
-            along = Math.signum(eta) * (Math.exp(-a) - Math.cosh(a) * (sin2 / (1 + absMu)));
+            along = Math.signum(eta) * (Math.exp(-a) - Elementary.cosh(a) * (sin2 / (1 + absMu)));
         } else {
-            along = -Math.signum(eta) * (Math.cosh(a) * absMu + Math.sinh(a));
+            along = -Math.signum(eta) * (Elementary.cosh(a) * absMu + Elementary.sinh(a));
         }
         Vec3 v = k.minus(n.times(mu)).plus(n.times(along));
         double g = f.value();

@@ -46,13 +46,13 @@ public final class Hyperbolic {
     /** {@link #timeOffset(double, double, double)} of a burn (a != 0, du != 0) given its {@link #sinhc}: same bits. */
     public static double timeOffset(double eta, double a, double du, double sinhc) {
         double h = a * du / (2 * C);
-        return du * sinhc * Math.cosh(eta + h);
+        return du * sinhc * Elementary.cosh(eta + h);
     }
 
     /** {@link #distanceOffset(double, double, double)} of a burn (a != 0, du != 0) given its {@link #sinhc}. */
     public static double distanceOffset(double eta, double a, double du, double sinhc) {
         double h = a * du / (2 * C);
-        return C * du * sinhc * Math.sinh(eta + h);
+        return C * du * sinhc * Elementary.sinh(eta + h);
     }
 
     /**
@@ -61,15 +61,15 @@ public final class Hyperbolic {
      * cosh(0) = 1 exactly, as the library functions give them.
      */
     public static double sinhOf(double eta) {
-        return eta == 0 ? eta : Math.sinh(eta);
+        return eta == 0 ? eta : Elementary.sinh(eta);
     }
 
     public static double coshOf(double eta) {
-        return eta == 0 ? 1.0 : Math.cosh(eta);
+        return eta == 0 ? 1.0 : Elementary.cosh(eta);
     }
 
     public static double tanhOf(double eta) {
-        return eta == 0 ? eta : Math.tanh(eta);
+        return eta == 0 ? eta : Elementary.tanh(eta);
     }
 
     /** sinh(h)/h, exact near zero. */
@@ -79,7 +79,7 @@ public final class Hyperbolic {
             double h2 = h * h;
             return 1 + h2 / 6 * (1 + h2 / 20);
         }
-        return Math.sinh(h) / h;
+        return Elementary.sinh(h) / h;
     }
 
     /**
@@ -121,14 +121,14 @@ public final class Hyperbolic {
      */
     public static double asinh(double x) {
         double ax = Math.abs(x);
-        double r = ax > 1e150 ? Math.log(2) + Math.log(ax) : Math.log1p(ax + ax * ax / (1 + Math.sqrt(1 + ax * ax)));
+        double r = ax > 1e150 ? Math.log(2) + Math.log(ax) : Elementary.log1p(ax + ax * ax / (1 + Math.sqrt(1 + ax * ax)));
         return Math.copySign(r, x);
     }
 
     /** atanh(x) = log1p(2x / (1 - x)) / 2, |x| < 1, exact to an ulp or two near 0 and near 1. */
     public static double atanh(double x) {
         double ax = Math.abs(x);
-        return Math.copySign(0.5 * Math.log1p(2 * ax / (1 - ax)), x);
+        return Math.copySign(0.5 * Elementary.log1p(2 * ax / (1 - ax)), x);
     }
 
     /** sqrt(1 + x^2), the cosh of asinh(x), without overflow (and faster than Math.hypot). */
@@ -162,7 +162,7 @@ public final class Hyperbolic {
         if (Math.abs(y) < 1e-8) {
             return 1 - y / 2 + y * y / 3;
         }
-        return Math.log1p(y) / y;
+        return Elementary.log1p(y) / y;
     }
 
     /** Offset of {@code U = ct - s} after proper time {@code du}. */
@@ -188,7 +188,7 @@ public final class Hyperbolic {
         if (Math.abs(x) < 1e-8) {
             return 1 + x / 2 + x * x / 6;
         }
-        return Math.expm1(x) / x;
+        return Elementary.expm1(x) / x;
     }
 
     /** Rapidity of a speed given as a fraction of c, |beta| < 1. */
@@ -213,7 +213,7 @@ public final class Hyperbolic {
 
     /** gamma - 1, exact for small rapidities: {@link #gammaMinusOne(double, double)} with its own sinh. */
     public static double gammaMinusOne(double eta) {
-        return gammaMinusOne(eta, Math.sinh(eta));
+        return gammaMinusOne(eta, Elementary.sinh(eta));
     }
 
     /**
@@ -223,9 +223,9 @@ public final class Hyperbolic {
      */
     public static double gammaMinusOne(double eta, double sinhEta) {
         if (Math.abs(eta) < 300) {
-            return sinhEta * sinhEta / (Math.cosh(eta) + 1);
+            return sinhEta * sinhEta / (Elementary.cosh(eta) + 1);
         }
-        double half = Math.sinh(eta / 2);
+        double half = Elementary.sinh(eta / 2);
         return 2 * half * half;
     }
 }

@@ -2,6 +2,7 @@ package org.nullpath.worldline;
 
 import java.util.Optional;
 
+import org.nullpath.spacetime.Elementary;
 import org.nullpath.spacetime.Hyperbolic;
 import org.nullpath.spacetime.Vec3;
 import org.nullpath.units.Constants;
@@ -28,7 +29,7 @@ public final class InertialWorldline implements Worldline {
         this.clockOffset = clockOffset;
         this.direction = speed == 0 ? new Vec3(1, 0, 0) : velocity.unit();
         this.rapidity = Hyperbolic.atanh(speed / Constants.C);
-        this.gamma = Math.cosh(rapidity);
+        this.gamma = Elementary.cosh(rapidity);
     }
 
     /** A station at {@code position} at mission time 0, moving with {@code velocity} (m/s), clock offset in s. */

@@ -1,5 +1,6 @@
 package org.nullpath.worldline;
 
+import org.nullpath.spacetime.Elementary;
 import org.nullpath.spacetime.Hyperbolic;
 import org.nullpath.units.Constants;
 
@@ -123,7 +124,7 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
             }
             double eta = start.state().rapidity() + a * limit / C;
             throw refusal(what + " is not reached before " + limitName + " (after " + num(limit)
-                    + " s of craft clock, at speed " + num(Math.tanh(eta)) + " c)");
+                    + " s of craft clock, at speed " + num(Elementary.tanh(eta)) + " c)");
         }
 
         @Override
@@ -144,7 +145,7 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
             double eta = start.state().rapidity();
             double target = speed / C;
             double dEta = Math.abs(eta) < 0.5
-                    ? Hyperbolic.deltaRapidity(target, Math.tanh(eta))
+                    ? Hyperbolic.deltaRapidity(target, Elementary.tanh(eta))
                     : Hyperbolic.rapidityOfBeta(target) - eta;
             if (dEta == 0) {
                 return 0;
@@ -152,7 +153,7 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
             if (a == 0 || Math.signum(dEta) != Math.signum(a)) {
                 throw refusal("until-speed " + num(speed / C) + " c is never reached: the leg's acceleration "
                         + (a == 0 ? "is zero" : "points away from it") + " (speed at the leg start "
-                        + num(Math.tanh(eta)) + " c)");
+                        + num(Elementary.tanh(eta)) + " c)");
             }
             return withinLimit(C * dEta / a, "until-speed " + num(speed / C) + " c");
         }
@@ -165,7 +166,7 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
             }
             double eta = start.state().rapidity();
             if (a == 0) {
-                double v = C * Math.sinh(eta);
+                double v = C * Elementary.sinh(eta);
                 if (v == 0 || Math.signum(v) != Math.signum(d)) {
                     throw refusal("until-distance is never reached: the craft coasts "
                             + (v == 0 ? "at rest" : "the other way"));
@@ -173,8 +174,8 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
                 return withinLimit(d / v, "until-distance " + num(d) + " m");
             }
             double x = a * d / Constants.C2;
-            double ch = Math.cosh(eta);
-            double sh = Math.sinh(eta);
+            double ch = Elementary.cosh(eta);
+            double sh = Elementary.sinh(eta);
             double q = sh * sh + x * (2 * ch + x); // sinh^2(eta1)
             if (!(q >= 0)) {
                 throw refusal("until-distance is never reached: the burn turns the craft round before it gets there");
@@ -241,8 +242,8 @@ public abstract sealed class LegFlight permits LegFlight.ClosedForm, LegFlight.I
         }
 
         private String speeds() {
-            return "speed at the leg start " + num(Math.tanh(start.state().rapidity())) + " c, at its end "
-                    + num(Math.tanh(piece.rapidityAfter(start.state(), limit))) + " c";
+            return "speed at the leg start " + num(Elementary.tanh(start.state().rapidity())) + " c, at its end "
+                    + num(Elementary.tanh(piece.rapidityAfter(start.state(), limit))) + " c";
         }
 
         @Override

@@ -12,6 +12,7 @@ import org.hipparchus.ode.events.AdaptableInterval;
 import org.hipparchus.ode.events.ODEEventDetector;
 import org.hipparchus.ode.events.ODEEventHandler;
 import org.hipparchus.ode.nonstiff.DormandPrince853Integrator;
+import org.nullpath.spacetime.Elementary;
 import org.nullpath.units.Constants;
 import org.nullpath.worldline.IntegratedPiece.Law;
 
@@ -58,7 +59,7 @@ final class LegIntegration {
                 }
                 double eta = Math.max(-CLAMP, Math.min(CLAMP, y[ETA]));
                 // Math.sinh, not (e^eta - e^-eta)/2, which cancels to noise at small rapidity
-                return new double[] {law.at(u, eta) / C, Math.cosh(eta), Math.sinh(eta), Math.exp(-eta), Math.exp(eta)};
+                return new double[] {law.at(u, eta) / C, Elementary.cosh(eta), Elementary.sinh(eta), Math.exp(-eta), Math.exp(eta)};
             }
         };
     }
