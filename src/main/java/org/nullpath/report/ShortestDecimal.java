@@ -2,7 +2,6 @@ package org.nullpath.report;
 
 import java.lang.invoke.MethodHandles;
 import java.lang.invoke.VarHandle;
-import java.math.BigInteger;
 import java.nio.ByteOrder;
 import java.nio.charset.StandardCharsets;
 
@@ -15,8 +14,7 @@ import java.nio.charset.StandardCharsets;
  *
  * <p>Numbers are the bulk of every output file, and this writes them without a String or any other object
  * per number. {@code ShortestDecimalTest} holds it, byte for byte, to the same algorithm as jackson-core
- * ships it, and every value to {@code Double.parseDouble}. The table of 126-bit powers of ten is computed
- * once, exactly, with BigInteger: g(k) = floor(10^-k 2^-r) + 1 with 2^125 <= 10^-k 2^-r < 2^126.
+ * ships it, and every value to {@code Double.parseDouble}. The 126-bit powers of ten are {@link SchubfachTable}'s.
  */
 final class ShortestDecimal {
     /** Most bytes one double takes: sign, 17 digits, point, 'E', exponent sign and three digits. */
@@ -28,8 +26,7 @@ final class ShortestDecimal {
     private static final int BQ_MASK = (1 << 11) - 1;
     private static final long T_MASK = (1L << (P - 1)) - 1;
     private static final long C_TINY = 3; // below this, a subnormal's significand takes one more digit
-    private static final int K_MIN = -324;
-    private static final int K_MAX = 292;
+    private static final int K_MIN = SchubfachTable.K_MIN;
     private static final int H = 17; // digits of the decimal significand kept
     private static final long MASK_63 = (1L << 63) - 1;
 
@@ -41,28 +38,13 @@ final class ShortestDecimal {
 
     private static final long[] POW10 = new long[H + 1];
     /** g1(k) and g0(k) for k = K_MIN..K_MAX, at 2 (k - K_MIN) and 2 (k - K_MIN) + 1. */
-    private static final long[] G = new long[2 * (K_MAX - K_MIN + 1)];
+    private static final long[] G = SchubfachTable.G;
 
     static {
         long p = 1;
         for (int i = 0; i <= H; i++) {
             POW10[i] = p;
             p *= 10;
-        }
-        BigInteger mask63 = BigInteger.ONE.shiftLeft(63).subtract(BigInteger.ONE);
-        for (int k = K_MIN; k <= K_MAX; k++) {
-            BigInteger beta;
-            if (k <= 0) { // 10^-k is a whole number N: beta = N 2^-r with r = bitLength(N) - 126
-                BigInteger n = BigInteger.TEN.pow(-k);
-                int r = n.bitLength() - 126;
-                beta = r >= 0 ? n.shiftRight(r) : n.shiftLeft(-r);
-            } else { // 10^-k = 1 / D: beta = 2^s / D with s = bitLength(D) + 125 (D is not a power of two)
-                BigInteger d = BigInteger.TEN.pow(k);
-                beta = BigInteger.ONE.shiftLeft(d.bitLength() + 125).divide(d);
-            }
-            BigInteger g = beta.add(BigInteger.ONE);
-            G[2 * (k - K_MIN)] = g.shiftRight(63).longValueExact();
-            G[2 * (k - K_MIN) + 1] = g.and(mask63).longValueExact();
         }
     }
 
