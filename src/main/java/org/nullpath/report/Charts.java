@@ -4,8 +4,6 @@ import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Stroke;
 import java.awt.geom.Rectangle2D;
-import java.math.BigDecimal;
-import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -362,16 +360,61 @@ final class Charts {
     /**
      * {@code v} with {@code places} decimals as {@code String.format("%.Nf")} writes it (the decimal digits of
      * {@code Double.toString} rounded half up; a minus sign for every negative value, -0.0 included), then
-     * trimmed. A chart has thousands of coordinates, and the formatter's parsing of its pattern on every call
-     * was most of the cost of drawing them ({@code ChartsCoordinatesTest} holds the two to the same text).
+     * trimmed. A chart has thousands of coordinates: the formatter's parsing of its pattern on every call, and
+     * then BigDecimal's rounding, were most of the cost of drawing them, so the digits are rounded here as text
+     * ({@code ChartsCoordinatesTest} holds the result to the formatter's).
      */
     static String fixed(double v, int places) {
         if (!Double.isFinite(v)) {
             return trim(String.format(Locale.ROOT, "%." + places + "f", v));
         }
-        String digits = new BigDecimal(Double.toString(Math.abs(v))).setScale(places, RoundingMode.HALF_UP)
-                .toPlainString();
+        String digits = halfUp(Double.toString(Math.abs(v)), places);
         return trim(Double.compare(v, 0.0) < 0 ? "-" + digits : digits);
+    }
+
+    /**
+     * A non-negative {@code Double.toString} text ({@code 123.45}, {@code 1.0E-5}, {@code 1.234E10}) rounded half
+     * up to {@code places} decimals and written plainly with exactly that many: what
+     * {@code new BigDecimal(s).setScale(places, RoundingMode.HALF_UP).toPlainString()} gives.
+     */
+    static String halfUp(String s, int places) {
+        int e = s.indexOf('E');
+        String mantissa = e < 0 ? s : s.substring(0, e);
+        int point = mantissa.indexOf('.');
+        // the digits, and how many of them stand before the decimal point (may be <= 0, or beyond them all)
+        StringBuilder d = new StringBuilder(mantissa.length() + places + 2)
+                .append(mantissa, 0, point).append(mantissa, point + 1, mantissa.length());
+        int whole = point + (e < 0 ? 0 : Integer.parseInt(s.substring(e + 1)));
+        if (whole < 1) { // leading zeroes, so that at least one digit stands before the point
+            d.insert(0, "0".repeat(1 - whole));
+            whole = 1;
+        }
+        int keep = whole + places;
+        boolean up = keep < d.length() && d.charAt(keep) >= '5';
+        if (keep < d.length()) {
+            d.setLength(keep);
+        }
+        while (d.length() < keep) {
+            d.append('0');
+        }
+        if (up) { // add one in the last kept place, carrying
+            int i = keep - 1;
+            while (i >= 0 && d.charAt(i) == '9') {
+                d.setCharAt(i--, '0');
+            }
+            if (i < 0) {
+                d.insert(0, '1');
+                whole++;
+            } else {
+                d.setCharAt(i, (char) (d.charAt(i) + 1));
+            }
+        }
+        int lead = 0;
+        while (lead < whole - 1 && d.charAt(lead) == '0') {
+            lead++;
+        }
+        String integer = d.substring(lead, whole);
+        return places == 0 ? integer : integer + "." + d.substring(whole);
     }
 
     /** Trailing zeroes and a bare point removed, "-0" as "0". */

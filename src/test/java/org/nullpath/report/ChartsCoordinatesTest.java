@@ -2,6 +2,8 @@ package org.nullpath.report;
 
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
+import java.math.BigDecimal;
+import java.math.RoundingMode;
 import java.util.Locale;
 import java.util.SplittableRandom;
 
@@ -42,6 +44,29 @@ class ChartsCoordinatesTest {
             same(r.nextDouble(-100, 1000)); // a chart's pixels
             same(Math.round(r.nextDouble(-1e4, 1e4) * 1000) / 1000.0 + 0.0005 * r.nextInt(-1, 2)); // near ties
             same(Double.longBitsToDouble(r.nextLong())); // anything at all
+        }
+    }
+
+    /** The text rounding under the coordinates against java.math.BigDecimal's HALF_UP, places 0 to 6. */
+    @Test
+    void textRoundingIsBigDecimalsHalfUp() {
+        String[] edges = {"0.0", "0.5", "0.05", "0.005", "9.995", "99.995", "0.995", "9.5E-3", "5.0E-3", "9.9999E-5",
+            "1.0E-5", "4.9E-324", "9.999999999999999E22", "1.7976931348623157E308", "999.9999", "1.0E7", "2.675"};
+        for (String s : edges) {
+            for (int places = 0; places <= 6; places++) {
+                assertEquals(new BigDecimal(s).setScale(places, RoundingMode.HALF_UP).toPlainString(),
+                        Charts.halfUp(s, places), s + " to " + places);
+            }
+        }
+        SplittableRandom r = new SplittableRandom(7);
+        for (int i = 0; i < 100_000; i++) {
+            double v = Math.abs(i % 2 == 0 ? Double.longBitsToDouble(r.nextLong()) : r.nextDouble(0, 2000));
+            if (Double.isFinite(v)) {
+                String s = Double.toString(v);
+                int places = r.nextInt(0, 7);
+                assertEquals(new BigDecimal(s).setScale(places, RoundingMode.HALF_UP).toPlainString(),
+                        Charts.halfUp(s, places), s + " to " + places);
+            }
         }
     }
 }
