@@ -12,7 +12,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Spec;
 
-/** The {@code nullpath} command: dispatches to {@code plan} and {@code check}. */
+/** The {@code nullpath} command: dispatches to {@code plan}, {@code check} and {@code sweep}. */
 @Command(name = "nullpath", mixinStandardHelpOptions = true, versionProvider = Main.Version.class,
         description = {
             "Signal timing, Doppler, horizons and link budgets for craft that accelerate for long periods.",
