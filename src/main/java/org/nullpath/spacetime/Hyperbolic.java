@@ -101,6 +101,17 @@ public final class Hyperbolic {
      * cancellation: for arguments of one sign it uses asinh((A-B)(A+B)/(A sqrt(1+B^2) + B sqrt(1+A^2))).
      */
     public static double deltaAsinh(double a, double b, double aMinusB) {
+        if (b == 0 && a != 0 && Double.isFinite(a)) {
+            // from rest (every query in a leg that starts from rest): in the product form below cosh(b) is 1,
+            // the denominator is a, and sum / denominator is exactly 1, so it gives asinh(aMinusB) exactly;
+            // this skips its two square roots and its division
+            return asinh(aMinusB);
+        }
+        return deltaAsinhProduct(a, b, aMinusB);
+    }
+
+    /** {@link #deltaAsinh} by its product form alone (package-private for the test of the shortcut from rest). */
+    static double deltaAsinhProduct(double a, double b, double aMinusB) {
         if (a * b >= 0) {
             double ca = cosh(a);
             double cb = cosh(b);
