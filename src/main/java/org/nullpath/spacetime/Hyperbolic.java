@@ -132,7 +132,8 @@ public final class Hyperbolic {
      */
     public static double asinh(double x) {
         double ax = Math.abs(x);
-        double r = ax > 1e150 ? Math.log(2) + Math.log(ax) : Elementary.log1p(ax + ax * ax / (1 + Math.sqrt(1 + ax * ax)));
+        double r = ax > 1e150 ? Math.log(2) + Math.log(ax)
+                : Elementary.log1p(ax + ax * ax / (1 + Math.sqrt(1 + ax * ax)));
         return Math.copySign(r, x);
     }
 

@@ -59,7 +59,8 @@ final class LegIntegration {
                 }
                 double eta = Math.max(-CLAMP, Math.min(CLAMP, y[ETA]));
                 // Math.sinh, not (e^eta - e^-eta)/2, which cancels to noise at small rapidity
-                return new double[] {law.at(u, eta) / C, Elementary.cosh(eta), Elementary.sinh(eta), Math.exp(-eta), Math.exp(eta)};
+                return new double[] {law.at(u, eta) / C, Elementary.cosh(eta), Elementary.sinh(eta), Math.exp(-eta),
+                    Math.exp(eta)};
             }
         };
     }

@@ -87,7 +87,8 @@ class ElementaryTest {
 
     private static void assertNone(Failures failures, long atLeast) {
         if (failures.count > 0) {
-            fail(failures.count + " mismatches in " + failures.checked + ", the first: " + String.join("; ", failures.first));
+            fail(failures.count + " mismatches in " + failures.checked + ", the first: "
+                    + String.join("; ", failures.first));
         }
         assertTrue(failures.checked >= atLeast, () -> failures.checked + " arguments checked");
     }
