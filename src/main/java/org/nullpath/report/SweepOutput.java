@@ -8,7 +8,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 
-
 import org.nullpath.mission.Sweep;
 import org.nullpath.schedule.SweepRow;
 

@@ -101,14 +101,22 @@ class ShortestDecimalTest {
         }
     }
 
+    /** A writer of a whole number's digits into an array from an index, returning the index after them. */
+    private interface WholeWriter {
+        int write(long v, byte[] b, int at);
+    }
+
+    /** {@code writer}'s digits of {@code v}, written from index 5 of a fresh array, are Long.toString's. */
+    private static void assertWritesLongToString(WholeWriter writer, long v) {
+        byte[] b = new byte[40];
+        int n = writer.write(v, b, 5);
+        assertEquals(Long.toString(v), new String(b, 5, n - 5, StandardCharsets.ISO_8859_1));
+    }
+
     /** Whole numbers against Long.toString: every value up to 10^6, each power of ten and its neighbours, random. */
     @Test
     void wholeNumbersAsLongToStringWritesThem() {
-        byte[] b = new byte[40];
-        java.util.function.LongConsumer check = v -> {
-            int n = ShortestDecimal.whole(v, b, 5);
-            assertEquals(Long.toString(v), new String(b, 5, n - 5, StandardCharsets.ISO_8859_1));
-        };
+        java.util.function.LongConsumer check = v -> assertWritesLongToString(ShortestDecimal::whole, v);
         for (long v = 0; v <= 1_000_000; v++) {
             check.accept(v);
         }
@@ -127,11 +135,7 @@ class ShortestDecimalTest {
     /** Signed whole numbers against Long.toString, the extremes included (-2^63 has no positive twin). */
     @Test
     void signedWholeNumbersAsLongToStringWritesThem() {
-        byte[] b = new byte[40];
-        java.util.function.LongConsumer check = v -> {
-            int n = ShortestDecimal.signedWhole(v, b, 3);
-            assertEquals(Long.toString(v), new String(b, 3, n - 3, StandardCharsets.ISO_8859_1));
-        };
+        java.util.function.LongConsumer check = v -> assertWritesLongToString(ShortestDecimal::signedWhole, v);
         for (long v = -100_000; v <= 100_000; v++) {
             check.accept(v);
         }
