@@ -212,8 +212,9 @@ public final class LightCone {
         State there = craft.toState(at);
         // first guess: the light time to the craft were it to keep its present velocity, on its clock
         double guess = inertialLightTime(there.position().minus(send.position()), there.velocity()) / there.gamma();
+        // forward on the craft's clock the search may not pass the last reading its state can be held at
         StraightLineCraft.LineWalk w = offLineRoot(du -> craft.walkClockNulls(at, du), du -> craft.walkClock(at, du), a0, 1,
-                perpendicular.norm(), guess);
+                perpendicular.norm(), guess, craft.maxClock() - at.clock());
         double dz = 0.5 * (w.dV() - w.dU()) - a0;
         Vec3 path = craft.heading().times(dz).minus(perpendicular);
         return new SignalPath(send, craft.toState(w.end()), w.dt(), path, false);
@@ -229,7 +230,7 @@ public final class LightCone {
         double guess = inertialLightTime(there.position().minus(receive.position()), there.velocity().times(-1))
                 / there.gamma();
         StraightLineCraft.LineWalk w = offLineRoot(du -> craft.walkClockNulls(at, -du), du -> craft.walkClock(at, -du), a0,
-                -1, perpendicular.norm(), guess);
+                -1, perpendicular.norm(), guess, Double.POSITIVE_INFINITY);
         // photon displacement: receive minus emit = (b - along_emit) heading + perpendicular
         double dzEmit = a0 + 0.5 * (w.dV() - w.dU()); // along_emit - b
         Vec3 path = perpendicular.minus(craft.heading().times(dzEmit));
@@ -248,20 +249,24 @@ public final class LightCone {
      */
     static StraightLineCraft.LineWalk offLineRoot(java.util.function.DoubleFunction<StraightLineCraft.LineWalk> walk,
                                                           double a0, double s, double rho, double guess) {
-        return offLineRoot(walk, walk, a0, s, rho, guess);
+        return offLineRoot(walk, walk, a0, s, rho, guess, Double.POSITIVE_INFINITY);
     }
 
     /**
      * {@link #offLineRoot(java.util.function.DoubleFunction, double, double, double, double)} with the Newton steps
      * taken by {@code probe}, which need give only dU, dV and the end rapidity (as {@code walk} gives them, bit for
-     * bit); the walk returned is {@code walk}'s, whole.
+     * bit); the walk returned is {@code walk}'s, whole. No step is tried beyond {@code maxStep}, past which the
+     * craft's state cannot be held in doubles (an open-ended burn beyond {@link StraightLineCraft#MAX_RAPIDITY}):
+     * while no upper end is known, a step beyond it is cut to it, and a root beyond it is an ArithmeticException.
      */
     static StraightLineCraft.LineWalk offLineRoot(java.util.function.DoubleFunction<StraightLineCraft.LineWalk> probe,
                                                   java.util.function.DoubleFunction<StraightLineCraft.LineWalk> walk,
-                                                  double a0, double s, double rho, double guess) {
+                                                  double a0, double s, double rho, double guess, double maxStep) {
+        // the last 1e-12 of the range is kept clear, so that rounding in a walk cannot carry a step's rapidity over
+        double top = maxStep * (1 - 1e-12);
         double lo = 0;
         double hi = Double.POSITIVE_INFINITY;
-        double x = guess > 0 && Double.isFinite(guess) ? guess : 1.0;
+        double x = Math.min(guess > 0 && Double.isFinite(guess) ? guess : 1.0, top);
         double lastStep = Double.NaN;
         for (int i = 0; i < MAX_EVALUATIONS; i++) {
             StraightLineCraft.LineWalk w = probe.apply(x);
@@ -295,8 +300,16 @@ public final class LightCone {
                 lo = x;
                 lastStep = Double.NaN;
             }
-            if (!(next > lo && next < hi)) {
-                next = hi == Double.POSITIVE_INFINITY ? 2 * x : 0.5 * (lo + hi);
+            if (!(next > lo && next < hi && next <= top)) {
+                if (hi < Double.POSITIVE_INFINITY) {
+                    next = 0.5 * (lo + hi);
+                } else if (x < top) {
+                    next = Math.min(2 * x, top);
+                } else {
+                    throw new ArithmeticException("light-cone solve: the signal would reach the craft only where its"
+                            + " state is beyond what double precision can hold (rapidity "
+                            + StraightLineCraft.MAX_RAPIDITY + ")");
+                }
                 lastStep = Double.NaN;
             }
             if (hi < Double.POSITIVE_INFINITY && hi - lo <= RELATIVE_ACCURACY * hi) {
